@@ -1,0 +1,176 @@
+import type { Catalog } from "@/lib/catalog/schema";
+import { formatGauge, parseGauge, scheduleRowSchema, supervisionPreferenceSchema, type ScheduleRow } from "@/lib/schedule/schema";
+
+// Device schedule as CSV (RFC 4180): a header row, then one detector per record.
+
+export const scheduleCsvColumns = ["label", "type", "area", "room", "cable_m", "gauge", "supervision"] as const;
+export type ScheduleCsvColumn = (typeof scheduleCsvColumns)[number];
+const required: readonly ScheduleCsvColumn[] = ["label", "type", "cable_m", "gauge"];
+/** A blank supervision cell means single end-of-line. */
+export const defaultSupervision = "single-eol" as const;
+
+export interface CsvRowError {
+  /** 1-based record number; the header is row 1. */
+  row: number;
+  /** Column name, or null for an error about the whole record or file. */
+  column: ScheduleCsvColumn | null;
+  message: string;
+}
+
+export interface ScheduleCsvParse {
+  rows: ScheduleRow[];
+  /** The 1-based record number of each row in `rows`. */
+  rowNumbers: number[];
+  errors: CsvRowError[];
+}
+
+/** RFC 4180 records. Quoted fields may hold commas, quotes ("") and line breaks; CRLF or LF ends a record. */
+export function parseCsvRecords(text: string): { records: { fields: string[]; quoted: boolean[] }[]; error: string | null } {
+  const records: { fields: string[]; quoted: boolean[] }[] = [];
+  let fields: string[] = [];
+  let quoted: boolean[] = [];
+  let field = "";
+  let isQuoted = false;
+  let inQuotes = false;
+  let afterQuote = false;
+  let i = text.charCodeAt(0) === 0xfeff ? 1 : 0;
+  const endField = () => {
+    fields.push(field);
+    quoted.push(isQuoted);
+    field = "";
+    isQuoted = false;
+    afterQuote = false;
+  };
+  const endRecord = () => {
+    endField();
+    records.push({ fields, quoted });
+    fields = [];
+    quoted = [];
+  };
+  for (; i < text.length; i++) {
+    const c = text[i];
+    if (inQuotes) {
+      if (c === '"') {
+        if (text[i + 1] === '"') {
+          field += '"';
+          i++;
+        } else {
+          inQuotes = false;
+          afterQuote = true;
+        }
+      } else field += c;
+      continue;
+    }
+    if (c === ",") endField();
+    else if (c === "\r" && text[i + 1] === "\n") {
+      endRecord();
+      i++;
+    } else if (c === "\n" || c === "\r") endRecord();
+    else if (c === '"' && field.trim() === "" && !afterQuote) {
+      field = "";
+      inQuotes = true;
+      isQuoted = true;
+    } else if (afterQuote) {
+      if (c !== " " && c !== "\t") return { records, error: `record ${records.length + 1}: text after a closing quote` };
+    } else field += c;
+  }
+  if (inQuotes) return { records, error: `record ${records.length + 1}: a quoted field is never closed` };
+  if (field !== "" || fields.length > 0 || isQuoted) endRecord();
+  return { records, error: null };
+}
+
+function parseNumber(s: string): number | null {
+  const t = s.trim();
+  if (!/^[+]?(\d+([.,]\d*)?|[.,]\d+)([eE][+-]?\d+)?$/.test(t)) return null;
+  return Number(t.replace(",", "."));
+}
+
+/**
+ * Parse a schedule. Every problem is reported with its row and column; rows with errors are left out of `rows`.
+ * Nothing is accepted here: the caller decides what to do when `errors` is not empty.
+ */
+export function parseScheduleCsv(text: string, catalog: Pick<Catalog, "detectors">): ScheduleCsvParse {
+  const out: ScheduleCsvParse = { rows: [], rowNumbers: [], errors: [] };
+  const { records, error } = parseCsvRecords(text);
+  if (error) {
+    out.errors.push({ row: records.length + 1, column: null, message: error });
+    return out;
+  }
+  const header = records[0];
+  if (!header) {
+    out.errors.push({ row: 1, column: null, message: "the file is empty: a header row is needed" });
+    return out;
+  }
+  const index = new Map<ScheduleCsvColumn, number>();
+  header.fields.forEach((h, i) => {
+    const name = h.trim().toLowerCase().replace(/[\s-]+/g, "_") as ScheduleCsvColumn;
+    if (!scheduleCsvColumns.includes(name)) return;
+    if (index.has(name)) out.errors.push({ row: 1, column: name, message: `column ${name} appears twice` });
+    else index.set(name, i);
+  });
+  for (const c of required) if (!index.has(c)) out.errors.push({ row: 1, column: c, message: `the header has no ${c} column` });
+  if (out.errors.length) return out;
+
+  const detectorIds = new Set(catalog.detectors.map((d) => d.id));
+  records.slice(1).forEach((rec, k) => {
+    const row = k + 2;
+    if (rec.fields.every((f, j) => f.trim() === "" && !rec.quoted[j])) return; // blank line
+    const cell = (c: ScheduleCsvColumn) => {
+      const j = index.get(c);
+      if (j === undefined) return "";
+      const v = rec.fields[j] ?? "";
+      return rec.quoted[j] ? v : v.trim();
+    };
+    const errs: CsvRowError[] = [];
+    if (rec.fields.length > header.fields.length)
+      errs.push({ row, column: null, message: `${rec.fields.length} fields, the header has ${header.fields.length}` });
+    const type = cell("type").trim();
+    if (type === "") errs.push({ row, column: "type", message: "no detector type" });
+    else if (!detectorIds.has(type)) errs.push({ row, column: "type", message: `${type} is not a detector in the catalog` });
+    const cableText = cell("cable_m");
+    const cableM = parseNumber(cableText);
+    if (cableM === null) errs.push({ row, column: "cable_m", message: cableText.trim() === "" ? "no cable length" : `"${cableText}" is not a number of metres` });
+    const gaugeText = cell("gauge");
+    const gauge = parseGauge(gaugeText);
+    if (!gauge) errs.push({ row, column: "gauge", message: `"${gaugeText}" is not a gauge; write e.g. "22 AWG" or "0.5 mm2"` });
+    const supText = cell("supervision").trim().toLowerCase();
+    const sup = supText === "" ? { success: true as const, data: defaultSupervision } : supervisionPreferenceSchema.safeParse(supText);
+    if (!sup.success)
+      errs.push({ row, column: "supervision", message: `"${supText}" is not one of ${supervisionPreferenceSchema.options.join(", ")}` });
+    if (errs.length === 0) {
+      const parsed = scheduleRowSchema.safeParse({
+        label: cell("label"),
+        catalogId: type,
+        area: cell("area"),
+        room: cell("room"),
+        cableM,
+        gauge,
+        supervision: sup.data,
+      });
+      if (parsed.success) {
+        out.rows.push(parsed.data);
+        out.rowNumbers.push(row);
+      } else
+        for (const issue of parsed.error.issues) {
+          const key = String(issue.path[0] ?? "");
+          const column: ScheduleCsvColumn | null =
+            key === "catalogId" ? "type" : key === "cableM" ? "cable_m" : (scheduleCsvColumns as readonly string[]).includes(key) ? (key as ScheduleCsvColumn) : null;
+          errs.push({ row, column, message: issue.message });
+        }
+    }
+    out.errors.push(...errs);
+  });
+  return out;
+}
+
+function quote(v: string): string {
+  return /[",\r\n]|^\s|\s$/.test(v) ? `"${v.replace(/"/g, '""')}"` : v;
+}
+
+/** Serialize rows with the header; CRLF between records as RFC 4180 asks. */
+export function serializeScheduleCsv(rows: readonly ScheduleRow[]): string {
+  const lines = [scheduleCsvColumns.join(",")];
+  for (const r of rows)
+    lines.push([r.label, r.catalogId, r.area, r.room, String(r.cableM), formatGauge(r.gauge), r.supervision].map(quote).join(","));
+  return lines.join("\r\n") + "\r\n";
+}
