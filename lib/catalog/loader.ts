@@ -1,6 +1,7 @@
 import { dump, load } from "js-yaml";
 import type { z } from "zod";
 import { entryIssues } from "./entry-rules";
+import { kindLabel } from "./kinds";
 import { formatPath, sortErrors, type CatalogError, type CatalogPath } from "./errors";
 import { buildPositionIndex, countLines, type PositionIndex } from "./positions";
 import {
@@ -19,6 +20,7 @@ import {
 
 export { catalogDiff, type CatalogDiff, type ChangedEntry } from "./diff";
 export type { CatalogError, CatalogPath } from "./errors";
+export { kindLabel } from "./kinds";
 
 /** One parsed file, kept with its position index so later cross-file checks can still point at lines. */
 export interface CatalogSource {
@@ -57,14 +59,6 @@ interface EntryTypes {
 export type CatalogEntry = EntryTypes[CatalogKind];
 export type FoundEntry = { [K in CatalogKind]: { kind: K; entry: EntryTypes[K] } }[CatalogKind];
 
-export const kindLabel: Record<CatalogKind, string> = {
-  inputTypes: "input type",
-  panels: "control panel",
-  expansionBoards: "expansion board",
-  keypads: "keypad",
-  powerSupplies: "power supply",
-  detectors: "detector",
-};
 
 const unitOf: [RegExp, string][] = [
   [/Ohms$/, "ohms"],
@@ -241,6 +235,8 @@ function locateCatalog(catalog: Catalog, sources: CatalogSource[]): LocatedEntry
   return out;
 }
 
+const withArticle = (word: string) => `${/^[aeiou]/.test(word) ? "an" : "a"} ${word}`;
+
 const fallbackPositions: PositionIndex = { lineCount: 1, has: () => false, locate: () => ({ line: 1, column: 1 }) };
 
 /**
@@ -301,7 +297,7 @@ export function effectiveCatalog(shipped: LoadedCatalog, orgFile?: CatalogSource
       merged.push(e);
       added.push({ kind: e.kind, id });
     } else if (merged[i].kind !== e.kind) {
-      errors.push({ ...here(), message: `id "${id}" is a ${kindLabel[merged[i].kind]} in the shipped catalog; an override must be of the same kind` });
+      errors.push({ ...here(), message: `id "${id}" is ${withArticle(kindLabel[merged[i].kind])} in the shipped catalog; an override must be of the same kind` });
     } else {
       merged[i] = e;
       overridden.push({ kind: e.kind, id });
