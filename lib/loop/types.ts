@@ -1,5 +1,5 @@
 import type { ContactType, InputType, Report, WiringScheme } from "@/lib/catalog/schema";
-import type { Finding } from "@/lib/findings";
+import type { Finding, FindingTarget } from "@/lib/findings";
 
 /** Where the end-of-line resistor(s) are physically and electrically fitted. */
 export type Placement =
@@ -40,6 +40,8 @@ export interface LoopSpec {
   cable: CableSpec;
   /** Resistance of one closed contact, ohms. */
   contactOhms: number;
+  /** Resistance of an injected short (the fault itself), ohms; default 0. */
+  shortOhms?: number;
 }
 
 export type DetectorState = "rest" | "active" | "tamper";
@@ -60,6 +62,10 @@ export interface Reading {
   marginOhms: number;
   /** What a correctly supervised loop should report here. */
   expected: Report;
+  /** Parts at their marked values, cable at the middle of its temperature range (always set by analyzeLoop). */
+  nominalOhms?: number;
+  /** Plain description of the row, e.g. "Front door active, short at the detector end" (always set by analyzeLoop). */
+  label?: string;
 }
 
 export interface ResistorUse {
@@ -83,6 +89,15 @@ export interface LoopAnalysis {
   maxCableM: number | null;
   /** Shared inputs only: the decode table of the four state combinations. */
   decode?: { states: DetectorState[]; minOhms: number; maxOhms: number; report: Report; unique: boolean }[];
+  /** False when the loop description itself is impossible (see findings); rows are then empty and faults read "defeat". */
+  valid?: boolean;
+  /** Resistance of the conductors in the loop path over the temperature range (4 conductors for loop-back). */
+  conductorOhms?: { minOhms: number; maxOhms: number };
+  /** The longest one-way run before the conductors exceed the input type's maxLoopOhms at the hottest temperature. */
+  maxCableByLoopOhmsM?: number | null;
+  /** Shared inputs only: what is lost compared with one detector per input, in plain words. */
+  sharedLost?: string[];
 }
 
-export type AnalyzeLoop = (loop: LoopSpec, inputType: InputType) => LoopAnalysis;
+/** `target` is where findings point (default `{ kind: "layout" }`). */
+export type AnalyzeLoop = (loop: LoopSpec, inputType: InputType, target?: FindingTarget) => LoopAnalysis;

@@ -1,0 +1,159 @@
+// The loop supervision engine: every state × fault combination as a reading interval, its report,
+// and verdicts on what the panel can and cannot see.
+import type { InputType, Report } from "@/lib/catalog/schema";
+import { reportSchema } from "@/lib/catalog/schema";
+import type { Finding, FindingTarget } from "@/lib/findings";
+import { conductorAt, compileLoop, encodeStates, enumerateStates, evalReading, FAULTS, SCHEME_SHARED, STATE_ACTIVE, STATE_TAMPER, type LoopModel } from "./loop-model";
+import { bandIndex, compileBands, marginOf, reportsBetween } from "./loop-bands";
+import { loopProblems, type LoopProblem } from "./loop-problems";
+import { maxCableRun, type CableRow } from "./max-cable";
+import { FAULT_WORDS, statesLabel } from "./row-labels";
+import { buildFindings } from "./loop-findings";
+import { resistorUses } from "./resistor-uses";
+import type { Fault, LoopAnalysis, LoopSpec, Reading } from "./types";
+
+const LAYOUT: FindingTarget = { kind: "layout" };
+const REPORT_BIT: Record<Report, number> = Object.fromEntries(reportSchema.options.map((r, i) => [r, 1 << i])) as Record<Report, number>;
+
+/** Reports that count as a fault or tamper being seen for what it is. */
+export function acceptableFor(expected: Report): number {
+  if (expected === "short") return REPORT_BIT.short | REPORT_BIT.trouble;
+  if (expected === "open") return REPORT_BIT.open | REPORT_BIT.trouble;
+  return REPORT_BIT[expected];
+}
+
+export function maskOf(reports: readonly Report[]): number {
+  let m = 0;
+  for (const r of reports) m |= REPORT_BIT[r];
+  return m;
+}
+
+function expectedFor(m: LoopModel, code: Uint8Array): Report {
+  let active = 0;
+  for (let i = 0; i < code.length; i++) {
+    if (code[i] === STATE_TAMPER) return "open";
+    if (code[i] === STATE_ACTIVE) active++;
+  }
+  if (m.scheme === SCHEME_SHARED) {
+    if (code[0] === STATE_ACTIVE && code[1] === STATE_ACTIVE) return "active-both";
+    if (code[0] === STATE_ACTIVE) return "active-a";
+    if (code[1] === STATE_ACTIVE) return "active-b";
+    return "normal";
+  }
+  return active > 0 ? "active" : "normal";
+}
+
+function invalidAnalysis(problems: LoopProblem[], target: FindingTarget): LoopAnalysis {
+  return {
+    rows: [],
+    findings: problems.map((p) => ({
+      code: "loop-invalid",
+      severity: "error",
+      message: `${p.path.join(".") || "loop"}: ${p.message}`,
+      why: "The loop as described can't be wired or measured, so nothing about its supervision can be said until this is fixed.",
+      target,
+    })),
+    resistors: [],
+    faults: { "short-panel": "defeat", "short-detector": "defeat", cut: "defeat" },
+    indistinguishable: [],
+    maxCableM: null,
+    valid: false,
+  };
+}
+
+export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: FindingTarget = LAYOUT): LoopAnalysis {
+  const problems = loopProblems(loop, inputType);
+  if (problems.length) return invalidAnalysis(problems, target);
+  const m = compileLoop(loop, inputType);
+  const cb = compileBands(inputType.bands[loop.scheme]!);
+  const rcLo = conductorAt(m, m.tMin);
+  const rcHi = conductorAt(m, m.tMax);
+  const rcNom = conductorAt(m, (m.tMin + m.tMax) / 2);
+  const lo = 1 - m.tol;
+  const hi = 1 + m.tol;
+  const eLo = m.eol * lo, aLo = m.alarm * lo, saLo = m.sa * lo, sbLo = m.sb * lo;
+  const eHi = m.eol * hi, aHi = m.alarm * hi, saHi = m.sa * hi, sbHi = m.sb * hi;
+
+  const combos = enumerateStates(loop.detectors);
+  const rows: Reading[] = [];
+  const masks: number[] = [];
+  const cableRows: CableRow[] = [];
+  for (const states of combos) {
+    const code = encodeStates(states);
+    const exp0 = expectedFor(m, code);
+    const sl = statesLabel(loop.detectors, states);
+    for (let f = 0; f < 4; f++) {
+      const minOhms = evalReading(m, code, f, rcLo, eLo, aLo, saLo, sbLo);
+      const maxOhms = evalReading(m, code, f, rcHi, eHi, aHi, saHi, sbHi);
+      const nominalOhms = evalReading(m, code, f, rcNom, m.eol, m.alarm, m.sa, m.sb);
+      const iLo = bandIndex(cb, minOhms);
+      const iHi = bandIndex(cb, maxOhms);
+      const reports = reportsBetween(cb, iLo, iHi);
+      const fault: Fault = FAULTS[f];
+      const expected: Report = f === 0 ? exp0 : f === 3 ? "open" : "short";
+      const mask = maskOf(reports);
+      rows.push({
+        states,
+        fault,
+        minOhms,
+        maxOhms,
+        reports,
+        uncertain: iLo !== iHi,
+        marginOhms: marginOf(cb, iLo, iHi, minOhms, maxOhms),
+        expected,
+        nominalOhms,
+        label: f === 0 ? sl : `${FAULT_WORDS[fault]} (${sl})`,
+      });
+      masks.push(mask);
+      if (iLo === iHi && (mask & ~acceptableFor(expected)) === 0 && maxOhms < Infinity)
+        cableRows.push({ code, fault: f, maxOhms, edgeOhms: cb.to[iHi] });
+    }
+  }
+
+  const faults = { "short-panel": "detected", "short-detector": "detected", cut: "detected" } as LoopAnalysis["faults"];
+  for (let f = 1; f < 4; f++) {
+    let verdict: "detected" | "mistaken" | "defeat" = "detected";
+    for (let i = f; i < rows.length; i += 4) {
+      if (masks[i] & REPORT_BIT.normal) {
+        verdict = "defeat";
+        break;
+      }
+      if (masks[i] & ~acceptableFor(rows[i].expected)) verdict = "mistaken";
+    }
+    faults[FAULTS[f] as Exclude<Fault, "none">] = verdict;
+  }
+
+  const indistinguishable: Array<[number, number]> = [];
+  for (let i = 0; i < rows.length; i++)
+    for (let j = i + 1; j < rows.length; j++)
+      if ((masks[i] & masks[j]) !== 0 && rows[i].expected !== rows[j].expected) indistinguishable.push([i, j]);
+
+  const conductorOhms = { minOhms: m.conductors * rcLo, maxOhms: m.conductors * rcHi };
+  const hotPerM = conductorAt(m, m.tMax, 1);
+  const analysis: LoopAnalysis = {
+    rows,
+    findings: [],
+    resistors: resistorUses(loop, inputType),
+    faults,
+    indistinguishable,
+    maxCableM: maxCableRun(m, cableRows, hi),
+    valid: true,
+    conductorOhms,
+    maxCableByLoopOhmsM: hotPerM > 0 ? inputType.maxLoopOhms / (m.conductors * hotPerM) : null,
+  };
+  if (m.scheme === SCHEME_SHARED) {
+    const decodeRows = [0, 1, 2, 3].map((k) => {
+      const want = [k & 1 ? "active" : "rest", k & 2 ? "active" : "rest"];
+      return rows.findIndex((r) => r.fault === "none" && r.states[0] === want[0] && r.states[1] === want[1]);
+    });
+    analysis.decode = decodeRows.map((i, k) => {
+      const r = rows[i];
+      const others = decodeRows.filter((_, kk) => kk !== k).reduce((acc, j) => acc | masks[j], 0);
+      const report = r.reports.length === 1 ? r.reports[0] : cb.reports[bandIndex(cb, r.nominalOhms!)];
+      return { states: r.states, minOhms: r.minOhms, maxOhms: r.maxOhms, report, unique: r.reports.length === 1 && (masks[i] & others) === 0 };
+    });
+  }
+  const findings: Finding[] = buildFindings({ loop, inputType, model: m, rows, masks, analysis }, target);
+  analysis.findings = findings;
+  return analysis;
+}

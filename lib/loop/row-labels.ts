@@ -1,0 +1,44 @@
+// Plain descriptions of a row and of a report, for findings and the loop bench.
+import type { Report } from "@/lib/catalog/schema";
+import type { DetectorState, Fault, LoopDetector } from "./types";
+
+export const FAULT_WORDS: Record<Fault, string> = {
+  none: "",
+  "short-panel": "a short across the pair at the panel end",
+  "short-detector": "a short across the pair at the detector end",
+  cut: "one conductor cut",
+};
+
+export const REPORT_WORDS: Record<Report, string> = {
+  short: "short",
+  normal: "normal",
+  active: "active (alarm)",
+  "active-a": "detector A active",
+  "active-b": "detector B active",
+  "active-both": "both detectors active",
+  open: "open",
+  trouble: "trouble",
+};
+
+export function statesLabel(detectors: readonly LoopDetector[], states: readonly DetectorState[]): string {
+  const active: string[] = [];
+  const tampered: string[] = [];
+  for (let i = 0; i < states.length; i++) {
+    if (states[i] === "active") active.push(detectors[i].label);
+    else if (states[i] === "tamper") tampered.push(detectors[i].label);
+  }
+  if (active.length === 0 && tampered.length === 0) return "all at rest";
+  const parts: string[] = [];
+  if (active.length) parts.push(active.length === states.length && states.length > 2 ? "all active" : `${active.join(" and ")} active`);
+  if (tampered.length) parts.push(`${tampered.join(" and ")} tamper open`);
+  return parts.join(", ");
+}
+
+export function rowLabel(detectors: readonly LoopDetector[], states: readonly DetectorState[], fault: Fault): string {
+  const s = statesLabel(detectors, states);
+  return fault === "none" ? s : `${FAULT_WORDS[fault]} (${s})`;
+}
+
+export function reportsWords(reports: readonly Report[]): string {
+  return reports.map((r) => REPORT_WORDS[r]).join(" or ");
+}
