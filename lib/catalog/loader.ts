@@ -1,4 +1,4 @@
-import { dump, load } from "js-yaml";
+import { constructFromEvents, dump, parseEvents, type Event } from "js-yaml";
 import type { z } from "zod";
 import { entryIssues } from "./entry-rules";
 import { kindLabel } from "./kinds";
@@ -113,12 +113,18 @@ function yamlError(e: unknown, fileName: string, text: string): CatalogError {
  */
 export function parseCatalogFile(text: string, fileName: string): ParseResult {
   let data: unknown;
+  let events: Event[];
   try {
-    data = load(text, { filename: fileName });
+    // one parse gives both the data and, from the same events, the positions
+    events = parseEvents(text, { filename: fileName });
+    const docs = constructFromEvents(events, { source: text, filename: fileName });
+    if (docs.length !== 1)
+      return { ok: false, errors: [{ file: fileName, line: 1, column: 1, path: "", message: docs.length ? "one YAML document per file (found a `---` separator)" : "the file is empty" }] };
+    data = docs[0];
   } catch (e) {
     return { ok: false, errors: [yamlError(e, fileName, text)] };
   }
-  const positions = buildPositionIndex(text);
+  const positions = buildPositionIndex(text, events);
   const parsed = catalogFileSchema.safeParse(data);
   if (!parsed.success) {
     const errors: CatalogError[] = [];

@@ -66,13 +66,33 @@ function nodeStart(ev: Event): number {
   return -1;
 }
 
-/** Build the index; never throws (an unparsable text gives an index that only knows the file start). */
-export function buildPositionIndex(text: string): PositionIndex {
-  const starts = lineStarts(text);
+/**
+ * Build the index, lazily on first use, from the text's events (pass them if already parsed).
+ * Never throws: an unparsable text gives an index that only knows the file start.
+ */
+export function buildPositionIndex(text: string, parsedEvents?: Event[]): PositionIndex {
   const lineCount = countLines(text);
+  let built: { starts: number[]; offsets: Map<string, number> } | null = null;
+  const index = () => (built ??= indexOffsets(text, parsedEvents));
+  return {
+    lineCount,
+    has: (path) => index().offsets.has(key(path)),
+    locate(path) {
+      const { starts, offsets } = index();
+      for (let n = path.length; n >= 0; n--) {
+        const off = offsets.get(key(path.slice(0, n)));
+        if (off !== undefined) return offsetToPosition(starts, lineCount, off);
+      }
+      return { line: 1, column: 1 };
+    },
+  };
+}
+
+function indexOffsets(text: string, parsedEvents?: Event[]): { starts: number[]; offsets: Map<string, number> } {
+  const starts = lineStarts(text);
   const offsets = new Map<string, number>();
   try {
-    const events = parseEvents(text, {});
+    const events = parsedEvents ?? parseEvents(text, {});
     const stack: Frame[] = [];
     for (const ev of events) {
       if (ev.type === EVENT_ID.DOCUMENT) {
@@ -135,15 +155,5 @@ export function buildPositionIndex(text: string): PositionIndex {
     } else if (f.kind === "seq") f.index++;
   }
 
-  return {
-    lineCount,
-    has: (path) => offsets.has(key(path)),
-    locate(path) {
-      for (let n = path.length; n >= 0; n--) {
-        const off = offsets.get(key(path.slice(0, n)));
-        if (off !== undefined) return offsetToPosition(starts, lineCount, off);
-      }
-      return { line: 1, column: 1 };
-    },
-  };
+  return { starts, offsets };
 }
