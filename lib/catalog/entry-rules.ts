@@ -1,5 +1,5 @@
 import type { CatalogPath } from "./errors";
-import { expectedReadings } from "./expected-readings";
+import { expectedReadings, type ExpectedReading } from "./expected-readings";
 import type { Band, CatalogKind, Detector, InputType, Panel, WiringScheme } from "./schema";
 
 /** A rule broken by one entry. `path` is the field at fault; `at` where to point in the file if it differs (a missing field). */
@@ -66,17 +66,24 @@ export function inputTypeIssues(it: InputType): EntryIssue[] {
     if (scheme === "shared" && it.sharedOhms && it.sharedOhms[0] === it.sharedOhms[1]) continue;
     const expected = expectedReadings(it, scheme);
     if (!expected) continue; // the missing value is reported above
-    for (const e of expected) {
+    const misread = (readings: ExpectedReading[]) =>
+      readings.filter((e) => {
+        const b = bands[bandIndexAt(bands, e.nominalOhms)];
+        return !(b.report === e.report && b.fromOhms <= e.minOhms && (b.toOhms === null || e.maxOhms < b.toOhms));
+      });
+    const wrong = misread(expected);
+    // a double end-of-line table may be laid out for NO contacts instead (fire zones)
+    if (wrong.length && scheme === "double-eol" && misread(expectedReadings(it, scheme, "NO")!).length === 0) continue;
+    for (const e of wrong) {
       const i = bandIndexAt(bands, e.nominalOhms);
       const b = bands[i];
-      const holds = b.report === e.report && b.fromOhms <= e.minOhms && (b.toOhms === null || e.maxOhms < b.toOhms);
-      if (!holds)
-        issues.push({
-          path: ["bands", scheme, i],
-          message:
-            `a sound loop ${stateText[e.state]}` +
-            ` reads ${fmt(e.minOhms)}–${fmt(e.maxOhms)} (±${it.tolerancePct} %, up to ${fmt(it.maxLoopOhms)} of loop) and must fall wholly in one "${e.report}" band; band ${i} is ${bandText(b)}`,
-        });
+      issues.push({
+        path: ["bands", scheme, i],
+        message:
+          `a sound loop ${stateText[e.state]}` +
+          ` reads ${fmt(e.minOhms)}–${fmt(e.maxOhms)} (±${it.tolerancePct} %, up to ${fmt(it.maxLoopOhms)} of loop) and must fall wholly in one "${e.report}" band; band ${i} is ${bandText(b)}` +
+          (scheme === "double-eol" ? " (nor does the table read normally open contacts, rest at eol + alarm, active at eol)" : ""),
+      });
     }
   }
   return issues;

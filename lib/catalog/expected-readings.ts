@@ -1,4 +1,4 @@
-import type { InputType, Report, WiringScheme } from "./schema";
+import type { ContactType, InputType, Report, WiringScheme } from "./schema";
 
 /** One reading an input type expects under a scheme, with the spread from part tolerance and loop resistance. */
 export interface ExpectedReading {
@@ -14,8 +14,13 @@ export interface ExpectedReading {
  * The readings an input type's own resistor values give on a sound loop. The spread is the part
  * tolerance either way plus up to `maxLoopOhms` of cable (cable only ever adds). Returns null when a
  * scheme lacks the values it needs.
+ *
+ * `contact` matters for double end-of-line only: with NC contacts the alarm resistor is shorted at rest
+ * (rest = eol, active = eol + alarm); with NO contacts it is in circuit at rest (rest = eol + alarm,
+ * active = eol), the usual way round for a fire zone. Single end-of-line is checked at rest only; shared
+ * inputs assume NC contacts.
  */
-export function expectedReadings(it: InputType, scheme: WiringScheme): ExpectedReading[] | null {
+export function expectedReadings(it: InputType, scheme: WiringScheme, contact: ContactType = "NC"): ExpectedReading[] | null {
   const tol = it.tolerancePct / 100;
   const at = (state: ExpectedReading["state"], report: Report, ohms: number): ExpectedReading => ({
     state,
@@ -32,7 +37,9 @@ export function expectedReadings(it: InputType, scheme: WiringScheme): ExpectedR
     case "double-eol":
       return it.eolOhms === undefined || it.alarmOhms === undefined
         ? null
-        : [at("rest", "normal", it.eolOhms), at("active", "active", it.eolOhms + it.alarmOhms)];
+        : contact === "NC"
+          ? [at("rest", "normal", it.eolOhms), at("active", "active", it.eolOhms + it.alarmOhms)]
+          : [at("rest", "normal", it.eolOhms + it.alarmOhms), at("active", "active", it.eolOhms)];
     case "shared": {
       if (it.eolOhms === undefined || !it.sharedOhms) return null;
       const [a, b] = it.sharedOhms;

@@ -106,6 +106,21 @@ describe("parseCatalogFile", () => {
     expect(e.message).toContain("4465 Ω–5035 Ω");
   });
 
+  it("accepts a double end-of-line table laid out for NO contacts, and refuses one that fits neither way round", () => {
+    // NO contacts: rest reads eol + alarm (9 kΩ), active reads eol (2.2 kΩ)
+    const no = edit(
+      edit(schemesYaml, "normal, fromOhms: 1000, toOhms: 4000", "active, fromOhms: 1000, toOhms: 4000"),
+      "active, fromOhms: 4000, toOhms: 12000",
+      "normal, fromOhms: 4000, toOhms: 12000",
+    );
+    expect(parseCatalogFile(no, "f.yaml").ok).toBe(true);
+    const neither = edit(schemesYaml, "active, fromOhms: 4000, toOhms: 12000", "trouble, fromOhms: 4000, toOhms: 12000");
+    const [e, ...rest] = errorsOf(neither);
+    expect(rest).toEqual([]);
+    expect(e).toMatchObject({ line: 14, column: 11, path: "inputTypes.0.bands.double-eol.2" });
+    expect(e.message).toContain("8550 Ω–9550 Ω");
+  });
+
   it("refuses a scheme listed without its band table", () => {
     const [e] = errorsOf(edit(inputTypesYaml, "schemes: [single-eol]", "schemes: [none, single-eol]"));
     expect(e).toMatchObject({ line: 9, column: 5, path: "inputTypes.0.bands.none" });

@@ -64,6 +64,16 @@ describe("the shipped catalog", () => {
     expect(shared.length).toBeGreaterThan(0);
     for (const t of shared) expect(t.sharedOhms![0]).not.toBe(t.sharedOhms![1]);
     expect(catalog.inputTypes.some((t) => t.lifeSafety)).toBe(true);
+    // a fire zone reports a short and a cut as themselves, never as an alarm: NO detectors on double end-of-line
+    for (const t of catalog.inputTypes.filter((x) => x.lifeSafety)) {
+      expect(t.schemes).toEqual(["double-eol"]);
+      const [rest, alarm] = expectedReadings(t, "double-eol", "NO")!;
+      const report = (ohms: number) => t.bands["double-eol"]!.find((b) => ohms >= b.fromOhms && (b.toOhms === null || ohms < b.toOhms))!.report;
+      expect(report(0)).toBe("short");
+      expect(report(1e9)).toBe("open");
+      expect(report(rest.nominalOhms)).toBe("normal");
+      expect(report(alarm.nominalOhms)).toBe("active");
+    }
     // fire devices only through an input type that allows them
     const fireBoards = catalog.expansionBoards.filter((b) => inputType(b.inputs.inputType).lifeSafety);
     expect(fireBoards.length).toBeGreaterThan(0);
@@ -84,7 +94,9 @@ describe("the shipped catalog", () => {
     for (const t of catalog.inputTypes)
       for (const scheme of t.schemes) {
         const bands = t.bands[scheme]!;
-        for (const e of expectedReadings(t, scheme)!) {
+        // fire zones carry NO detectors: their double end-of-line table reads the NO way round
+        const contact = t.lifeSafety && scheme === "double-eol" ? "NO" : "NC";
+        for (const e of expectedReadings(t, scheme, contact)!) {
           const band = bands.find((b) => b.fromOhms <= e.minOhms && (b.toOhms === null || e.maxOhms < b.toOhms));
           expect(band?.report, `${t.id} ${scheme} ${e.state}`).toBe(e.report);
         }
