@@ -1,0 +1,83 @@
+import type { Finding } from "@/lib/findings";
+import type { ScheduleDetector } from "@/lib/schedule/schema";
+import { plural } from "@/lib/solver/format";
+import { unplacedFinding, type Resolved } from "@/lib/solver/resolve";
+import type { BoardFigures, CapacityTotals } from "@/lib/solver/types";
+
+// Inputs used per board and in total, zones against the panel, detectors per input.
+
+export function checkInputContents(r: Resolved, out: Finding[]): void {
+  for (const ri of r.inputs) {
+    const { input } = ri;
+    const target = { kind: "input" as const, boardKey: input.boardKey, input: input.input };
+    const where = `${ri.board.name}, input ${input.input}`;
+    const n = input.detectorIds.length;
+    const allowed = input.scheme === "shared" ? 2 : 1;
+    if (n > allowed)
+      out.push({
+        code: "input-too-many-detectors",
+        severity: "error",
+        message: `${where} holds ${n} detectors; a ${input.scheme} input takes ${allowed}`,
+        why: input.scheme === "shared" ? "A shared input tells two detectors apart by their resistors; a third cannot be decoded." : "The panel would report them as one zone, so nobody could tell which one tripped. Make it a shared input where the input type allows it, or give each its own input.",
+        target,
+      });
+    if (input.scheme === "shared" && n < 2)
+      out.push({
+        code: "shared-needs-two",
+        severity: "error",
+        message: `${where} is wired as a shared input with only one detector`,
+        why: "The shared scheme's bands expect two detectors' resistors; with one, its readings land in the wrong bands. Wire it single or double end-of-line.",
+        target,
+      });
+    const type = ri.board.inputType;
+    if (type && !type.schemes.includes(input.scheme))
+      out.push({
+        code: "scheme-not-supported",
+        severity: "error",
+        message: `${where} is wired ${input.scheme}, which ${type.name} does not accept (it takes ${type.schemes.join(", ")})`,
+        why: "The input has no bands for this scheme, so its readings would be misread.",
+        target,
+      });
+  }
+}
+
+export function capacityFigures(r: Resolved, schedule: ScheduleDetector[], out: Finding[]): { boards: BoardFigures[]; totals: CapacityTotals } {
+  const used = new Map<string, { inputs: number; detectors: number }>();
+  for (const ri of r.inputs) {
+    const u = used.get(ri.board.key) ?? { inputs: 0, detectors: 0 };
+    u.inputs++;
+    u.detectors += ri.detectors.length;
+    used.set(ri.board.key, u);
+  }
+  const boards: BoardFigures[] = r.boards.map((b) => {
+    const u = used.get(b.key) ?? { inputs: 0, detectors: 0 };
+    return {
+      boardKey: b.key,
+      kind: b.board?.kind ?? "panel",
+      catalogId: b.board?.catalogId ?? r.panel.id,
+      name: b.name,
+      inputsTotal: b.inputCount,
+      inputsUsed: u.inputs,
+      inputsFree: Math.max(0, b.inputCount - u.inputs),
+      detectors: u.detectors,
+    };
+  });
+  const inputsTotal = boards.reduce((s, b) => s + b.inputsTotal, 0);
+  const inputsUsed = boards.reduce((s, b) => s + b.inputsUsed, 0);
+  const zonesUsed = boards.reduce((s, b) => s + b.detectors, 0);
+  const unplaced = schedule.filter((d) => !r.placed.has(d.id));
+  if (zonesUsed > r.panel.maxZones)
+    out.push({
+      code: "zones-over-panel",
+      severity: "error",
+      message: `${plural(zonesUsed, "zone")} placed; ${r.panel.name} reports at most ${r.panel.maxZones}`,
+      why: "The panel cannot report the extra detectors as zones of their own, so they would never reach anyone. Choose a larger panel or fewer detectors.",
+      target: { kind: "layout" },
+    });
+  const un = unplacedFinding(unplaced);
+  if (un) out.push(un);
+  return {
+    boards,
+    totals: { inputsTotal, inputsUsed, inputsFree: Math.max(0, inputsTotal - inputsUsed), zonesUsed, maxZones: r.panel.maxZones, detectorsPlaced: zonesUsed, unplacedIds: unplaced.map((d) => d.id) },
+  };
+}

@@ -1,0 +1,18 @@
+// Figures in messages: a few significant digits, never a long float tail.
+
+export function fmt(n: number, digits = 3): string {
+  if (!Number.isFinite(n)) return String(n);
+  if (Number.isInteger(n)) return String(n);
+  const a = Math.abs(n);
+  const d = a >= 100 ? 1 : a >= 10 ? Math.max(1, digits - 2) : digits - 1;
+  return String(Number(n.toFixed(d)));
+}
+
+export function plural(n: number, one: string, many = `${one}s`): string {
+  return `${n} ${n === 1 ? one : many}`;
+}
+
+export function listNames(names: string[], max = 3): string {
+  if (names.length <= max) return names.join(", ");
+  return `${names.slice(0, max).join(", ")} and ${names.length - max} more`;
+}

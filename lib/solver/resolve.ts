@@ -1,0 +1,171 @@
+import type { Detector, InputType, Panel } from "@/lib/catalog/schema";
+import type { Finding } from "@/lib/findings";
+import { boardEntry, boardInputs, type BoardEntry, type CatalogIndex } from "@/lib/layout/catalog-index";
+import { boardNames } from "@/lib/layout/names";
+import { PANEL_KEY, type LayoutBoard, type LayoutDocument, type LayoutInput } from "@/lib/layout/schema";
+import type { ScheduleDetector } from "@/lib/schedule/schema";
+import { listNames } from "@/lib/solver/format";
+
+// Ties a layout to the catalog and the schedule, and reports what does not tie up.
+
+export interface ResolvedBoard {
+  key: string;
+  name: string;
+  /** null for the control panel. */
+  board: LayoutBoard | null;
+  entry: BoardEntry | null;
+  inputCount: number;
+  inputType: InputType | undefined;
+  inputTypeId: string | null;
+}
+
+export interface PlacedDetector {
+  sched: ScheduleDetector;
+  cat: Detector;
+}
+
+export interface ResolvedInput {
+  input: LayoutInput;
+  board: ResolvedBoard;
+  detectors: PlacedDetector[];
+}
+
+export interface Resolved {
+  layout: LayoutDocument;
+  panel: Panel;
+  ix: CatalogIndex;
+  names: Map<string, string>;
+  /** The panel first, then boards in layout order. */
+  boards: ResolvedBoard[];
+  byKey: Map<string, ResolvedBoard>;
+  /** Inputs holding at least one known detector, on an existing board, within its input count, first occurrence only. */
+  inputs: ResolvedInput[];
+  placed: Set<string>;
+}
+
+export const isLifeSafety = (d: Detector) => d.lifeSafety || d.category === "smoke" || d.category === "heat";
+
+export function resolveLayout(
+  layout: LayoutDocument,
+  ix: CatalogIndex,
+  schedule: Map<string, ScheduleDetector>,
+  out: Finding[],
+): Resolved | null {
+  const panel = ix.panels.get(layout.panelId);
+  if (!panel) {
+    out.push({
+      code: "panel-unknown",
+      severity: "error",
+      message: `Control panel ${layout.panelId} is not in the catalog`,
+      why: "Without the panel's figures nothing else in the layout can be checked.",
+      target: { kind: "layout" },
+    });
+    return null;
+  }
+  const names = boardNames(layout);
+  const panelType = ix.inputTypes.get(panel.onboardInputs.inputType);
+  const panelBoard: ResolvedBoard = {
+    key: PANEL_KEY,
+    name: "Control panel",
+    board: null,
+    entry: null,
+    inputCount: panel.onboardInputs.count,
+    inputType: panelType,
+    inputTypeId: panel.onboardInputs.inputType,
+  };
+  const boards: ResolvedBoard[] = [panelBoard];
+  const byKey = new Map<string, ResolvedBoard>([[PANEL_KEY, panelBoard]]);
+  for (const b of layout.boards) {
+    const name = names.get(b.key) ?? b.key;
+    const target = { kind: "board" as const, boardKey: b.key };
+    if (byKey.has(b.key)) {
+      out.push({ code: "board-key-duplicate", severity: "error", message: `Board key ${b.key} is used twice`, why: "Inputs name their board by key; two boards with one key cannot be told apart.", target });
+      continue;
+    }
+    const entry = boardEntry(ix, b.kind, b.catalogId);
+    if (!entry)
+      out.push({ code: "board-unknown", severity: "error", message: `${name}: ${b.catalogId} is not a ${b.kind} board in the catalog`, why: "Its inputs, current and bus use are unknown, so they are left out of every total.", target });
+    else if (!entry.entry.families.includes(panel.family))
+      out.push({
+        code: "board-family-mismatch",
+        severity: "error",
+        message: `${name} (${entry.entry.name}) works with ${entry.entry.families.join(", ")}, not with the ${panel.family} family of ${panel.name}`,
+        why: "A board from another family does not speak this panel's data bus.",
+        target,
+      });
+    if (entry && ix.inputTypes.get(boardInputs(entry)?.inputType ?? "") === undefined && boardInputs(entry))
+      out.push({ code: "input-type-unknown", severity: "error", message: `${name}: input type ${boardInputs(entry)?.inputType} is not in the catalog`, why: "Its inputs cannot be checked.", target });
+    const block = entry ? boardInputs(entry) : null;
+    const rb: ResolvedBoard = { key: b.key, name, board: b, entry, inputCount: block?.count ?? 0, inputType: block ? ix.inputTypes.get(block.inputType) : undefined, inputTypeId: block?.inputType ?? null };
+    boards.push(rb);
+    byKey.set(b.key, rb);
+  }
+  if (!panelType)
+    out.push({ code: "input-type-unknown", severity: "error", message: `Control panel: input type ${panel.onboardInputs.inputType} is not in the catalog`, why: "Its inputs cannot be checked.", target: { kind: "board", boardKey: PANEL_KEY } });
+
+  const inputs: ResolvedInput[] = [];
+  const slots = new Set<string>();
+  const placed = new Set<string>();
+  for (const inp of layout.inputs) {
+    if (inp.detectorIds.length === 0) continue;
+    const target = { kind: "input" as const, boardKey: inp.boardKey, input: inp.input };
+    const board = byKey.get(inp.boardKey);
+    const where = `${names.get(inp.boardKey) ?? inp.boardKey}, input ${inp.input}`;
+    if (!board) {
+      out.push({ code: "input-board-unknown", severity: "error", message: `${where}: there is no board ${inp.boardKey} in this layout`, why: "Detectors on a board that is not there are not wired anywhere.", target });
+      continue;
+    }
+    if (!board.entry && board.key !== PANEL_KEY) continue; // board-unknown already said so
+    if (!Number.isInteger(inp.input) || inp.input < 1 || inp.input > board.inputCount) {
+      out.push({
+        code: "input-out-of-range",
+        severity: "error",
+        message: board.inputCount === 0 ? `${where}: ${board.name} has no inputs` : `${where}: ${board.name} has inputs 1 to ${board.inputCount}`,
+        why: "There is no such terminal pair to wire the detector to.",
+        target,
+      });
+      continue;
+    }
+    const slot = `${inp.boardKey}#${inp.input}`;
+    if (slots.has(slot)) {
+      out.push({ code: "input-duplicate", severity: "error", message: `${where} is listed twice`, why: "One terminal pair measures one loop.", target });
+      continue;
+    }
+    slots.add(slot);
+    const detectors: PlacedDetector[] = [];
+    for (const id of inp.detectorIds) {
+      const sched = schedule.get(id);
+      if (!sched) {
+        out.push({ code: "detector-unknown", severity: "error", message: `${where}: detector ${id} is not in the device schedule`, why: "It may have been deleted from the schedule after it was placed.", target });
+        continue;
+      }
+      if (placed.has(id)) {
+        out.push({ code: "detector-placed-twice", severity: "error", message: `${sched.label} is placed on more than one input (again on ${where})`, why: "A detector is wired to one input.", target: { kind: "detector", detectorId: id } });
+        continue;
+      }
+      placed.add(id);
+      const cat = ix.detectors.get(sched.catalogId);
+      if (!cat) {
+        out.push({ code: "detector-type-unknown", severity: "error", message: `${sched.label}: ${sched.catalogId} is not a detector in the catalog`, why: "Its contact, tamper and current are unknown, so its loop and power cannot be checked.", target: { kind: "detector", detectorId: id } });
+        continue;
+      }
+      detectors.push({ sched, cat });
+    }
+    if (detectors.length > 0) inputs.push({ input: inp, board, detectors });
+  }
+  // Keep figures in board order, then input number, whatever order the document lists inputs in.
+  const order = new Map(boards.map((b, i) => [b.key, i]));
+  inputs.sort((a, b) => order.get(a.board.key)! - order.get(b.board.key)! || a.input.input - b.input.input);
+  return { layout, panel, ix, names, boards, byKey, inputs, placed };
+}
+
+export function unplacedFinding(unplaced: ScheduleDetector[]): Finding | null {
+  if (unplaced.length === 0) return null;
+  return {
+    code: "detectors-unplaced",
+    severity: "warning",
+    message: `${unplaced.length} detector${unplaced.length === 1 ? " is" : "s are"} not on any input: ${listNames(unplaced.map((d) => d.label))}`,
+    why: "An unplaced detector is not wired anywhere and reports nothing.",
+    target: { kind: "layout" },
+  };
+}

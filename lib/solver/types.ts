@@ -1,0 +1,119 @@
+import type { WiringScheme } from "@/lib/catalog/schema";
+import type { Finding } from "@/lib/findings";
+import type { Fault, LoopAnalysis } from "@/lib/loop/types";
+import type { BoardKind, InputRef, LayoutDocument } from "@/lib/layout/schema";
+
+export interface BoardFigures {
+  boardKey: string;
+  /** "panel" for the control panel. */
+  kind: BoardKind | "panel";
+  catalogId: string;
+  name: string;
+  inputsTotal: number;
+  inputsUsed: number;
+  inputsFree: number;
+  /** Detectors on this board's inputs (a shared input counts two). */
+  detectors: number;
+}
+
+export interface CapacityTotals {
+  inputsTotal: number;
+  inputsUsed: number;
+  inputsFree: number;
+  /** Each placed detector is one zone (the two on a shared input are reported apart). */
+  zonesUsed: number;
+  maxZones: number;
+  detectorsPlaced: number;
+  unplacedIds: string[];
+}
+
+export interface BusFigures {
+  devices: number;
+  maxDevices: number;
+  addressMin: number;
+  addressMax: number;
+  addresses: { boardKey: string; address: number | null }[];
+  duplicateAddresses: number[];
+  outOfRange: { boardKey: string; address: number }[];
+  cableM: number;
+  maxCableM: number;
+}
+
+export interface SupplyFigures {
+  /** "panel" for the panel's auxiliary output, else the board key. */
+  supplyKey: string;
+  name: string;
+  kind: "panel" | "supply-board" | "own-supply";
+  volts: number;
+  ratingMa: number;
+  /** Current drawn from the output by what it powers. */
+  loadRestMa: number;
+  loadAlarmMa: number;
+  /** The supply's (or board's, or panel's) own consumption, carried by its battery. */
+  ownRestMa: number;
+  ownAlarmMa: number;
+  batteryNeededAh: number;
+  maxBatteryAh: number;
+  /** Boards it powers (besides itself). */
+  powers: string[];
+}
+
+export interface DetectorVoltage {
+  detectorId: string;
+  supplyKey: string;
+  supplyVolts: number;
+  currentMa: number;
+  /** Round-trip resistance of the power pair at the hot end of the temperature range, ohms. */
+  cableOhms: number;
+  dropV: number;
+  volts: number;
+  minVolts: number;
+  ok: boolean;
+}
+
+export interface LoopSummary {
+  faults: LoopAnalysis["faults"];
+  maxCableM: number | null;
+  uncertain: boolean;
+  errors: number;
+  warnings: number;
+}
+
+export interface InputFigures extends InputRef {
+  detectorIds: string[];
+  scheme: WiringScheme;
+  inputTypeId: string | null;
+  longestCableM: number;
+  loop: LoopSummary | null;
+  /** A short and a cut are both reported as themselves. */
+  covered: boolean;
+}
+
+export interface SharedInputFigures extends InputRef {
+  detectorIds: string[];
+  /** Faults not reported as themselves on this input. */
+  lost: Fault[];
+}
+
+export interface SolveResult {
+  /** Errors first, then warnings, then notes; rule order within a severity. */
+  findings: Finding[];
+  counts: { error: number; warning: number; note: number };
+  boards: BoardFigures[];
+  totals: CapacityTotals;
+  bus: BusFigures | null;
+  supplies: SupplyFigures[];
+  detectors: DetectorVoltage[];
+  inputs: InputFigures[];
+  shared: { inputs: number; inputsSaved: number; entries: SharedInputFigures[] };
+  coverage: { used: number; covered: number; share: number | null };
+  battery: { profileId: string; source: string | null; standbyH: number; alarmMin: number; safetyFactor: number } | null;
+}
+
+export interface Solver {
+  solve(layout: LayoutDocument): SolveResult;
+  /** The full loop analysis of an input from the last solve. */
+  analysisFor(ref: InputRef): LoopAnalysis | null;
+  /** Cache hits and misses of the last solve, for benchmarks. */
+  stats(): { loopHits: number; loopMisses: number };
+}
