@@ -30,7 +30,13 @@ function add(out: LoopProblem[], path: (string | number)[], message: string): vo
   out.push({ path, message });
 }
 
+/** Every reason the loop can't be analysed against this input type (or on its own, without one). */
 export function loopProblems(loop: LoopSpec, inputType?: InputType): LoopProblem[] {
+  return [...loopShapeProblems(loop), ...inputTypeProblems(loop, inputType)];
+}
+
+/** Problems of the loop on its own: counts, lengths, temperatures, values. */
+export function loopShapeProblems(loop: LoopSpec): LoopProblem[] {
   const out: LoopProblem[] = [];
   const n = loop.detectors.length;
 
@@ -65,6 +71,12 @@ export function loopProblems(loop: LoopSpec, inputType?: InputType): LoopProblem
     if (!positiveFinite(r)) add(out, ["sharedOhms", i], `a resistor value must be more than 0 Ω (got ${r})`);
   });
 
+  return out;
+}
+
+/** Problems of the loop against an input type: scheme support and resistor values neither fitted nor expected. */
+export function inputTypeProblems(loop: LoopSpec, inputType?: InputType): LoopProblem[] {
+  const out: LoopProblem[] = [];
   const f = fittedValues(loop, inputType);
   const where = inputType ? "fitted or expected by the input type" : "fitted";
   if ((loop.scheme === "single-eol" || loop.scheme === "double-eol") && f.eolOhms === undefined)
