@@ -1,44 +1,45 @@
 import type { Finding } from "@/lib/findings";
 import type { ScheduleDetector } from "@/lib/schedule/schema";
 import { plural } from "@/lib/solver/format";
-import { unplacedFinding, type Resolved } from "@/lib/solver/resolve";
+import { unplacedFinding, type Resolved, type ResolvedInput } from "@/lib/solver/resolve";
 import type { BoardFigures, CapacityTotals } from "@/lib/solver/types";
 
 // Inputs used per board and in total, zones against the panel, detectors per input.
 
-export function checkInputContents(r: Resolved, out: Finding[]): void {
-  for (const ri of r.inputs) {
-    const { input } = ri;
-    const target = { kind: "input" as const, boardKey: input.boardKey, input: input.input };
-    const where = `${ri.board.name}, input ${input.input}`;
-    const n = input.detectorIds.length;
-    const allowed = input.scheme === "shared" ? 2 : 1;
-    if (n > allowed)
-      out.push({
-        code: "input-too-many-detectors",
-        severity: "error",
-        message: `${where} holds ${n} detectors; a ${input.scheme} input takes ${allowed}`,
-        why: input.scheme === "shared" ? "A shared input tells two detectors apart by their resistors; a third cannot be decoded." : "The panel would report them as one zone, so nobody could tell which one tripped. Make it a shared input where the input type allows it, or give each its own input.",
-        target,
-      });
-    if (input.scheme === "shared" && n < 2)
-      out.push({
-        code: "shared-needs-two",
-        severity: "error",
-        message: `${where} is wired as a shared input with only one detector`,
-        why: "The shared scheme's bands expect two detectors' resistors; with one, its readings land in the wrong bands. Wire it single or double end-of-line.",
-        target,
-      });
-    const type = ri.board.inputType;
-    if (type && !type.schemes.includes(input.scheme))
-      out.push({
-        code: "scheme-not-supported",
-        severity: "error",
-        message: `${where} is wired ${input.scheme}, which ${type.name} does not accept (it takes ${type.schemes.join(", ")})`,
-        why: "The input has no bands for this scheme, so its readings would be misread.",
-        target,
-      });
-  }
+/** The rules about what one input holds: detector count for its scheme, and a scheme its input type accepts. */
+export function inputContentFindings(ri: ResolvedInput): Finding[] {
+  const out: Finding[] = [];
+  const { input } = ri;
+  const target = { kind: "input" as const, boardKey: input.boardKey, input: input.input };
+  const where = `${ri.board.name}, input ${input.input}`;
+  const n = input.detectorIds.length;
+  const allowed = input.scheme === "shared" ? 2 : 1;
+  if (n > allowed)
+    out.push({
+      code: "input-too-many-detectors",
+      severity: "error",
+      message: `${where} holds ${n} detectors; a ${input.scheme} input takes ${allowed}`,
+      why: input.scheme === "shared" ? "A shared input tells two detectors apart by their resistors; a third cannot be decoded." : "The panel would report them as one zone, so nobody could tell which one tripped. Make it a shared input where the input type allows it, or give each its own input.",
+      target,
+    });
+  if (input.scheme === "shared" && n < 2)
+    out.push({
+      code: "shared-needs-two",
+      severity: "error",
+      message: `${where} is wired as a shared input with only one detector`,
+      why: "The shared scheme's bands expect two detectors' resistors; with one, its readings land in the wrong bands. Wire it single or double end-of-line.",
+      target,
+    });
+  const type = ri.board.inputType;
+  if (type && !type.schemes.includes(input.scheme))
+    out.push({
+      code: "scheme-not-supported",
+      severity: "error",
+      message: `${where} is wired ${input.scheme}, which ${type.name} does not accept (it takes ${type.schemes.join(", ")})`,
+      why: "The input has no bands for this scheme, so its readings would be misread.",
+      target,
+    });
+  return out;
 }
 
 export function capacityFigures(r: Resolved, schedule: ScheduleDetector[], out: Finding[]): { boards: BoardFigures[]; totals: CapacityTotals } {

@@ -5,31 +5,32 @@ import { indexCatalog } from "@/lib/layout/catalog-index";
 import type { InputRef, LayoutDocument } from "@/lib/layout/schema";
 import type { Schedule, ScheduleDetector } from "@/lib/schedule/schema";
 import { checkBus } from "@/lib/solver/bus-rules";
-import { capacityFigures, checkInputContents } from "@/lib/solver/capacity-rules";
-import { checkLoops } from "@/lib/solver/loop-rules";
+import { capacityFigures } from "@/lib/solver/capacity-rules";
+import { collectLoops, inputKey, inputOutcome, type InputOutcome } from "@/lib/solver/loop-rules";
 import { GenerationMemo } from "@/lib/solver/memo";
-import { checkPower, type VoltageFigure } from "@/lib/solver/power-rules";
-import { resolveLayout, unplacedFinding } from "@/lib/solver/resolve";
+import { checkPower, type VoltageEntry } from "@/lib/solver/power-rules";
+import { resolveLayout, unplacedFinding, type DetectorCache, type ResolvedInput } from "@/lib/solver/resolve";
 import type { SolveResult, Solver } from "@/lib/solver/types";
 
-// The solver with its caches. Loop analyses are cached by the loop's content (input type and loop description),
-// board current sums by the board's detectors, detector voltages by detector and supply voltage, so an edit
-// re-analyses only the inputs it touched.
+// The solver with its caches, all keyed by content: each input's whole outcome (its findings, figures, loop
+// analysis and current) by what the input holds, loop analyses by the loop description, detector voltages by
+// detector and supply voltage. An edit re-analyses only the inputs it touched; the rest is sums over cached parts.
 
 export function createSolverWith(analyze: AnalyzeLoop, schedule: Schedule, catalog: Catalog): Solver {
   const ix = indexCatalog(catalog);
   const byId = new Map<string, ScheduleDetector>(schedule.map((d) => [d.id, d]));
   const loopMemo = new GenerationMemo<LoopAnalysis>();
-  const boardSums = new GenerationMemo<{ restMa: number; alarmMa: number }>();
-  const voltage = new GenerationMemo<VoltageFigure>();
-  let analyses = new Map<string, LoopAnalysis>();
-  let lastStats = { loopHits: 0, loopMisses: 0 };
+  const outcomeMemo = new GenerationMemo<InputOutcome>();
+  const detectorCache: DetectorCache = new WeakMap();
+  const voltageCache = new Map<string, VoltageEntry>();
+  let last: { inputs: ResolvedInput[]; outcomes: InputOutcome[] } = { inputs: [], outcomes: [] };
+  let lastStats = { inputsReused: 0, inputsRecomputed: 0, loopHits: 0, loopMisses: 0 };
 
   function solve(layout: LayoutDocument): SolveResult {
     const out: Finding[] = [];
-    const nextAnalyses = new Map<string, LoopAnalysis>();
-    const r = resolveLayout(layout, ix, byId, out);
+    const r = resolveLayout(layout, ix, byId, out, detectorCache);
     let result: SolveResult;
+    let outcomes: InputOutcome[] = [];
     if (!r) {
       const un = unplacedFinding(schedule);
       if (un) out.push(un);
@@ -47,27 +48,32 @@ export function createSolverWith(analyze: AnalyzeLoop, schedule: Schedule, catal
         battery: null,
       };
     } else {
-      checkInputContents(r, out);
+      outcomes = r.inputs.map((ri) => outcomeMemo.get(inputKey(ri), () => inputOutcome(ri, analyze, loopMemo)));
+      for (const o of outcomes) for (const f of o.contentFindings) out.push(f);
       const { boards, totals } = capacityFigures(r, schedule, out);
       const bus = checkBus(r, layout.busCableM, out);
-      const power = checkPower(r, layout.power, { boardSums, voltage }, out);
-      const loops = checkLoops(r, analyze, loopMemo, nextAnalyses, out);
+      const power = checkPower(r, outcomes, layout.power, voltageCache, out);
+      const loops = collectLoops(outcomes, out);
       result = { findings: out, counts: { error: 0, warning: 0, note: 0 }, boards, totals, bus, ...power, ...loops };
     }
-    // Stable sort: errors first, rule order kept within a severity.
-    result.findings = out.map((f, i) => [f, i] as const).sort((a, b) => severityRank[a[0].severity] - severityRank[b[0].severity] || a[1] - b[1]).map(([f]) => f);
-    for (const f of result.findings) result.counts[f.severity]++;
-    lastStats = { loopHits: loopMemo.hits, loopMisses: loopMemo.misses };
+    // Errors first, then warnings, then notes; rule order kept within a severity.
+    const bySeverity: Finding[][] = [[], [], []];
+    for (const f of out) bySeverity[severityRank[f.severity]].push(f);
+    result.findings = bySeverity.flat();
+    result.counts = { error: bySeverity[0].length, warning: bySeverity[1].length, note: bySeverity[2].length };
+    lastStats = { inputsReused: outcomeMemo.hits, inputsRecomputed: outcomeMemo.misses, loopHits: loopMemo.hits, loopMisses: loopMemo.misses };
     loopMemo.endGeneration();
-    boardSums.endGeneration();
-    voltage.endGeneration();
-    analyses = nextAnalyses;
+    outcomeMemo.endGeneration();
+    last = { inputs: r?.inputs ?? [], outcomes };
     return result;
   }
 
   return {
     solve,
-    analysisFor: (ref: InputRef) => analyses.get(`${ref.boardKey}#${ref.input}`) ?? null,
+    analysisFor: (ref: InputRef) => {
+      const i = last.inputs.findIndex((ri) => ri.input.boardKey === ref.boardKey && ri.input.input === ref.input);
+      return i < 0 ? null : last.outcomes[i].analysis;
+    },
     stats: () => lastStats,
   };
 }

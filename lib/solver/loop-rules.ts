@@ -1,9 +1,10 @@
 import type { InputType } from "@/lib/catalog/schema";
 import type { Finding, FindingTarget } from "@/lib/findings";
 import type { AnalyzeLoop, Fault, LoopAnalysis, LoopSpec } from "@/lib/loop/types";
+import { inputContentFindings } from "@/lib/solver/capacity-rules";
 import { listNames } from "@/lib/solver/format";
 import type { GenerationMemo } from "@/lib/solver/memo";
-import { isLifeSafety, type Resolved, type ResolvedInput } from "@/lib/solver/resolve";
+import { isLifeSafety, type ResolvedInput } from "@/lib/solver/resolve";
 import type { InputFigures, SharedInputFigures, SolveResult } from "@/lib/solver/types";
 
 // Every used input through the loop engine, plus the rules about sharing and life-safety devices.
@@ -32,9 +33,60 @@ export function loopSpecFor(ri: ResolvedInput, inputType: InputType): LoopSpec {
   return spec;
 }
 
-function analyzeInput(ri: ResolvedInput, type: InputType, analyze: AnalyzeLoop, memo: GenerationMemo<LoopAnalysis>): LoopAnalysis {
-  const spec = loopSpecFor(ri, type);
-  return memo.get(`${type.id}|${JSON.stringify(spec)}`, () => analyze(spec, type));
+/** Text with its length in front, so joined keys cannot run into each other whatever the text holds. */
+const part = (s: string) => `${s.length}:${s}`;
+
+/** Everything the loop analysis depends on, as one string. */
+export function loopKey(type: InputType, spec: LoopSpec): string {
+  const g = "awg" in spec.cable.gauge ? `a${spec.cable.gauge.awg}` : `m${spec.cable.gauge.mm2}`;
+  let k = `${part(type.id)}|${spec.scheme}|${spec.placement}|${spec.eolOhms}|${spec.alarmOhms}|${spec.sharedOhms}|${spec.tolerancePct}|${g}|${spec.cable.lengthM}|${spec.cable.tempMinC}|${spec.cable.tempMaxC}|${spec.contactOhms}`;
+  for (const d of spec.detectors) k += `|${part(d.label)}${d.contact}${d.tamper ? 1 : 0}${d.lifeSafety ? 1 : 0}`;
+  return k;
+}
+
+/** Everything an input's outcome depends on, given a fixed schedule and catalog. */
+export function inputKey(ri: ResolvedInput): string {
+  const c = keyCache.get(ri.input);
+  if (c && sameInput(c, ri)) return c.key;
+  const key = buildInputKey(ri);
+  const { input } = ri;
+  keyCache.set(input, { key, boardKey: input.boardKey, n: input.input, name: ri.board.name, typeId: ri.board.inputTypeId, scheme: input.scheme, placement: input.placement, eol: input.eolOhms, alarm: input.alarmOhms, shared: input.sharedOhms && [...input.sharedOhms], count: input.detectorIds.length, ids: ri.detectors.map((d) => d.sched.id) });
+  return key;
+}
+
+// The key string of an input object, kept while the object lives, and checked field by field so that an input
+// changed in place is still seen as changed. Reusing the same string also reuses its hash in the cache lookups.
+interface KeyEntry {
+  key: string;
+  boardKey: string;
+  n: number;
+  name: string;
+  typeId: string | null;
+  scheme: string;
+  placement: string;
+  eol: number | undefined;
+  alarm: number | undefined;
+  shared: number[] | undefined;
+  count: number;
+  ids: string[];
+}
+const keyCache = new WeakMap<object, KeyEntry>();
+
+function sameInput(c: KeyEntry, ri: ResolvedInput): boolean {
+  const { input } = ri;
+  if (c.boardKey !== input.boardKey || c.n !== input.input || c.name !== ri.board.name || c.typeId !== ri.board.inputTypeId) return false;
+  if (c.scheme !== input.scheme || c.placement !== input.placement || c.eol !== input.eolOhms || c.alarm !== input.alarmOhms || c.count !== input.detectorIds.length) return false;
+  if ((c.shared === undefined) !== (input.sharedOhms === undefined) || (c.shared && (c.shared[0] !== input.sharedOhms![0] || c.shared[1] !== input.sharedOhms![1]))) return false;
+  if (c.ids.length !== ri.detectors.length) return false;
+  for (let i = 0; i < c.ids.length; i++) if (c.ids[i] !== ri.detectors[i].sched.id) return false;
+  return true;
+}
+
+function buildInputKey(ri: ResolvedInput): string {
+  const { input } = ri;
+  let k = `${part(input.boardKey)}|${input.input}|${part(ri.board.name)}|${part(ri.board.inputTypeId ?? "")}|${input.scheme}|${input.placement}|${input.eolOhms}|${input.alarmOhms}|${input.sharedOhms}|${input.detectorIds.length}`;
+  for (const d of ri.detectors) k += `|${part(d.sched.id)}`;
+  return k;
 }
 
 const FAULT_KINDS = ["short-panel", "short-detector", "cut"] as const;
@@ -43,58 +95,70 @@ export function isCovered(a: LoopAnalysis): boolean {
   return a.valid !== false && FAULT_KINDS.every((f) => a.faults[f] === "detected");
 }
 
-export function checkLoops(
-  r: Resolved,
-  analyze: AnalyzeLoop,
-  memo: GenerationMemo<LoopAnalysis>,
-  analyses: Map<string, LoopAnalysis>,
-  out: Finding[],
-): Pick<SolveResult, "inputs" | "shared" | "coverage"> {
-  const inputs: InputFigures[] = [];
-  const shared: SharedInputFigures[] = [];
-  let anyLifeSafety = false;
-  for (const ri of r.inputs) {
-    const { input } = ri;
-    const target: FindingTarget = { kind: "input", boardKey: input.boardKey, input: input.input };
-    const where = `${ri.board.name}, input ${input.input}`;
-    const type = ri.board.inputType;
-    const longestCableM = Math.max(...ri.detectors.map((d) => d.sched.cableM));
-    const fig: InputFigures = { boardKey: input.boardKey, input: input.input, detectorIds: ri.detectors.map((d) => d.sched.id), scheme: input.scheme, inputTypeId: ri.board.inputTypeId, longestCableM, loop: null, covered: false };
-    inputs.push(fig);
+/** What one input contributes to a solve. Cached whole, so an unchanged input costs one lookup. */
+export interface InputOutcome {
+  contentFindings: Finding[];
+  loopFindings: Finding[];
+  fig: InputFigures;
+  shared: SharedInputFigures | null;
+  lifeSafety: boolean;
+  restMa: number;
+  alarmMa: number;
+  analysis: LoopAnalysis | null;
+}
 
-    if (input.scheme === "shared")
-      for (const d of ri.detectors)
-        if (!isLifeSafety(d.cat) && d.sched.supervision !== "shared-ok")
-          out.push({
-            code: "shared-not-wanted",
-            severity: "warning",
-            message: `${d.sched.label} is on shared ${where}, but its schedule asks for ${d.sched.supervision}`,
-            why: "The device schedule says this detector should have an input of its own.",
-            target,
-          });
-    if (input.scheme !== "shared") {
-      const rank = { none: 0, "single-eol": 1, "double-eol": 2, shared: 1 } as const;
-      for (const d of ri.detectors)
-        if (d.sched.supervision !== "shared-ok" && rank[input.scheme] < rank[d.sched.supervision])
-          out.push({
-            code: "supervision-below-preference",
-            severity: "note",
-            message: `${d.sched.label} is wired ${input.scheme} on ${where}; its schedule asks for ${d.sched.supervision}`,
-            why: "The loop gives less supervision than the device schedule asks for.",
-            target,
-          });
+export function inputOutcome(ri: ResolvedInput, analyze: AnalyzeLoop, loopMemo: GenerationMemo<LoopAnalysis>): InputOutcome {
+  const { input } = ri;
+  const target: FindingTarget = { kind: "input", boardKey: input.boardKey, input: input.input };
+  const where = `${ri.board.name}, input ${input.input}`;
+  const type = ri.board.inputType;
+  const out: Finding[] = [];
+  let restMa = 0;
+  let alarmMa = 0;
+  let longestCableM = 0;
+  for (const d of ri.detectors) {
+    if (d.cat.power) {
+      restMa += d.cat.power.standbyMa;
+      alarmMa += d.cat.power.alarmMa;
     }
+    if (d.sched.cableM > longestCableM) longestCableM = d.sched.cableM;
+  }
+  const fig: InputFigures = { boardKey: input.boardKey, input: input.input, detectorIds: ri.detectors.map((d) => d.sched.id), scheme: input.scheme, inputTypeId: ri.board.inputTypeId, longestCableM, loop: null, covered: false };
 
-    // The engine's own findings where it can run: not on an unknown input type, a scheme the type lacks, or a detector count the capacity rules reject.
-    const runnable = type && type.schemes.includes(input.scheme) && input.detectorIds.length <= (input.scheme === "shared" ? 2 : 1) && (input.scheme !== "shared" || ri.detectors.length === 2);
-    const analysis = type && runnable ? analyzeInput(ri, type, analyze, memo) : null;
+  if (input.scheme === "shared")
+    for (const d of ri.detectors)
+      if (!isLifeSafety(d.cat) && d.sched.supervision !== "shared-ok")
+        out.push({
+          code: "shared-not-wanted",
+          severity: "warning",
+          message: `${d.sched.label} is on shared ${where}, but its schedule asks for ${d.sched.supervision}`,
+          why: "The device schedule says this detector should have an input of its own.",
+          target,
+        });
+  if (input.scheme !== "shared") {
+    const rank = { none: 0, "single-eol": 1, "double-eol": 2, shared: 1 } as const;
+    for (const d of ri.detectors)
+      if (d.sched.supervision !== "shared-ok" && rank[input.scheme] < rank[d.sched.supervision])
+        out.push({
+          code: "supervision-below-preference",
+          severity: "note",
+          message: `${d.sched.label} is wired ${input.scheme} on ${where}; its schedule asks for ${d.sched.supervision}`,
+          why: "The loop gives less supervision than the device schedule asks for.",
+          target,
+        });
+  }
+
+  // The engine runs unless the input type is unknown, lacks the scheme, or the detector count is wrong (the capacity rules say so).
+  const runnable = type && type.schemes.includes(input.scheme) && input.detectorIds.length <= (input.scheme === "shared" ? 2 : 1) && (input.scheme !== "shared" || ri.detectors.length === 2);
+  let analysis: LoopAnalysis | null = null;
+  if (type && runnable) {
+    const spec = loopSpecFor(ri, type);
+    analysis = loopMemo.get(loopKey(type, spec), () => analyze(spec, type));
+    for (const f of analysis.findings) out.push({ ...f, message: `${where}: ${f.message}`, target });
+  }
+  const life = ri.detectors.filter((d) => isLifeSafety(d.cat));
+  if (life.length) {
     const engineCodes = new Set(analysis?.findings.map((f) => f.code));
-    if (analysis) {
-      analyses.set(`${input.boardKey}#${input.input}`, analysis);
-      for (const f of analysis.findings) out.push({ ...f, message: `${where}: ${f.message}`, target });
-    }
-    const life = ri.detectors.filter((d) => isLifeSafety(d.cat));
-    if (life.length) anyLifeSafety = true;
     const lifeNames = listNames(life.map((d) => d.sched.label));
     if (life.length && input.scheme === "shared" && !engineCodes.has("life-safety-shared"))
       out.push({
@@ -112,18 +176,20 @@ export function checkLoops(
         why: "Only an input type rated for fire devices supervises and reports them as the fire code expects. Move it to such an input; the local fire code and the authority having jurisdiction decide.",
         target,
       });
-    if (!analysis) continue;
-    fig.loop = {
-      faults: analysis.faults,
-      maxCableM: analysis.maxCableM,
-      uncertain: analysis.rows.some((row) => row.uncertain),
-      errors: analysis.findings.filter((f) => f.severity === "error").length,
-      warnings: analysis.findings.filter((f) => f.severity === "warning").length,
-    };
+  }
+  let shared: SharedInputFigures | null = null;
+  if (analysis) {
+    let errors = 0;
+    let warnings = 0;
+    for (const f of analysis.findings) {
+      if (f.severity === "error") errors++;
+      else if (f.severity === "warning") warnings++;
+    }
+    fig.loop = { faults: analysis.faults, maxCableM: analysis.maxCableM, uncertain: analysis.rows.some((row) => row.uncertain), errors, warnings };
     fig.covered = isCovered(analysis);
     if (input.scheme === "shared") {
       const lost = FAULT_KINDS.filter((f) => analysis.faults[f] !== "detected") as Fault[];
-      shared.push({ boardKey: input.boardKey, input: input.input, detectorIds: fig.detectorIds, lost });
+      shared = { boardKey: input.boardKey, input: input.input, detectorIds: fig.detectorIds, lost };
       out.push({
         code: "shared-input-tradeoff",
         severity: "note",
@@ -132,6 +198,22 @@ export function checkLoops(
         target,
       });
     }
+  }
+  return { contentFindings: inputContentFindings(ri), loopFindings: out, fig, shared, lifeSafety: life.length > 0, restMa, alarmMa, analysis };
+}
+
+/** Loop findings, figures and supervision coverage from the inputs' outcomes. */
+export function collectLoops(outcomes: InputOutcome[], out: Finding[]): Pick<SolveResult, "inputs" | "shared" | "coverage"> {
+  const inputs: InputFigures[] = [];
+  const shared: SharedInputFigures[] = [];
+  let anyLifeSafety = false;
+  let covered = 0;
+  for (const o of outcomes) {
+    for (const f of o.loopFindings) out.push(f);
+    inputs.push(o.fig);
+    if (o.shared) shared.push(o.shared);
+    if (o.lifeSafety) anyLifeSafety = true;
+    if (o.fig.covered) covered++;
   }
   if (anyLifeSafety)
     out.push({
@@ -142,7 +224,6 @@ export function checkLoops(
       target: { kind: "layout" },
     });
   const used = inputs.length;
-  const covered = inputs.filter((i) => i.covered).length;
   if (used > covered)
     out.push({
       code: "supervision-coverage",
@@ -151,9 +232,5 @@ export function checkLoops(
       why: "On the other inputs some wiring faults read as normal or as an alarm, so a damaged or tampered loop can go unnoticed.",
       target: { kind: "layout" },
     });
-  return {
-    inputs,
-    shared: { inputs: shared.length, inputsSaved: shared.length, entries: shared },
-    coverage: { used, covered, share: used ? covered / used : null },
-  };
+  return { inputs, shared: { inputs: shared.length, inputsSaved: shared.length, entries: shared }, coverage: { used, covered, share: used ? covered / used : null } };
 }

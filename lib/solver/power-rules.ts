@@ -3,8 +3,9 @@ import { PANEL_KEY, type LayoutPower } from "@/lib/layout/schema";
 import { conductorOhms } from "@/lib/loop/cable";
 import { batteryAh } from "@/lib/solver/battery";
 import { fmt } from "@/lib/solver/format";
-import type { GenerationMemo } from "@/lib/solver/memo";
-import { isLifeSafety, type PlacedDetector, type Resolved, type ResolvedBoard } from "@/lib/solver/resolve";
+import type { Detector } from "@/lib/catalog/schema";
+import type { InputOutcome } from "@/lib/solver/loop-rules";
+import type { PlacedDetector, Resolved, ResolvedBoard } from "@/lib/solver/resolve";
 import { resolveStandby } from "@/lib/solver/standby-profiles";
 import type { DetectorVoltage, SolveResult, SupplyFigures } from "@/lib/solver/types";
 
@@ -21,37 +22,48 @@ interface Sums {
   alarmMa: number;
 }
 
-function detectorSums(dets: PlacedDetector[]): Sums {
-  let restMa = 0;
-  let alarmMa = 0;
-  for (const d of dets)
-    if (d.cat.power) {
-      restMa += d.cat.power.standbyMa;
-      alarmMa += d.cat.power.alarmMa;
-    }
-  return { restMa, alarmMa };
+/** A detector's voltage figure and finding, kept per detector id; the schedule is fixed for a solver, so only the feed can change. */
+export interface VoltageEntry {
+  fig: DetectorVoltage;
+  finding: Finding | null;
+  panelMinVolts: number;
+  catId: string;
 }
 
-export type VoltageFigure = Omit<DetectorVoltage, "detectorId" | "supplyKey">;
-
-export interface PowerMemos {
-  boardSums: GenerationMemo<Sums>;
-  voltage: GenerationMemo<VoltageFigure>;
-}
-
-export function checkPower(r: Resolved, power: LayoutPower, memos: PowerMemos, out: Finding[]): Pick<SolveResult, "supplies" | "detectors" | "battery"> {
-  const { panel } = r;
-  // Which detectors sit on which board.
-  const onBoard = new Map<string, PlacedDetector[]>();
-  for (const ri of r.inputs) {
-    const list = onBoard.get(ri.board.key);
-    if (list) list.push(...ri.detectors);
-    else onBoard.set(ri.board.key, [...ri.detectors]);
+function voltageAt(d: PlacedDetector, p: NonNullable<Detector["power"]>, feed: SupplyFigures, panelMinVolts: number): VoltageEntry {
+  const cableOhms = 2 * conductorOhms(d.sched.gauge, d.sched.cableM, VOLTAGE_DROP_TEMP_C);
+  const dropV = (p.alarmMa / 1000) * cableOhms;
+  const minVolts = Math.max(p.minVolts, panelMinVolts);
+  const v = feed.volts - dropV;
+  const fig: DetectorVoltage = { detectorId: d.sched.id, supplyKey: feed.supplyKey, supplyVolts: feed.volts, currentMa: p.alarmMa, cableOhms, dropV, volts: v, minVolts, ok: v >= minVolts };
+  let finding: Finding | null = null;
+  if (!fig.ok) {
+    const limit = p.minVolts >= panelMinVolts ? `its minimum of ${volts(p.minVolts)} V` : `the panel's minimum device voltage of ${volts(panelMinVolts)} V`;
+    finding = {
+      code: "detector-voltage-low",
+      severity: "error",
+      message: `${d.sched.label} gets ${volts(v)} V: ${volts(feed.volts)} V less ${volts(dropV)} V dropped over ${fmt(d.sched.cableM)} m of cable (${fmt(p.alarmMa)} mA × ${fmt(cableOhms)} Ω out and back), below ${limit}`,
+      why: "A detector below its working voltage may not report, or may report false alarms. Use a thicker cable, a shorter run, or a power supply closer to it.",
+      target: { kind: "detector", detectorId: d.sched.id },
+    };
   }
-  const sumsOf = (b: ResolvedBoard): Sums => {
-    const dets = onBoard.get(b.key) ?? [];
-    return memos.boardSums.get(`${b.key}|${dets.map((d) => `${d.sched.id}:${d.cat.id}`).join(",")}`, () => detectorSums(dets));
-  };
+  return { fig, finding, panelMinVolts, catId: d.cat.id };
+}
+
+export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutPower, voltageCache: Map<string, VoltageEntry>, out: Finding[]): Pick<SolveResult, "supplies" | "detectors" | "battery"> {
+  const { panel } = r;
+  // Current drawn by each board's detectors: per-input sums come cached with the input's outcome.
+  const boardSums = new Map<string, Sums>();
+  for (let i = 0; i < outcomes.length; i++) {
+    const key = r.inputs[i].board.key;
+    const s = boardSums.get(key);
+    if (s) {
+      s.restMa += outcomes[i].restMa;
+      s.alarmMa += outcomes[i].alarmMa;
+    } else boardSums.set(key, { restMa: outcomes[i].restMa, alarmMa: outcomes[i].alarmMa });
+  }
+  const none: Sums = { restMa: 0, alarmMa: 0 };
+  const sumsOf = (b: ResolvedBoard): Sums => boardSums.get(b.key) ?? none;
 
   const supplies: SupplyFigures[] = [];
   const bySupply = new Map<string, SupplyFigures>();
@@ -144,7 +156,7 @@ export function checkPower(r: Resolved, power: LayoutPower, memos: PowerMemos, o
         target,
       });
   }
-  const fire = profile?.lifeSafety || r.inputs.some((ri) => ri.detectors.some((d) => isLifeSafety(d.cat)));
+  const fire = profile?.lifeSafety || outcomes.some((o) => o.lifeSafety);
   if (fire)
     out.push({
       code: "battery-fire-caution",
@@ -161,24 +173,13 @@ export function checkPower(r: Resolved, power: LayoutPower, memos: PowerMemos, o
     for (const d of ri.detectors) {
       const p = d.cat.power;
       if (!p) continue;
-      const v = memos.voltage.get(`${d.sched.id}|${d.cat.id}|${feed.volts}|${panel.minDeviceVolts}`, () => {
-        const cableOhms = 2 * conductorOhms(d.sched.gauge, d.sched.cableM, VOLTAGE_DROP_TEMP_C);
-        const dropV = (p.alarmMa / 1000) * cableOhms;
-        const minVolts = Math.max(p.minVolts, panel.minDeviceVolts);
-        const volts = feed.volts - dropV;
-        return { supplyVolts: feed.volts, currentMa: p.alarmMa, cableOhms, dropV, volts, minVolts, ok: volts >= minVolts };
-      });
-      detectors.push({ detectorId: d.sched.id, supplyKey: feed.supplyKey, ...v });
-      if (!v.ok) {
-        const limit = p.minVolts >= panel.minDeviceVolts ? `its minimum of ${volts(p.minVolts)} V` : `the panel's minimum device voltage of ${volts(panel.minDeviceVolts)} V`;
-        out.push({
-          code: "detector-voltage-low",
-          severity: "error",
-          message: `${d.sched.label} gets ${volts(v.volts)} V: ${volts(v.supplyVolts)} V less ${volts(v.dropV)} V dropped over ${fmt(d.sched.cableM)} m of cable (${fmt(v.currentMa)} mA × ${fmt(v.cableOhms)} Ω out and back), below ${limit}`,
-          why: "A detector below its working voltage may not report, or may report false alarms. Use a thicker cable, a shorter run, or a power supply closer to it.",
-          target: { kind: "detector", detectorId: d.sched.id },
-        });
+      let c = voltageCache.get(d.sched.id);
+      if (!c || c.fig.supplyKey !== feed.supplyKey || c.fig.supplyVolts !== feed.volts || c.panelMinVolts !== panel.minDeviceVolts || c.catId !== d.cat.id) {
+        c = voltageAt(d, p, feed, panel.minDeviceVolts);
+        voltageCache.set(d.sched.id, c);
       }
+      detectors.push(c.fig);
+      if (c.finding) out.push(c.finding);
     }
   }
   return { supplies, detectors, battery: { profileId: power.standbyProfileId, source: profile?.source ?? null, standbyH, alarmMin, safetyFactor: sf } };

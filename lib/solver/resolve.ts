@@ -10,6 +10,8 @@ import { listNames } from "@/lib/solver/format";
 
 export interface ResolvedBoard {
   key: string;
+  /** Position in the layout's board list, the panel being 0. */
+  order: number;
   name: string;
   /** null for the control panel. */
   board: LayoutBoard | null;
@@ -43,6 +45,50 @@ export interface Resolved {
   placed: Set<string>;
 }
 
+const inputTarget = (inp: LayoutInput) => ({ kind: "input" as const, boardKey: inp.boardKey, input: inp.input });
+const inputWhere = (names: Map<string, string>, inp: LayoutInput) => `${names.get(inp.boardKey) ?? inp.boardKey}, input ${inp.input}`;
+
+/** Resolved detectors of an input object from an earlier solve; the schedule and catalog are fixed for one cache. */
+export type DetectorCache = WeakMap<LayoutInput, { ids: string[]; detectors: PlacedDetector[] }>;
+
+/** The fast path: the same input object, the same ids, none placed elsewhere. Null sends the input down the slow path. */
+function resolveDetectors(inp: LayoutInput, cache: DetectorCache, placed: Set<string>): PlacedDetector[] | null {
+  const c = cache.get(inp);
+  if (!c || c.ids.length !== inp.detectorIds.length) return null;
+  for (let i = 0; i < c.ids.length; i++) if (c.ids[i] !== inp.detectorIds[i] || placed.has(c.ids[i])) return null;
+  if (c.ids.length === 2 && c.ids[0] === c.ids[1]) return null;
+  for (const id of c.ids) placed.add(id);
+  return c.detectors;
+}
+
+function resolveDetectorsSlowly(inp: LayoutInput, cache: DetectorCache, ix: CatalogIndex, schedule: Map<string, ScheduleDetector>, placed: Set<string>, names: Map<string, string>, out: Finding[]): PlacedDetector[] {
+  const detectors: PlacedDetector[] = [];
+  let complete = true;
+  for (const id of inp.detectorIds) {
+    const sched = schedule.get(id);
+    if (!sched) {
+      out.push({ code: "detector-unknown", severity: "error", message: `${inputWhere(names, inp)}: detector ${id} is not in the device schedule`, why: "It may have been deleted from the schedule after it was placed.", target: inputTarget(inp) });
+      complete = false;
+      continue;
+    }
+    if (placed.has(id)) {
+      out.push({ code: "detector-placed-twice", severity: "error", message: `${sched.label} is placed on more than one input (again on ${inputWhere(names, inp)})`, why: "A detector is wired to one input.", target: { kind: "detector", detectorId: id } });
+      complete = false;
+      continue;
+    }
+    placed.add(id);
+    const cat = ix.detectors.get(sched.catalogId);
+    if (!cat) {
+      out.push({ code: "detector-type-unknown", severity: "error", message: `${sched.label}: ${sched.catalogId} is not a detector in the catalog`, why: "Its contact, tamper and current are unknown, so its loop and power cannot be checked.", target: { kind: "detector", detectorId: id } });
+      complete = false;
+      continue;
+    }
+    detectors.push({ sched, cat });
+  }
+  if (complete) cache.set(inp, { ids: [...inp.detectorIds], detectors });
+  return detectors;
+}
+
 export const isLifeSafety = (d: Detector) => d.lifeSafety || d.category === "smoke" || d.category === "heat";
 
 export function resolveLayout(
@@ -50,6 +96,7 @@ export function resolveLayout(
   ix: CatalogIndex,
   schedule: Map<string, ScheduleDetector>,
   out: Finding[],
+  cache: DetectorCache = new WeakMap(),
 ): Resolved | null {
   const panel = ix.panels.get(layout.panelId);
   if (!panel) {
@@ -66,6 +113,7 @@ export function resolveLayout(
   const panelType = ix.inputTypes.get(panel.onboardInputs.inputType);
   const panelBoard: ResolvedBoard = {
     key: PANEL_KEY,
+    order: 0,
     name: "Control panel",
     board: null,
     entry: null,
@@ -96,7 +144,7 @@ export function resolveLayout(
     if (entry && ix.inputTypes.get(boardInputs(entry)?.inputType ?? "") === undefined && boardInputs(entry))
       out.push({ code: "input-type-unknown", severity: "error", message: `${name}: input type ${boardInputs(entry)?.inputType} is not in the catalog`, why: "Its inputs cannot be checked.", target });
     const block = entry ? boardInputs(entry) : null;
-    const rb: ResolvedBoard = { key: b.key, name, board: b, entry, inputCount: block?.count ?? 0, inputType: block ? ix.inputTypes.get(block.inputType) : undefined, inputTypeId: block?.inputType ?? null };
+    const rb: ResolvedBoard = { key: b.key, order: boards.length, name, board: b, entry, inputCount: block?.count ?? 0, inputType: block ? ix.inputTypes.get(block.inputType) : undefined, inputTypeId: block?.inputType ?? null };
     boards.push(rb);
     byKey.set(b.key, rb);
   }
@@ -104,15 +152,14 @@ export function resolveLayout(
     out.push({ code: "input-type-unknown", severity: "error", message: `Control panel: input type ${panel.onboardInputs.inputType} is not in the catalog`, why: "Its inputs cannot be checked.", target: { kind: "board", boardKey: PANEL_KEY } });
 
   const inputs: ResolvedInput[] = [];
-  const slots = new Set<string>();
+  const seen = new Map<string, Uint8Array>();
+  for (const b of boards) seen.set(b.key, new Uint8Array(b.inputCount + 1));
   const placed = new Set<string>();
   for (const inp of layout.inputs) {
     if (inp.detectorIds.length === 0) continue;
-    const target = { kind: "input" as const, boardKey: inp.boardKey, input: inp.input };
     const board = byKey.get(inp.boardKey);
-    const where = `${names.get(inp.boardKey) ?? inp.boardKey}, input ${inp.input}`;
     if (!board) {
-      out.push({ code: "input-board-unknown", severity: "error", message: `${where}: there is no board ${inp.boardKey} in this layout`, why: "Detectors on a board that is not there are not wired anywhere.", target });
+      out.push({ code: "input-board-unknown", severity: "error", message: `${inputWhere(names, inp)}: there is no board ${inp.boardKey} in this layout`, why: "Detectors on a board that is not there are not wired anywhere.", target: inputTarget(inp) });
       continue;
     }
     if (!board.entry && board.key !== PANEL_KEY) continue; // board-unknown already said so
@@ -120,42 +167,26 @@ export function resolveLayout(
       out.push({
         code: "input-out-of-range",
         severity: "error",
-        message: board.inputCount === 0 ? `${where}: ${board.name} has no inputs` : `${where}: ${board.name} has inputs 1 to ${board.inputCount}`,
+        message: board.inputCount === 0 ? `${inputWhere(names, inp)}: ${board.name} has no inputs` : `${inputWhere(names, inp)}: ${board.name} has inputs 1 to ${board.inputCount}`,
         why: "There is no such terminal pair to wire the detector to.",
-        target,
+        target: inputTarget(inp),
       });
       continue;
     }
-    const slot = `${inp.boardKey}#${inp.input}`;
-    if (slots.has(slot)) {
-      out.push({ code: "input-duplicate", severity: "error", message: `${where} is listed twice`, why: "One terminal pair measures one loop.", target });
+    const used = seen.get(board.key)!;
+    if (used[inp.input]) {
+      out.push({ code: "input-duplicate", severity: "error", message: `${inputWhere(names, inp)} is listed twice`, why: "One terminal pair measures one loop.", target: inputTarget(inp) });
       continue;
     }
-    slots.add(slot);
-    const detectors: PlacedDetector[] = [];
-    for (const id of inp.detectorIds) {
-      const sched = schedule.get(id);
-      if (!sched) {
-        out.push({ code: "detector-unknown", severity: "error", message: `${where}: detector ${id} is not in the device schedule`, why: "It may have been deleted from the schedule after it was placed.", target });
-        continue;
-      }
-      if (placed.has(id)) {
-        out.push({ code: "detector-placed-twice", severity: "error", message: `${sched.label} is placed on more than one input (again on ${where})`, why: "A detector is wired to one input.", target: { kind: "detector", detectorId: id } });
-        continue;
-      }
-      placed.add(id);
-      const cat = ix.detectors.get(sched.catalogId);
-      if (!cat) {
-        out.push({ code: "detector-type-unknown", severity: "error", message: `${sched.label}: ${sched.catalogId} is not a detector in the catalog`, why: "Its contact, tamper and current are unknown, so its loop and power cannot be checked.", target: { kind: "detector", detectorId: id } });
-        continue;
-      }
-      detectors.push({ sched, cat });
-    }
+    used[inp.input] = 1;
+    const detectors = resolveDetectors(inp, cache, placed) ?? resolveDetectorsSlowly(inp, cache, ix, schedule, placed, names, out);
     if (detectors.length > 0) inputs.push({ input: inp, board, detectors });
   }
   // Keep figures in board order, then input number, whatever order the document lists inputs in.
-  const order = new Map(boards.map((b, i) => [b.key, i]));
-  inputs.sort((a, b) => order.get(a.board.key)! - order.get(b.board.key)! || a.input.input - b.input.input);
+  const before = (a: ResolvedInput, b: ResolvedInput) => a.board.order - b.board.order || a.input.input - b.input.input;
+  let sorted = true;
+  for (let i = 1; i < inputs.length && sorted; i++) if (before(inputs[i - 1], inputs[i]) > 0) sorted = false;
+  if (!sorted) inputs.sort(before);
   return { layout, panel, ix, names, boards, byKey, inputs, placed };
 }
 

@@ -114,6 +114,6 @@ export interface Solver {
   solve(layout: LayoutDocument): SolveResult;
   /** The full loop analysis of an input from the last solve. */
   analysisFor(ref: InputRef): LoopAnalysis | null;
-  /** Cache hits and misses of the last solve, for benchmarks. */
-  stats(): { loopHits: number; loopMisses: number };
+  /** Cache use in the last solve, for tests and benchmarks: inputs whose outcome was reused or recomputed, loop analyses found or run. */
+  stats(): { inputsReused: number; inputsRecomputed: number; loopHits: number; loopMisses: number };
 }
