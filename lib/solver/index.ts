@@ -1,5 +1,5 @@
 import type { Catalog } from "@/lib/catalog/schema";
-import { analyzeLoop } from "@/lib/loop/analyze-loop";
+import { analyzeLoop } from "@/lib/loop";
 import type { LayoutDocument } from "@/lib/layout/schema";
 import type { Schedule } from "@/lib/schedule/schema";
 import { createSolverWith } from "@/lib/solver/create-solver";

@@ -1,6 +1,6 @@
 import type { Finding } from "@/lib/findings";
 import { PANEL_KEY, type LayoutPower } from "@/lib/layout/schema";
-import { conductorOhms } from "@/lib/loop/cable";
+import { conductorOhms } from "@/lib/loop";
 import { batteryAh } from "@/lib/solver/battery";
 import { fmt } from "@/lib/solver/format";
 import type { Detector } from "@/lib/catalog/schema";
