@@ -1,10 +1,9 @@
 // The loop supervision engine: every state × fault combination as a reading interval, its report,
 // and verdicts on what the panel can and cannot see.
 import type { InputType, Report } from "@/lib/catalog/schema";
-import { reportSchema } from "@/lib/catalog/schema";
 import type { Finding, FindingTarget } from "@/lib/findings";
-import { conductorAt, compileLoop, encodeStates, enumerateStates, evalReading, FAULTS, SCHEME_SHARED, STATE_ACTIVE, STATE_TAMPER, type LoopModel } from "./loop-model";
-import { bandIndex, compileBands, marginOf, reportsBetween } from "./loop-bands";
+import { conductorAt, compileLoop, encodeStates, enumerateStates, evalFaults, FAULTS, SCHEME_SHARED, STATE_ACTIVE, STATE_TAMPER, type LoopModel } from "./loop-model";
+import { acceptableFor, bandIndex, compileBands, marginOf, REPORT_BIT, reportsBetween } from "./loop-bands";
 import { loopProblems, type LoopProblem } from "./loop-problems";
 import { maxCableRun, type CableRow } from "./max-cable";
 import { FAULT_WORDS, statesLabel } from "./row-labels";
@@ -13,21 +12,6 @@ import { resistorUses } from "./resistor-uses";
 import type { Fault, LoopAnalysis, LoopSpec, Reading } from "./types";
 
 const LAYOUT: FindingTarget = { kind: "layout" };
-const REPORT_BIT: Record<Report, number> = Object.fromEntries(reportSchema.options.map((r, i) => [r, 1 << i])) as Record<Report, number>;
-
-/** Reports that count as a fault or tamper being seen for what it is. */
-export function acceptableFor(expected: Report): number {
-  if (expected === "short") return REPORT_BIT.short | REPORT_BIT.trouble;
-  if (expected === "open") return REPORT_BIT.open | REPORT_BIT.trouble;
-  return REPORT_BIT[expected];
-}
-
-export function maskOf(reports: readonly Report[]): number {
-  let m = 0;
-  for (const r of reports) m |= REPORT_BIT[r];
-  return m;
-}
-
 function expectedFor(m: LoopModel, code: Uint8Array): Report {
   let active = 0;
   for (let i = 0; i < code.length; i++) {
@@ -78,20 +62,27 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
   const rows: Reading[] = [];
   const masks: number[] = [];
   const cableRows: CableRow[] = [];
+  const vLo = new Float64Array(4);
+  const vHi = new Float64Array(4);
+  const vNom = new Float64Array(4);
   for (const states of combos) {
     const code = encodeStates(states);
     const exp0 = expectedFor(m, code);
     const sl = statesLabel(loop.detectors, states);
+    evalFaults(m, code, rcLo, eLo, aLo, saLo, sbLo, vLo);
+    evalFaults(m, code, rcHi, eHi, aHi, saHi, sbHi, vHi);
+    evalFaults(m, code, rcNom, m.eol, m.alarm, m.sa, m.sb, vNom);
     for (let f = 0; f < 4; f++) {
-      const minOhms = evalReading(m, code, f, rcLo, eLo, aLo, saLo, sbLo);
-      const maxOhms = evalReading(m, code, f, rcHi, eHi, aHi, saHi, sbHi);
-      const nominalOhms = evalReading(m, code, f, rcNom, m.eol, m.alarm, m.sa, m.sb);
+      const minOhms = vLo[f];
+      const maxOhms = vHi[f];
+      const nominalOhms = vNom[f];
       const iLo = bandIndex(cb, minOhms);
       const iHi = bandIndex(cb, maxOhms);
       const reports = reportsBetween(cb, iLo, iHi);
       const fault: Fault = FAULTS[f];
       const expected: Report = f === 0 ? exp0 : f === 3 ? "open" : "short";
-      const mask = maskOf(reports);
+      let mask = 0;
+      for (let b = iLo; b <= iHi; b++) mask |= cb.masks[b];
       rows.push({
         states,
         fault,
@@ -124,9 +115,12 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
   }
 
   const indistinguishable: Array<[number, number]> = [];
-  for (let i = 0; i < rows.length; i++)
-    for (let j = i + 1; j < rows.length; j++)
-      if ((masks[i] & masks[j]) !== 0 && rows[i].expected !== rows[j].expected) indistinguishable.push([i, j]);
+  const nRows = rows.length;
+  for (let i = 0; i < nRows; i++) {
+    const mi = masks[i];
+    const ei = rows[i].expected;
+    for (let j = i + 1; j < nRows; j++) if ((mi & masks[j]) !== 0 && ei !== rows[j].expected) indistinguishable.push([i, j]);
+  }
 
   const conductorOhms = { minOhms: m.conductors * rcLo, maxOhms: m.conductors * rcHi };
   const hotPerM = conductorAt(m, m.tMax, 1);

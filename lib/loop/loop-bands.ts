@@ -1,9 +1,27 @@
 // Turning readings into reports through an input type's band table.
-import type { Band, Report } from "@/lib/catalog/schema";
+import { reportSchema, type Band, type Report } from "@/lib/catalog/schema";
+
+/** One bit per report, for fast set tests. */
+export const REPORT_BIT: Record<Report, number> = Object.fromEntries(reportSchema.options.map((r, i) => [r, 1 << i])) as Record<Report, number>;
+
+/** Reports that count as a row being seen for what it is: a short or an open may also read as trouble. */
+export function acceptableFor(expected: Report): number {
+  if (expected === "short") return REPORT_BIT.short | REPORT_BIT.trouble;
+  if (expected === "open") return REPORT_BIT.open | REPORT_BIT.trouble;
+  return REPORT_BIT[expected];
+}
+
+export function maskOf(reports: readonly Report[]): number {
+  let m = 0;
+  for (const r of reports) m |= REPORT_BIT[r];
+  return m;
+}
 
 export interface CompiledBands {
   /** One frozen single-report array per band, shared by every reading that falls in it. */
   single: readonly Report[][];
+  /** Report bit of each band. */
+  masks: Int32Array;
   /** Upper edge of each band (Infinity for the last). */
   to: Float64Array;
   from: Float64Array;
@@ -20,6 +38,7 @@ export function compileBands(bands: readonly Band[]): CompiledBands {
     from: Float64Array.from(bands, (b) => b.fromOhms),
     reports: bands.map((b) => b.report),
     single: bands.map((b) => Object.freeze([b.report]) as Report[]),
+    masks: Int32Array.from(bands, (b) => REPORT_BIT[b.report]),
   };
   compiled.set(bands, out);
   return out;

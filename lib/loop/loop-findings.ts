@@ -6,6 +6,7 @@ import { combineFromStock } from "@/lib/resistors/stock-combination";
 import { nearestPreferred } from "@/lib/resistors/e-series";
 import type { LoopModel } from "./loop-model";
 import { REPORT_WORDS, reportsWords } from "./row-labels";
+import { acceptableFor, REPORT_BIT } from "./loop-bands";
 import type { LoopAnalysis, LoopSpec, Reading, ResistorUse } from "./types";
 
 export const LIFE_SAFETY_CAUTION =
@@ -49,18 +50,24 @@ function isOnly(r: Reading, allowed: readonly Report[]): boolean {
 }
 
 export function buildFindings(ctx: FindingsInput, target: FindingTarget): Finding[] {
-  const { loop, inputType, rows, analysis } = ctx;
+  const { loop, inputType, rows, masks, analysis } = ctx;
   const out: Finding[] = [];
   const placement = loop.placement;
   const scheme = loop.scheme;
-  const lifeSafety = loop.detectors.some((d) => d.lifeSafety);
-  const allNO = loop.detectors.every((d) => d.contact === "NO");
-  const anyNO = loop.detectors.some((d) => d.contact === "NO");
+  let lifeSafety = false;
+  let nNO = 0;
+  for (const d of loop.detectors) {
+    if (d.lifeSafety) lifeSafety = true;
+    if (d.contact === "NO") nNO++;
+  }
+  const allNO = nNO === loop.detectors.length;
+  const anyNO = nNO > 0;
 
   // Rest, alarm and tamper rows without a fault.
   const rest = rows[0];
-  const restWrong = !isOnly(rest, ["normal"]);
-  const mismatched = analysis.resistors.filter((u) => u.expectedOhms !== null && Math.abs(u.ohms - u.expectedOhms) > 0.005 * u.expectedOhms);
+  const restWrong = masks[0] !== REPORT_BIT.normal;
+  const mismatched: ResistorUse[] = [];
+  for (const u of analysis.resistors) if (u.expectedOhms !== null && Math.abs(u.ohms - u.expectedOhms) > 0.005 * u.expectedOhms) mismatched.push(u);
   if (restWrong) {
     const never = !rest.reports.includes("normal");
     let why = "The panel must see a loop at rest as normal, or the input can't be set and keeps reporting.";
@@ -81,12 +88,14 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
   let tamperWrong: Reading | null = null;
   for (let i = 4; i < rows.length; i += 4) {
     const r = rows[i];
+    const normal = (masks[i] & REPORT_BIT.normal) !== 0;
+    const wrong = (masks[i] & ~acceptableFor(r.expected)) !== 0;
     if (r.expected === "open") {
-      if (r.reports.includes("normal")) tamperNormal ??= r;
-      else if (!isOnly(r, ["open", "trouble"])) tamperWrong ??= r;
+      if (normal) tamperNormal ??= r;
+      else if (wrong) tamperWrong ??= r;
     } else {
-      if (r.reports.includes("normal")) activeNormal ??= r;
-      else if (!isOnly(r, [r.expected])) activeWrong ??= r;
+      if (normal) activeNormal ??= r;
+      else if (wrong) activeWrong ??= r;
     }
   }
   if (activeNormal)
@@ -147,35 +156,41 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
   }
 
   // Readings that straddle a band edge.
-  const uncertain = rows.filter((r) => r.uncertain);
+  // One pass: readings that straddle an edge, and the thinnest margin among right ones.
+  let nUncertain = 0;
+  let firstUncertain: Reading | null = null;
+  let thin: Reading | null = null;
+  for (let i = 0; i < rows.length; i++) {
+    const r = rows[i];
+    if (r.uncertain) {
+      nUncertain++;
+      firstUncertain ??= r;
+    } else if (r.marginOhms < 0.05 * Math.max(r.nominalOhms ?? 0, 1) && (masks[i] & ~acceptableFor(r.expected)) === 0 && (!thin || r.marginOhms < thin.marginOhms)) thin = r;
+  }
+  const uncertain = { length: nUncertain, 0: firstUncertain! };
   if (uncertain.length)
     push(out, target, "reading-uncertain",
       "warning",
       `${uncertain.length} reading${uncertain.length > 1 ? "s" : ""} straddle${uncertain.length > 1 ? "" : "s"} a band edge, e.g. ${reads(uncertain[0])}`,
       "Across the parts' tolerance and the cable's temperature range the panel could report either side of the edge; such a loop gives intermittent reports.",
     );
-  // Thin margins on readings that are otherwise right.
-  let thin: Reading | null = null;
-  for (const r of rows)
-    if (!r.uncertain && r.marginOhms < Infinity && r.marginOhms < 0.05 * Math.max(r.nominalOhms ?? 0, 1) && isOnly(r, r.expected === "short" ? ["short", "trouble"] : r.expected === "open" ? ["open", "trouble"] : [r.expected])) {
-      if (!thin || r.marginOhms < thin.marginOhms) thin = r;
-    }
   if (thin)
     push(out, target, "margin-thin", "note", `${reads(thin)}, only ${formatOhms(thin.marginOhms)} from a band edge`, "A small margin leaves little room for a contact that ages, a joint that corrodes or a hotter cable run.");
 
   // States the panel can't tell apart (pairs with different expected reports and a shared report).
   if (analysis.indistinguishable.length) {
-    const seen = new Set<string>();
+    // one example per pair of expected reports
+    const seen: number[] = [];
     const pairs: string[] = [];
     for (const [i, j] of analysis.indistinguishable) {
-      const key = `${rows[i].expected}|${rows[j].expected}`;
-      if (seen.has(key)) continue;
-      seen.add(key);
+      const key = REPORT_BIT[rows[i].expected] * 1024 + REPORT_BIT[rows[j].expected];
+      if (seen.includes(key)) continue;
+      seen.push(key);
       if (pairs.length < 4) pairs.push(`${rows[i].label} and ${rows[j].label}`);
     }
     push(out, target, "readings-indistinguishable",
       "note",
-      `The panel can't tell apart: ${pairs.join("; ")}${seen.size > pairs.length ? "; …" : ""}`,
+      `The panel can't tell apart: ${pairs.join("; ")}${seen.length > pairs.length ? "; …" : ""}`,
       "These situations give the same report, so the panel — and whoever answers it — can't know which one happened.",
     );
   }

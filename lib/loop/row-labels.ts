@@ -21,17 +21,18 @@ export const REPORT_WORDS: Record<Report, string> = {
 };
 
 export function statesLabel(detectors: readonly LoopDetector[], states: readonly DetectorState[]): string {
-  const active: string[] = [];
-  const tampered: string[] = [];
+  let active = "";
+  let tampered = "";
+  let nActive = 0;
   for (let i = 0; i < states.length; i++) {
-    if (states[i] === "active") active.push(detectors[i].label);
-    else if (states[i] === "tamper") tampered.push(detectors[i].label);
+    if (states[i] === "active") {
+      active = nActive++ === 0 ? detectors[i].label : `${active} and ${detectors[i].label}`;
+    } else if (states[i] === "tamper") tampered = tampered === "" ? detectors[i].label : `${tampered} and ${detectors[i].label}`;
   }
-  if (active.length === 0 && tampered.length === 0) return "all at rest";
-  const parts: string[] = [];
-  if (active.length) parts.push(active.length === states.length && states.length > 2 ? "all active" : `${active.join(" and ")} active`);
-  if (tampered.length) parts.push(`${tampered.join(" and ")} tamper open`);
-  return parts.join(", ");
+  if (nActive === 0 && tampered === "") return "all at rest";
+  const a = nActive === 0 ? "" : nActive === states.length && states.length > 2 ? "all active" : `${active} active`;
+  const t = tampered === "" ? "" : `${tampered} tamper open`;
+  return a && t ? `${a}, ${t}` : a || t;
 }
 
 export function rowLabel(detectors: readonly LoopDetector[], states: readonly DetectorState[], fault: Fault): string {
