@@ -41,5 +41,6 @@ export function rowLabel(detectors: readonly LoopDetector[], states: readonly De
 }
 
 export function reportsWords(reports: readonly Report[]): string {
+  if (reports.length === 1) return REPORT_WORDS[reports[0]];
   return reports.map((r) => REPORT_WORDS[r]).join(" or ");
 }

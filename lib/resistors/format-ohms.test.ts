@@ -22,3 +22,19 @@ describe("formatting ohms", () => {
     expect(formatOhmsRange(Infinity, Infinity)).toBe("∞ Ω");
   });
 });
+
+describe("formatting agrees with toFixed", () => {
+  it("on a sweep of values", () => {
+    // reference: the mantissa rounded by Number.prototype.toFixed, trailing zeros dropped
+    const ref = (x: number) => {
+      const s = x >= 100 ? x.toFixed(0) : x >= 10 ? x.toFixed(1) : x.toFixed(2);
+      return s.includes(".") ? s.replace(/0+$/, "").replace(/\.$/, "") : s;
+    };
+    for (let i = 0; i < 20000; i++) {
+      const x = 0.01 + i * 0.0497;
+      const tie = (y: number) => Math.abs(y - Math.floor(y) - 0.5) < 1e-6;
+      if (tie(x * 100) || tie(x * 10) || tie(x)) continue; // exact halves may round either way
+      expect(formatOhms(x)).toBe(`${ref(x)} Ω`);
+    }
+  });
+});
