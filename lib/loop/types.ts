@@ -47,6 +47,7 @@ export interface LoopSpec {
 export type DetectorState = "rest" | "active" | "tamper";
 export type Fault = "none" | "short-panel" | "short-detector" | "cut";
 
+/** Read-only: rows of one state combination share their `states` array, and `reports` arrays may be shared and frozen. */
 export interface Reading {
   /** One entry per detector in `LoopSpec.detectors`. */
   states: DetectorState[];
