@@ -86,9 +86,8 @@ function addCase(net: Net, p: string, loop: LoopSpec, inputType: InputType | und
   const placement = scheme === "none" ? "at-detector" : loop.placement;
   const cut = c.fault === "cut";
   let panelEndA = pp; // where a short "at the panel end" lands: the cable's first conductor at the panel
-  let x: string; // far end of the feeding conductor
   const y = net.node(); // far end of the return conductor
-  x = net.node();
+  const x = net.node(); // far end of the feeding conductor
 
   if (placement === "at-detector") {
     net.r(pp, x, cut ? Infinity : rc);
