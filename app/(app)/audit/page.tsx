@@ -1,0 +1,43 @@
+import type { Metadata } from "next";
+import { pageActor } from "@/lib/server/session";
+import { listAudit } from "@/lib/server/audit-log";
+import { PageHeader } from "@/components/ui/page-header";
+import { Refusal } from "@/components/ui/refusal";
+import { Card } from "@/components/ui/card";
+
+export const metadata: Metadata = { title: "Audit log" };
+
+export default async function AuditPage() {
+  const { actor, allowed, reason } = await pageActor("audit:read", "/audit");
+  if (!allowed) return <Refusal reason={reason} />;
+  const entries = await listAudit(actor.organisationId);
+  return (
+    <>
+      <PageHeader title="Audit log" subtitle="Who changed what, and when (newest first)." />
+      <Card>
+        <table className="w-full text-sm">
+          <thead className="text-left text-slate-500">
+            <tr>
+              <th className="py-2">When (UTC)</th>
+              <th>Who</th>
+              <th>What</th>
+              <th>Item</th>
+            </tr>
+          </thead>
+          <tbody>
+            {entries.map((e) => (
+              <tr key={e.id} className="border-t border-line align-top">
+                <td className="py-2 whitespace-nowrap">{e.createdAt.replace("T", " ").slice(0, 19)}</td>
+                <td>{e.userName ?? "—"}</td>
+                <td>{e.action}</td>
+                <td>
+                  {e.entityType} {e.entityId}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </Card>
+    </>
+  );
+}

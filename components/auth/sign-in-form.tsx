@@ -1,0 +1,46 @@
+"use client";
+
+import { useState } from "react";
+import { signIn } from "next-auth/react";
+import { useRouter } from "next/navigation";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { Card } from "@/components/ui/card";
+
+export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
+  const router = useRouter();
+  const [error, setError] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+
+  async function onSubmit(e: React.FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    const form = new FormData(e.currentTarget);
+    setBusy(true);
+    setError(null);
+    const res = await signIn("credentials", { email: String(form.get("email") ?? ""), password: String(form.get("password") ?? ""), redirect: false });
+    setBusy(false);
+    if (!res || res.error) {
+      setError(res?.error && res.error !== "CredentialsSignin" ? res.error : "That e-mail and password do not match an account.");
+      return;
+    }
+    router.push(callbackUrl);
+    router.refresh();
+  }
+
+  return (
+    <Card>
+      <form onSubmit={onSubmit} className="space-y-4" aria-label="Sign in">
+        <Field label="E-mail" name="email" type="email" autoComplete="username" required />
+        <Field label="Password" name="password" type="password" autoComplete="current-password" required />
+        {error ? (
+          <p role="alert" className="rounded-md bg-fault-soft px-3 py-2 text-sm text-fault">
+            {error}
+          </p>
+        ) : null}
+        <Button type="submit" className="w-full" disabled={busy}>
+          {busy ? "Signing in…" : "Sign in"}
+        </Button>
+      </form>
+    </Card>
+  );
+}

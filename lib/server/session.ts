@@ -1,0 +1,50 @@
+import "server-only";
+import { getServerSession } from "next-auth";
+import { redirect } from "next/navigation";
+import { authOptions } from "./auth-options";
+import { db } from "./db";
+import { Membership, Organisation, User } from "@/models";
+import { can, refusal, type Permission, type Role } from "@/lib/auth/permissions";
+import { ApiError } from "./errors";
+
+export interface Actor {
+  userId: number;
+  organisationId: number;
+  organisationName: string;
+  role: Role;
+  name: string;
+  email: string;
+}
+
+/**
+ * The signed-in member, re-read from the database on every request so that a changed role
+ * or a removed membership takes effect at once (the token only names the user and organisation).
+ */
+export async function currentActor(): Promise<Actor | null> {
+  const session = (await getServerSession(authOptions())) as { userId?: number; organisationId?: number } | null;
+  if (!session?.userId || !session.organisationId) return null;
+  db();
+  const membership = await Membership.findOne({
+    where: { userId: session.userId, organisationId: session.organisationId },
+    include: [{ model: User, attributes: ["name", "email"] }, { model: Organisation, attributes: ["name"] }],
+  });
+  if (!membership) return null;
+  const m = membership as Membership & { User: User; Organisation: Organisation };
+  return { userId: m.userId, organisationId: m.organisationId, organisationName: m.Organisation.name, role: m.role, name: m.User.name, email: m.User.email };
+}
+
+/** For API handlers and actions: 401 when signed out, 403 when the role lacks the permission. */
+export async function requireActor(permission: Permission): Promise<Actor> {
+  const actor = await currentActor();
+  if (!actor) throw new ApiError(401, "Sign in to continue.");
+  if (!can(actor.role, permission)) throw new ApiError(403, refusal(actor.role, permission));
+  return actor;
+}
+
+/** For pages: the sign-in page when signed out; the caller renders the refusal when `allowed` is false. */
+export async function pageActor(permission: Permission, returnTo: string): Promise<{ actor: Actor; allowed: boolean; reason: string }> {
+  const actor = await currentActor();
+  if (!actor) redirect(`/sign-in?callbackUrl=${encodeURIComponent(returnTo)}`);
+  const allowed = can(actor.role, permission);
+  return { actor, allowed, reason: allowed ? "" : refusal(actor.role, permission) };
+}

@@ -1,0 +1,12 @@
+// Runs pending migrations against DATABASE_URL: `tsx scripts/migrate.ts [up|down]`.
+import { Sequelize } from "sequelize";
+import * as mariadb from "mariadb";
+import { migrator } from "../lib/server/migrator";
+
+const url = process.env.DATABASE_URL;
+if (!url) throw new Error("DATABASE_URL is not set");
+const sequelize = new Sequelize(url, { dialect: "mariadb", dialectModule: mariadb, logging: false });
+const umzug = migrator(sequelize);
+const done = process.argv[2] === "down" ? await umzug.down() : await umzug.up();
+console.log(done.length ? `migrations applied: ${done.map((m) => m.name).join(", ")}` : "database schema is up to date");
+await sequelize.close();

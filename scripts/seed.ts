@@ -1,0 +1,18 @@
+// Demo data (a fictional organisation and building), seeded only into an empty database.
+import { Sequelize } from "sequelize";
+import * as mariadb from "mariadb";
+import bcrypt from "bcryptjs";
+import { initModels, Organisation } from "../models";
+import { seedDemo } from "../lib/demo/seed-demo";
+
+const url = process.env.DATABASE_URL;
+if (!url) throw new Error("DATABASE_URL is not set");
+const sequelize = new Sequelize(url, { dialect: "mariadb", dialectModule: mariadb, logging: false, define: { underscored: true } });
+initModels(sequelize);
+if ((await Organisation.count()) > 0) {
+  console.log("demo data: database not empty, left as it is");
+} else {
+  await sequelize.transaction((t) => seedDemo(t, (p) => bcrypt.hash(p, 10)));
+  console.log("demo data: seeded (sign-ins in README.md)");
+}
+await sequelize.close();

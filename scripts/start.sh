@@ -1,0 +1,28 @@
+#!/usr/bin/env bash
+# One command from a fresh clone to the app on http://localhost:3000 (bound to 127.0.0.1):
+# npm packages, MariaDB (Debian package), migrations, demo data, fake SMTP, production build, server.
+set -euo pipefail
+source "$(dirname "$0")/env.sh"
+cd "$ROOT"
+
+ensure_node_modules
+bash scripts/db.sh up
+
+export DATABASE_URL="$(db_url loopwright)"
+export NEXTAUTH_URL="http://localhost:3000"
+export NEXTAUTH_SECRET="$(cat "$DATA_DIR/session-secret")"
+export SMTP_PORT
+export LOOPWRIGHT_DEV_OUTBOX=1
+
+npx tsx scripts/migrate.ts
+npx tsx scripts/seed.ts
+
+bash scripts/mail-sink.sh start "$SMTP_PORT" "$DATABASE_URL"
+
+# Rebuild only when a source file is newer than the last build.
+if [ ! -f .next/BUILD_ID ] || [ -n "$(git ls-files -z 2>/dev/null | xargs -0 -r find 2>/dev/null -newer .next/BUILD_ID -print -quit)" ]; then
+  npx next build
+fi
+
+echo "Loopwright on http://localhost:3000 — demo sign-ins are in README.md; outbox at /dev/outbox. Ctrl-C stops the app; npm run stop stops MariaDB and the mail sink."
+exec npx next start --hostname 127.0.0.1 --port 3000
