@@ -1,8 +1,11 @@
 import { defineConfig, devices } from "@playwright/test";
 
 // Debian's Chromium, never a browser download. The app runs from a production build on :3100
-// against its own fresh database (scripts/serve-e2e.sh).
+// against its own fresh database (scripts/serve-e2e.sh). E2E_PORT and NEXT_DIST_DIR let runs coexist.
 const chromiumArgs = ["--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-first-run", "--disable-quic"];
+
+const port = Number(process.env.E2E_PORT ?? 3100);
+const baseURL = `http://localhost:${port}`;
 
 export default defineConfig({
   testDir: "tests/e2e",
@@ -12,7 +15,7 @@ export default defineConfig({
   timeout: 60_000,
   reporter: [["list"]],
   use: {
-    baseURL: "http://localhost:3100",
+    baseURL,
     headless: true,
     trace: "off",
     screenshot: "only-on-failure",
@@ -21,7 +24,7 @@ export default defineConfig({
   projects: [{ name: "chromium", use: { ...devices["Desktop Chrome"], launchOptions: { executablePath: "/usr/bin/chromium", args: chromiumArgs } } }],
   webServer: {
     command: "bash scripts/serve-e2e.sh",
-    url: "http://localhost:3100/api/health",
+    url: `${baseURL}/api/health`,
     reuseExistingServer: false,
     timeout: 120_000,
     stdout: "ignore",
