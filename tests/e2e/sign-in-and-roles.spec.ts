@@ -69,3 +69,15 @@ test("an admin invites a member by e-mail; the invitee sets a password from the 
   await expect(invitee.getByTestId("whoami")).toContainText("Installer");
   await other.close();
 });
+
+test("responses carry the security headers and the session cookie is httpOnly and SameSite", async ({ page, request }) => {
+  const res = await request.get("/sign-in");
+  const h = res.headers();
+  expect(h["content-security-policy"]).toContain("frame-ancestors 'none'");
+  expect(h["x-frame-options"]).toBe("DENY");
+  expect(h["x-content-type-options"]).toBe("nosniff");
+  await signIn(page, "designer");
+  const cookie = (await page.context().cookies()).find((c) => c.name === "loopwright.session");
+  expect(cookie?.httpOnly).toBe(true);
+  expect(cookie?.sameSite).toBe("Lax");
+});
