@@ -1,0 +1,104 @@
+// components.schemas of the OpenAPI document, generated from the zod schemas the handlers parse with
+// (zod 4's z.toJSONSchema over a registry, so shared schemas become $refs instead of copies).
+import { z } from "zod";
+import { idSchema, inputTypeSchema, reportSchema } from "@/lib/catalog/schema";
+import { analyzeRequestSchema, inputTypeRefSchema, loopSpecSchema } from "@/lib/loop";
+import { siteInputSchema, siteUpdateSchema } from "@/lib/sites/site-schema";
+import { acceptSchema, inviteSchema, roleChangeSchema } from "@/lib/server/members";
+import { roles } from "@/lib/auth/permissions";
+import { findingSchema, loopAnalysisJsonSchema, readingJsonSchema, resistorUseSchema } from "./loop-analysis-schema";
+
+export type JsonSchema = Record<string, unknown>;
+
+export const REF = (id: string) => ({ $ref: `#/components/schemas/${id}` });
+
+export const errorBodySchema = z
+  .object({
+    error: z.string().meta({ description: "One plain sentence saying what went wrong." }),
+    issues: z
+      .array(
+        z.strictObject({
+          path: z.string().meta({ description: 'Dotted path into the request body, e.g. "loop.cable.lengthM"; "(body)" for the body as a whole.' }),
+          message: z.string(),
+        }),
+      )
+      .optional()
+      .meta({ description: "One entry per invalid field (422)." }),
+  })
+  .meta({ description: "The one error shape of every route." });
+
+const siteSummarySchema = z.strictObject({
+  id: z.number().int(),
+  name: z.string(),
+  address: z.string(),
+  description: z.string(),
+  installerUserId: z.number().int().nullable(),
+  updatedAt: z.iso.datetime(),
+});
+const siteDetailSchema = siteSummarySchema.extend({
+  areas: z.array(z.strictObject({ id: z.number().int(), name: z.string(), rooms: z.array(z.strictObject({ id: z.number().int(), name: z.string() })) })),
+});
+const memberListSchema = z.strictObject({
+  members: z.array(z.strictObject({ membershipId: z.number().int(), userId: z.number().int(), name: z.string(), email: z.string(), role: z.enum(roles) })),
+  invitations: z.array(z.strictObject({ id: z.number().int(), email: z.string(), role: z.enum(roles), expiresAt: z.iso.datetime() })),
+});
+const healthSchema = z.strictObject({
+  status: z.enum(["ok", "degraded"]),
+  database: z.strictObject({ state: z.enum(["up", "down"]), latencyMs: z.number().nonnegative().optional() }),
+});
+const inputTypeListSchema = z.strictObject({
+  inputTypes: z.array(inputTypeSchema),
+});
+
+/** Component name → zod schema. Every name here becomes `#/components/schemas/<name>`. */
+const named: Record<string, z.ZodType> = {
+  Id: idSchema,
+  Report: reportSchema,
+  InputType: inputTypeSchema,
+  InputTypeList: inputTypeListSchema,
+  LoopSpec: loopSpecSchema,
+  AnalyzeRequest: analyzeRequestSchema,
+  Reading: readingJsonSchema,
+  Finding: findingSchema,
+  ResistorUse: resistorUseSchema,
+  LoopAnalysis: loopAnalysisJsonSchema,
+  Error: errorBodySchema,
+  SiteInput: siteInputSchema,
+  SiteUpdate: siteUpdateSchema,
+  SiteSummary: siteSummarySchema,
+  SiteDetail: siteDetailSchema,
+  Invitation: inviteSchema,
+  InvitationAcceptance: acceptSchema,
+  RoleChange: roleChangeSchema,
+  MemberList: memberListSchema,
+  Health: healthSchema,
+};
+
+export function componentSchemas(): Record<string, JsonSchema> {
+  const registry = z.registry<{ id: string }>();
+  for (const [id, schema] of Object.entries(named)) registry.add(schema, { id });
+  const { schemas } = z.toJSONSchema(registry, {
+    // Requests are described as a client writes them (defaults optional); responses have no defaults.
+    io: "input",
+    target: "draft-2020-12",
+    // Refinements (cross-field rules) can't be written in JSON Schema; the 422 issues name them.
+    unrepresentable: "any",
+    uri: (id) => `#/components/schemas/${id}`,
+    override: (ctx) => {
+      // inputType is parsed by a transform: an id, or a whole input type.
+      if (ctx.zodSchema === inputTypeRefSchema) {
+        for (const k of Object.keys(ctx.jsonSchema)) delete (ctx.jsonSchema as JsonSchema)[k];
+        Object.assign(ctx.jsonSchema, {
+          description: "An input type id from the caller's catalog (shipped plus the organisation's upload), or a whole input type.",
+          oneOf: [REF("Id"), REF("InputType")],
+        });
+      }
+    },
+  });
+  const out: Record<string, JsonSchema> = {};
+  for (const [id, s] of Object.entries(schemas)) {
+    const { $schema: _s, $id: _i, ...rest } = s as JsonSchema;
+    out[id] = rest;
+  }
+  return out;
+}

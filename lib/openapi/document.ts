@@ -1,0 +1,220 @@
+// The OpenAPI 3.1 description of Loopwright's HTTP API, served at GET /api/openapi.json.
+// tests/unit/openapi-document.test.ts holds it against every route.ts under app/api.
+import type { Permission } from "@/lib/auth/permissions";
+import { permissionLabels, permissionTable } from "@/lib/auth/permissions";
+import { componentSchemas, REF, type JsonSchema } from "./components";
+
+type Method = "get" | "post" | "put" | "patch" | "delete";
+
+interface OperationSpec {
+  summary: string;
+  description?: string;
+  tag: string;
+  /** null: public. */
+  permission: Permission | null;
+  pathParams?: { name: string; description: string; schema?: JsonSchema }[];
+  query?: { name: string; description: string; schema: JsonSchema; required?: boolean }[];
+  /** Component name of the JSON body. */
+  body?: string;
+  ok: { status?: number; description: string; schema?: JsonSchema; contentType?: string };
+  /** Error statuses beyond the ones every route gives (401/403 for signed-in routes, 422 with a body, 500). */
+  errors?: number[];
+}
+
+const ERROR_WORDS: Record<number, string> = {
+  400: "The body is not valid JSON.",
+  401: "Not signed in.",
+  403: "Signed in, but the role lacks the permission (the message names who has it).",
+  404: "Nothing with that id in the caller's organisation (another organisation's ids read as missing).",
+  409: "Conflicts with what exists.",
+  413: "The body is too large (2 MiB).",
+  415: "The body is not sent as application/json.",
+  422: "Some fields are not valid: `issues` lists each with its dotted path.",
+  429: "Too many attempts; wait before trying again.",
+  500: "Something went wrong on the server; details are logged, never sent.",
+  503: "The database is not answering; nothing was saved.",
+};
+
+const errorResponse = (status: number) => ({ description: ERROR_WORDS[status] ?? "Refused.", content: { "application/json": { schema: REF("Error") } } });
+
+function rolesOf(p: Permission): string {
+  return (permissionTable[p] as readonly string[]).join(", ");
+}
+
+function operation(id: string, spec: OperationSpec): Record<string, unknown> {
+  const statuses = new Set<number>(spec.errors ?? []);
+  if (spec.permission) {
+    statuses.add(401);
+    statuses.add(403);
+  }
+  if (spec.body) [400, 413, 415, 422].forEach((s) => statuses.add(s));
+  if (spec.query) statuses.add(422);
+  if (spec.pathParams?.length) statuses.add(404);
+  statuses.add(500);
+  const responses: Record<string, unknown> = {
+    [String(spec.ok.status ?? 200)]: {
+      description: spec.ok.description,
+      ...(spec.ok.schema ? { content: { [spec.ok.contentType ?? "application/json"]: { schema: spec.ok.schema } } } : {}),
+    },
+  };
+  for (const s of [...statuses].sort((a, b) => a - b)) responses[String(s)] = errorResponse(s);
+  const access = spec.permission
+    ? `Permission \`${spec.permission}\` (${permissionLabels[spec.permission]}): roles ${rolesOf(spec.permission)}.`
+    : "Public: no session needed.";
+  return {
+    operationId: id,
+    summary: spec.summary,
+    description: [spec.description, access].filter(Boolean).join("\n\n"),
+    tags: [spec.tag],
+    ...(spec.permission ? { "x-permission": spec.permission } : { security: [] }),
+    ...(spec.pathParams || spec.query
+      ? {
+          parameters: [
+            ...(spec.pathParams ?? []).map((p) => ({ name: p.name, in: "path", required: true, description: p.description, schema: p.schema ?? { type: "integer", minimum: 1 } })),
+            ...(spec.query ?? []).map((q) => ({ name: q.name, in: "query", required: q.required ?? false, description: q.description, schema: q.schema })),
+          ],
+        }
+      : {}),
+    ...(spec.body ? { requestBody: { required: true, content: { "application/json": { schema: REF(spec.body) } } } } : {}),
+    responses,
+  };
+}
+
+const siteId = { name: "siteId", description: "A site of the caller's organisation." };
+const membershipId = { name: "membershipId", description: "A membership of the caller's organisation." };
+
+/** Path → method → operation. Every route.ts under app/api must appear here. */
+const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = {
+  "/api/health": {
+    get: ["getHealth", { tag: "service", summary: "The app answers; whether the database does", permission: null, ok: { description: "App and database up.", schema: REF("Health") }, errors: [503] }],
+  },
+  "/api/openapi.json": {
+    get: ["getOpenApi", { tag: "service", summary: "This description of the API (OpenAPI 3.1)", permission: null, ok: { description: "The OpenAPI document.", schema: { type: "object" } } }],
+  },
+  "/api/auth/{nextauth}": {
+    get: [
+      "authGet",
+      {
+        tag: "session",
+        summary: "Session endpoints of the sign-in library: session, csrf, providers, signout page",
+        description: "The path after /api/auth/ may hold more than one segment (e.g. callback/credentials); browsers use these through the sign-in page.",
+        permission: null,
+        pathParams: [{ name: "nextauth", description: "session, csrf, providers, signin, signout, callback/credentials …", schema: { type: "string" } }],
+        ok: { description: "Session JSON, or a redirect." },
+      },
+    ],
+    post: [
+      "authPost",
+      {
+        tag: "session",
+        summary: "Sign in with e-mail and password, sign out (form posts with the CSRF token)",
+        permission: null,
+        pathParams: [{ name: "nextauth", description: "signin/credentials, callback/credentials, signout …", schema: { type: "string" } }],
+        ok: { description: "A redirect, or JSON with the next URL." },
+        errors: [429],
+      },
+    ],
+  },
+  "/api/sites": {
+    get: ["listSites", { tag: "sites", summary: "The caller's organisation's sites", permission: "site:read", ok: { description: "The sites, by name.", schema: { type: "object", properties: { sites: { type: "array", items: REF("SiteSummary") } }, required: ["sites"] } } }],
+    post: ["createSite", { tag: "sites", summary: "Create a site with its floors/areas and rooms", permission: "site:write", body: "SiteInput", ok: { description: "The new site.", schema: REF("SiteDetail") } }],
+  },
+  "/api/sites/{siteId}": {
+    get: ["getSite", { tag: "sites", summary: "One site with areas and rooms", permission: "site:read", pathParams: [siteId], ok: { description: "The site.", schema: REF("SiteDetail") } }],
+    patch: ["updateSite", { tag: "sites", summary: "Rename, re-address, assign the installer", permission: "site:write", pathParams: [siteId], body: "SiteUpdate", ok: { description: "The site as saved.", schema: REF("SiteDetail") } }],
+  },
+  "/api/members": {
+    get: ["listMembers", { tag: "members", summary: "Members and open invitations of the caller's organisation", permission: "members:read", ok: { description: "Members and invitations.", schema: REF("MemberList") } }],
+    post: [
+      "inviteMember",
+      {
+        tag: "members",
+        summary: "Invite someone by e-mail with a role",
+        permission: "members:manage",
+        body: "Invitation",
+        ok: { description: "The invitation was sent.", schema: { type: "object", properties: { email: { type: "string" }, role: { type: "string" } }, required: ["email", "role"] } },
+        errors: [409],
+      },
+    ],
+  },
+  "/api/members/{membershipId}": {
+    patch: ["changeRole", { tag: "members", summary: "Change a member's role", permission: "members:manage", pathParams: [membershipId], body: "RoleChange", ok: { description: "The role was changed.", schema: { type: "object" } }, errors: [409] }],
+  },
+  "/api/invitations/accept": {
+    post: [
+      "acceptInvitation",
+      { tag: "members", summary: "The invitee sets a name and password with the e-mailed token", permission: null, body: "InvitationAcceptance", ok: { description: "Joined; the invitee can now sign in.", schema: { type: "object" } }, errors: [404, 409] },
+    ],
+  },
+  "/api/loops/analyze": {
+    post: [
+      "analyzeLoop",
+      {
+        tag: "loops",
+        summary: "Analyse a loop: every state × fault reading, its report, the verdicts and the findings",
+        description:
+          "The body names an input type (an id from the caller's catalog, or a whole input type) and describes the loop as wired. " +
+          "Impossible loops are refused with 422 and one issue per problem (e.g. `loop.cable.lengthM`: cable length can't be negative; " +
+          "`loop.detectors`: a shared input takes exactly two detectors; `loop.scheme`: the input type does not support the scheme). " +
+          'An unknown input type id gives 404. Open-loop readings are sent as the string "Infinity". ' +
+          "Findings on smoke, heat and other life-safety devices carry the caution: local fire code, the authority having jurisdiction and licensed practice decide; Loopwright is an aid, not an approval.",
+        permission: "loop:analyze",
+        body: "AnalyzeRequest",
+        ok: { description: "The analysis.", schema: REF("LoopAnalysis") },
+        errors: [404],
+      },
+    ],
+  },
+  "/api/loops/input-types": {
+    get: [
+      "listLoopInputTypes",
+      { tag: "loops", summary: "The input types a loop can be analysed against: the shipped catalog plus the organisation's upload", permission: "loop:analyze", ok: { description: "Input types, by id.", schema: REF("InputTypeList") } },
+    ],
+  },
+};
+
+export interface OpenApiDocument {
+  openapi: "3.1.0";
+  info: Record<string, unknown>;
+  paths: Record<string, Partial<Record<Method, Record<string, unknown>>>>;
+  components: Record<string, unknown>;
+  [key: string]: unknown;
+}
+
+let cached: OpenApiDocument | undefined;
+
+export function openApiDocument(): OpenApiDocument {
+  if (cached) return cached;
+  const paths: OpenApiDocument["paths"] = {};
+  for (const [path, methods] of Object.entries(PATHS)) {
+    paths[path] = {};
+    for (const [method, entry] of Object.entries(methods) as [Method, [string, OperationSpec]][]) paths[path][method] = operation(entry[0], entry[1]);
+  }
+  cached = {
+    openapi: "3.1.0",
+    jsonSchemaDialect: "https://spec.openapis.org/oas/3.1/dialect/base",
+    info: {
+      title: "Loopwright API",
+      version: "0.1.0",
+      description:
+        "Design aid for intruder and fire alarm systems. Every route answers JSON; errors have one shape, `{ error, issues? }`. " +
+        "Signed-in routes use the session cookie set by signing in; objects of another organisation read as missing (404). " +
+        "Loopwright's figures are an aid, not an approval: fire and other life-safety systems follow local codes, the authority having jurisdiction and licensed practice.",
+    },
+    servers: [{ url: "/" }],
+    security: [{ session: [] }],
+    tags: [
+      { name: "loops", description: "Loop supervision: readings, reports, faults and findings." },
+      { name: "sites", description: "Buildings the organisation designs for." },
+      { name: "members", description: "Who works on the organisation's designs, and in which role." },
+      { name: "session", description: "Signing in and out." },
+      { name: "service", description: "Health and this description." },
+    ],
+    paths,
+    components: {
+      securitySchemes: { session: { type: "apiKey", in: "cookie", name: "loopwright.session", description: "Set by signing in through /api/auth." } },
+      schemas: componentSchemas(),
+    },
+  };
+  return cached;
+}
