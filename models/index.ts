@@ -1,6 +1,11 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 
 import { roles, type Role } from "../lib/auth/permissions";
+import { initCatalogModels } from "./catalog";
+
+export { OrganisationCatalog } from "./catalog";
+import { initDesignModels } from "./design";
+export { Layout, LayoutRevision, ScheduleDetectorRecord } from "./design";
 
 export class Organisation extends Model<InferAttributes<Organisation>, InferCreationAttributes<Organisation>> {
   declare id: CreationOptional<number>;
@@ -173,9 +178,12 @@ export function initModels(sequelize: Sequelize) {
     { sequelize, modelName: "SignInThrottle", tableName: "sign_in_throttle", timestamps: false },
   );
 
+  initCatalogModels(sequelize);
+
   Membership.belongsTo(Organisation, { foreignKey: "organisationId" });
   Membership.belongsTo(User, { foreignKey: "userId" });
   User.hasMany(Membership, { foreignKey: "userId" });
   Site.hasMany(Area, { foreignKey: "siteId", as: "areas" });
   Area.hasMany(Room, { foreignKey: "areaId", as: "rooms" });
+  initDesignModels(sequelize);
 }
