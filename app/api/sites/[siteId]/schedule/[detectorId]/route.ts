@@ -1,0 +1,12 @@
+import { z } from "zod";
+import { idParam, route } from "@/lib/server/route";
+import { deleteDetectors, updateDetector } from "@/lib/server/schedules";
+import { updateDetectorFormSchema } from "@/lib/schedule/schema";
+
+const params = z.object({ siteId: idParam, detectorId: idParam });
+
+// PATCH /api/sites/:siteId/schedule/:detectorId — change one detector
+export const PATCH = route({ permission: "schedule:write", params, body: updateDetectorFormSchema }, async ({ actor, params, body }) => updateDetector(actor, params.siteId, params.detectorId, body));
+
+// DELETE /api/sites/:siteId/schedule/:detectorId — delete one detector
+export const DELETE = route({ permission: "schedule:write", params }, async ({ actor, params }) => deleteDetectors(actor, params.siteId, [String(params.detectorId)]));

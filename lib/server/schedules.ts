@@ -1,0 +1,189 @@
+import "server-only";
+import { Op, type Transaction } from "sequelize";
+import { z } from "zod";
+import { db } from "./db";
+import { audit } from "./audit";
+import { ApiError, notFound } from "./errors";
+import { findSite } from "./sites";
+import { effectiveCatalogFor } from "./catalogs";
+import type { Actor } from "./session";
+import { ScheduleDetectorRecord } from "@/models";
+import { can, refusal, type Permission } from "@/lib/auth/permissions";
+import type { Catalog } from "@/lib/catalog/schema";
+import { parseScheduleCsv, serializeScheduleCsv, type CsvRowError } from "@/lib/schedule/csv";
+import type { BulkEditPatch, CreateDetectorForm, ScheduleCableGauge, ScheduleDetector, ScheduleRow, UpdateDetectorForm } from "@/lib/schedule/schema";
+
+// A site's device schedule in MariaDB. Everyone in the organisation reads it; "schedule:write" changes it.
+
+/** The catalog an organisation designs with: the shipped entries plus its uploaded file. Read-only (shared through a cache). */
+export async function catalogFor(organisationId: number): Promise<Catalog> {
+  return effectiveCatalogFor(organisationId);
+}
+
+/** The server layer checks permissions too, so a caller that skipped the route wrapper is still refused. */
+export function ensureCan(actor: Actor, permission: Permission) {
+  if (!can(actor.role, permission)) throw new ApiError(403, refusal(actor.role, permission));
+}
+
+export function toScheduleDetector(r: ScheduleDetectorRecord): ScheduleDetector {
+  const gauge: ScheduleCableGauge = r.gaugeAwg != null ? { awg: r.gaugeAwg } : { mm2: Number(r.gaugeMm2) };
+  return { id: String(r.id), label: r.label, catalogId: r.catalogId, area: r.area, room: r.room, cableM: Number(r.cableM), gauge, supervision: r.supervision };
+}
+
+function gaugeColumns(g: ScheduleCableGauge): { gaugeAwg: number | null; gaugeMm2: number | null } {
+  return "awg" in g ? { gaugeAwg: g.awg, gaugeMm2: null } : { gaugeAwg: null, gaugeMm2: g.mm2 };
+}
+
+function rowColumns(row: Partial<ScheduleRow>) {
+  const { gauge, ...rest } = row;
+  return { ...rest, ...(gauge ? gaugeColumns(gauge) : {}) };
+}
+
+/** The schedule of a site already known to be the caller's, in schedule order (one query). */
+export async function loadSchedule(siteId: number, transaction?: Transaction): Promise<ScheduleDetector[]> {
+  const rows = await ScheduleDetectorRecord.findAll({ where: { siteId }, order: [["position", "ASC"], ["id", "ASC"]], transaction });
+  return rows.map(toScheduleDetector);
+}
+
+export async function listSchedule(actor: Actor, siteId: number): Promise<ScheduleDetector[]> {
+  await findSite(actor, siteId);
+  return loadSchedule(siteId);
+}
+
+function checkCatalogIds(catalog: Catalog, ids: { path: string; catalogId: string }[]) {
+  const known = new Set(catalog.detectors.map((d) => d.id));
+  const issues = ids.filter((x) => !known.has(x.catalogId)).map((x) => ({ path: x.path, message: `${x.catalogId} is not a detector in your organisation's catalog` }));
+  if (issues.length) throw new ApiError(422, "Some fields are not valid.", issues);
+}
+
+async function nextPosition(siteId: number, transaction: Transaction): Promise<number> {
+  const max = (await ScheduleDetectorRecord.max("position", { where: { siteId }, transaction })) as number | null;
+  return max == null ? 0 : max + 1;
+}
+
+export async function createDetector(actor: Actor, siteId: number, input: CreateDetectorForm): Promise<ScheduleDetector> {
+  ensureCan(actor, "schedule:write");
+  await findSite(actor, siteId);
+  checkCatalogIds(await catalogFor(actor.organisationId), [{ path: "catalogId", catalogId: input.catalogId }]);
+  const rec = await db().transaction(async (transaction) => {
+    const position = await nextPosition(siteId, transaction);
+    const r = await ScheduleDetectorRecord.create({ siteId, position, ...rowColumns(input) } as ScheduleDetectorRecord, { transaction });
+    await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "schedule.create", entityType: "schedule_detector", entityId: r.id, detail: { siteId, label: input.label, catalogId: input.catalogId } }, transaction);
+    return r;
+  });
+  return toScheduleDetector(rec);
+}
+
+export async function updateDetector(actor: Actor, siteId: number, detectorId: number, patch: UpdateDetectorForm): Promise<ScheduleDetector> {
+  ensureCan(actor, "schedule:write");
+  await findSite(actor, siteId);
+  if (patch.catalogId) checkCatalogIds(await catalogFor(actor.organisationId), [{ path: "catalogId", catalogId: patch.catalogId }]);
+  const rec = await db().transaction(async (transaction) => {
+    const r = await ScheduleDetectorRecord.findOne({ where: { id: detectorId, siteId }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!r) throw notFound("That detector");
+    await r.update(rowColumns(patch), { transaction });
+    await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "schedule.update", entityType: "schedule_detector", entityId: r.id, detail: { siteId, patch } }, transaction);
+    return r;
+  });
+  return toScheduleDetector(rec);
+}
+
+/** Detector ids in API bodies are the schedule's string ids; here they are row ids of this site. */
+function rowIds(ids: string[]): number[] {
+  const out = ids.map((s) => (/^\d{1,10}$/.test(s) ? Number(s) : NaN));
+  const bad = ids.filter((_, i) => !Number.isSafeInteger(out[i]) || out[i] <= 0);
+  if (bad.length) throw new ApiError(422, "Some fields are not valid.", [{ path: "ids", message: `not detector ids of this schedule: ${bad.slice(0, 5).join(", ")}` }]);
+  return [...new Set(out)];
+}
+
+/** One patch applied to many rows in one transaction; refused whole when any id is not in this site's schedule. */
+export async function bulkEditDetectors(actor: Actor, siteId: number, edit: BulkEditPatch): Promise<{ updated: number }> {
+  ensureCan(actor, "schedule:write");
+  await findSite(actor, siteId);
+  if (edit.patch.catalogId) checkCatalogIds(await catalogFor(actor.organisationId), [{ path: "patch.catalogId", catalogId: edit.patch.catalogId }]);
+  const ids = rowIds(edit.ids);
+  return db().transaction(async (transaction) => {
+    const found = await ScheduleDetectorRecord.count({ where: { id: { [Op.in]: ids }, siteId }, transaction });
+    if (found !== ids.length) throw new ApiError(404, `${ids.length - found} of the selected detectors are not in this schedule; nothing was changed.`);
+    await ScheduleDetectorRecord.update(rowColumns(edit.patch), { where: { id: { [Op.in]: ids }, siteId }, transaction });
+    await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "schedule.bulk-update", entityType: "site", entityId: siteId, detail: { ids, patch: edit.patch } }, transaction);
+    return { updated: ids.length };
+  });
+}
+
+export const deleteDetectorsSchema = z.strictObject({ ids: z.array(z.string().min(1).max(64)).min(1).max(5000) });
+
+export async function deleteDetectors(actor: Actor, siteId: number, idList: string[]): Promise<{ deleted: number }> {
+  ensureCan(actor, "schedule:write");
+  await findSite(actor, siteId);
+  const ids = rowIds(idList);
+  return db().transaction(async (transaction) => {
+    const rows = await ScheduleDetectorRecord.findAll({ where: { id: { [Op.in]: ids }, siteId }, attributes: ["id", "label"], transaction });
+    if (rows.length !== ids.length) throw new ApiError(404, `${ids.length - rows.length} of the selected detectors are not in this schedule; nothing was deleted.`);
+    await ScheduleDetectorRecord.destroy({ where: { id: { [Op.in]: ids }, siteId }, transaction });
+    await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "schedule.delete", entityType: "site", entityId: siteId, detail: { detectors: rows.map((r) => ({ id: r.id, label: r.label })) } }, transaction);
+    return { deleted: rows.length };
+  });
+}
+
+export const MAX_IMPORT_BYTES = 1024 * 1024;
+export const importRequestSchema = z.strictObject({
+  mode: z.enum(["preview", "confirm"]),
+  csv: z.string().max(MAX_IMPORT_BYTES, "the file is larger than 1 MiB"),
+  fileName: z.string().max(200).optional(),
+});
+export type ImportRequest = z.infer<typeof importRequestSchema>;
+
+export interface ImportPreview {
+  /** Rows that would be stored, each with its record number in the file (the header is row 1). */
+  rows: { row: number; detector: ScheduleRow }[];
+  errors: CsvRowError[];
+  /** Records in the file besides the header and blank lines. */
+  records: number;
+}
+
+function preview(csv: string, catalog: Catalog): ImportPreview {
+  const parsed = parseScheduleCsv(csv, catalog);
+  const rows = parsed.rows.map((detector, i) => ({ row: parsed.rowNumbers[i], detector }));
+  const badRows = new Set(parsed.errors.filter((e) => e.row > 1).map((e) => e.row));
+  return { rows, errors: parsed.errors, records: rows.length + badRows.size };
+}
+
+/** Parse and check a CSV file; nothing is stored. */
+export async function previewImport(actor: Actor, siteId: number, csv: string): Promise<ImportPreview> {
+  ensureCan(actor, "schedule:write");
+  await findSite(actor, siteId);
+  return preview(csv, await catalogFor(actor.organisationId));
+}
+
+/** Store every row of the file after the site's existing rows, in one transaction; a file with any error stores nothing (422). */
+export async function confirmImport(actor: Actor, siteId: number, csv: string, fileName?: string): Promise<{ imported: number; detectors: ScheduleDetector[] }> {
+  ensureCan(actor, "schedule:write");
+  await findSite(actor, siteId);
+  const p = preview(csv, await catalogFor(actor.organisationId));
+  if (p.errors.length)
+    throw new ApiError(
+      422,
+      `The file has ${p.errors.length} problem${p.errors.length === 1 ? "" : "s"}; nothing was imported. Correct the rows and import again.`,
+      p.errors.slice(0, 200).map((e) => ({ path: `row ${e.row}${e.column ? `, ${e.column}` : ""}`, message: e.message })),
+      { errors: p.errors },
+    );
+  if (p.rows.length === 0) throw new ApiError(422, "The file has no detector rows; nothing was imported.");
+  const created = await db().transaction(async (transaction) => {
+    const base = await nextPosition(siteId, transaction);
+    const recs = await ScheduleDetectorRecord.bulkCreate(
+      p.rows.map((r, i) => ({ siteId, position: base + i, ...rowColumns(r.detector) }) as ScheduleDetectorRecord),
+      { transaction },
+    );
+    await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "schedule.import", entityType: "site", entityId: siteId, detail: { fileName: fileName ?? null, rows: recs.length } }, transaction);
+    return recs.length;
+  });
+  return { imported: created, detectors: await loadSchedule(siteId) };
+}
+
+export async function exportScheduleCsv(actor: Actor, siteId: number): Promise<{ csv: string; fileName: string }> {
+  const site = await findSite(actor, siteId);
+  const rows = await loadSchedule(siteId);
+  const slug = site.name.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "") || `site-${siteId}`;
+  return { csv: serializeScheduleCsv(rows), fileName: `${slug}-device-schedule.csv` };
+}
