@@ -1,8 +1,9 @@
 # Shared settings for the project's scripts. Sourced, not run.
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 DATA_DIR="$ROOT/.data"
-DB_DIR="$DATA_DIR/mariadb"
 DB_PORT="${LOOPWRIGHT_DB_PORT:-3316}"
+# Another port is another private instance (the fault tests stop and start one of their own).
+if [ "$DB_PORT" = 3316 ]; then DB_DIR="$DATA_DIR/mariadb"; else DB_DIR="$DATA_DIR/mariadb-$DB_PORT"; fi
 DB_SOCKET="$DB_DIR/mysqld.sock"
 DB_USER="loopwright"
 DB_PASSWORD="${LOOPWRIGHT_DB_PASSWORD:-loopwright-local}"
