@@ -1,0 +1,131 @@
+import type { Catalog } from "@/lib/catalog/schema";
+import { billOfMaterials, batterySize, type BillOfMaterials } from "@/lib/bom/bill-of-materials";
+import { boardNames } from "@/lib/layout/names";
+import type { LayoutDocument } from "@/lib/layout/schema";
+import { FAULT_WORDS } from "@/lib/loop/row-labels";
+import type { Schedule } from "@/lib/schedule/schema";
+import { createSolver } from "@/lib/solver";
+
+// Side by side: what each candidate layout costs, how many inputs it uses and leaves, what each supply carries,
+// how much of it is supervised, what the solver found, and what each shared input trades away.
+
+export interface CompareCandidate {
+  id?: number | string;
+  name: string;
+  layout: LayoutDocument;
+}
+
+export interface SupplyColumn {
+  key: string;
+  name: string;
+  restMa: number;
+  alarmMa: number;
+  ratingMa: number;
+  /** Alarm load as a share of the rating, 0–1+. */
+  alarmLoad: number;
+  batteryNeededAh: number;
+  /** Common size it rounds up to; null when none fits. */
+  batteryAh: number | null;
+}
+
+export interface SharedTradeoff {
+  boardKey: string;
+  input: number;
+  detectors: string[];
+  inputsSaved: number;
+  lost: string[];
+  /** Plain words: the input saved against the supervision lost. */
+  text: string;
+}
+
+export interface ComparisonColumn {
+  id: number | string | null;
+  name: string;
+  cost: number;
+  unpricedLines: number;
+  inputs: { used: number; total: number; spare: number };
+  zones: number;
+  unplaced: number;
+  supplies: SupplyColumn[];
+  coverage: { used: number; covered: number; share: number | null };
+  findings: { error: number; warning: number; note: number };
+  shared: SharedTradeoff[];
+  bom: BillOfMaterials;
+}
+
+export interface LayoutComparison {
+  columns: ComparisonColumn[];
+  /** Column indices that are best on each measure (ties give several). */
+  best: { cost: number[]; coverage: number[]; errors: number[]; spare: number[] };
+  /** Short plain sentences on how the candidates differ. */
+  summary: string[];
+}
+
+function argBest(values: (number | null)[], better: (a: number, b: number) => boolean): number[] {
+  let best: number | null = null;
+  values.forEach((v) => {
+    if (v !== null && (best === null || better(v, best))) best = v;
+  });
+  return best === null ? [] : values.flatMap((v, i) => (v === best ? [i] : []));
+}
+
+const pct = (x: number | null) => (x === null ? "no inputs used" : `${Math.round(x * 100)} %`);
+const money = (x: number) => x.toFixed(2);
+
+function tradeoffText(where: string, detectors: string[], lost: string[]): string {
+  const who = detectors.join(" and ");
+  const kept = lost.length === 0;
+  const lostWords = lost.map((f) => FAULT_WORDS[f as keyof typeof FAULT_WORDS] ?? f);
+  return kept
+    ? `${where} carries ${who}: saves 1 input, and shorts and cuts are still reported; but one cable fault takes out both detectors, and the panel cannot say which of them the fault is on.`
+    : `${where} carries ${who}: saves 1 input, but ${lostWords.join(", ")} ${lostWords.length === 1 ? "is" : "are"} no longer reported as such, and one cable fault takes out both detectors.`;
+}
+
+export function compareLayouts(candidates: readonly CompareCandidate[], schedule: Schedule, catalog: Catalog): LayoutComparison {
+  const solver = createSolver(schedule, catalog);
+  const columns: ComparisonColumn[] = candidates.map((c) => {
+    const r = solver.solve(c.layout);
+    const bom = billOfMaterials(c.layout, schedule, catalog, r);
+    const names = boardNames(c.layout);
+    return {
+      id: c.id ?? null,
+      name: c.name,
+      cost: bom.total,
+      unpricedLines: bom.unpricedLines,
+      inputs: { used: r.totals.inputsUsed, total: r.totals.inputsTotal, spare: r.totals.inputsFree },
+      zones: r.totals.zonesUsed,
+      unplaced: r.totals.unplacedIds.length,
+      supplies: r.supplies.map((s) => {
+        const restMa = s.loadRestMa + s.ownRestMa;
+        const alarmMa = s.loadAlarmMa + s.ownAlarmMa;
+        return { key: s.supplyKey, name: s.name, restMa, alarmMa, ratingMa: s.ratingMa, alarmLoad: s.ratingMa > 0 ? s.loadAlarmMa / s.ratingMa : 0, batteryNeededAh: s.batteryNeededAh, batteryAh: s.batteryNeededAh > 0 ? batterySize(s.batteryNeededAh, s.maxBatteryAh) : null };
+      }),
+      coverage: r.coverage,
+      findings: r.counts,
+      shared: r.shared.entries.map((e) => {
+        const where = `${names.get(e.boardKey) ?? e.boardKey}, input ${e.input}`;
+        const labels = e.detectorIds.map((id) => schedule.find((d) => d.id === id)?.label ?? id);
+        return { boardKey: e.boardKey, input: e.input, detectors: labels, inputsSaved: 1, lost: [...e.lost], text: tradeoffText(where, labels, e.lost) };
+      }),
+      bom,
+    };
+  });
+
+  const best = {
+    cost: argBest(columns.map((c) => c.cost), (a, b) => a < b),
+    coverage: argBest(columns.map((c) => c.coverage.share), (a, b) => a > b),
+    errors: argBest(columns.map((c) => c.findings.error), (a, b) => a < b),
+    spare: argBest(columns.map((c) => c.inputs.spare), (a, b) => a > b),
+  };
+
+  const summary: string[] = [];
+  if (columns.length > 1 && best.cost.length) {
+    const cheapest = columns[best.cost[0]];
+    for (const c of columns) if (c !== cheapest && c.cost !== cheapest.cost) summary.push(`${c.name} costs ${money(c.cost - cheapest.cost)} more than ${cheapest.name} (${money(c.cost)} against ${money(cheapest.cost)}).`);
+  }
+  for (const c of columns) {
+    summary.push(`${c.name}: ${c.inputs.used} of ${c.inputs.total} inputs used, ${c.inputs.spare} spare; supervision coverage ${pct(c.coverage.share)}; ${c.findings.error} error${c.findings.error === 1 ? "" : "s"}, ${c.findings.warning} warning${c.findings.warning === 1 ? "" : "s"}.`);
+    if (c.shared.length) summary.push(`${c.name} saves ${c.shared.length} input${c.shared.length === 1 ? "" : "s"} by sharing: ${c.shared.map((s) => s.text).join(" ")}`);
+  }
+  return { columns, best, summary };
+}
