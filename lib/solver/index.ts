@@ -19,3 +19,4 @@ export type { BoardFigures, BusFigures, CapacityTotals, DetectorVoltage, InputFi
 export { batteryAh } from "@/lib/solver/battery";
 export { standbyProfiles, safetyFactors, standbyProfile, resolveStandby, CUSTOM_PROFILE_ID } from "@/lib/solver/standby-profiles";
 export { loopSpecFor, LOOP_TEMP_MIN_C, LOOP_TEMP_MAX_C, CONTACT_OHMS } from "@/lib/solver/loop-rules";
+export { suggestHardware, type SuggestOptions, type Suggestion, type SuggestionPart } from "@/lib/solver/suggest";

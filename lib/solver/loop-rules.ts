@@ -16,7 +16,7 @@ export const LOOP_TEMP_MAX_C = 40;
 export const CONTACT_OHMS = 0.1;
 
 /** The loop as the engine sees it: the input's wiring, its detectors, the longest cable run among them. */
-export function loopSpecFor(ri: ResolvedInput, inputType: InputType): LoopSpec {
+export function loopSpecFor(ri: Pick<ResolvedInput, "input" | "detectors">, inputType: InputType): LoopSpec {
   const longest = ri.detectors.reduce((a, b) => (b.sched.cableM > a.sched.cableM ? b : a));
   const { input } = ri;
   const spec: LoopSpec = {

@@ -209,7 +209,7 @@ describe("loop rules through the loop engine", () => {
   });
   it("accepts a smoke detector on a fire input of a fire panel", () => {
     const schedule = [det("s", "fx-smoke")];
-    const doc = emptyLayout("fx-panel-fire", { power: { standbyProfileId: "nfpa72-fire", safetyFactor: 1.25 }, inputs: [inp("panel", 1, ["s"], { scheme: "single-eol" })] });
+    const doc = emptyLayout("fx-panel-fire", { power: { standbyProfileId: "nfpa72-fire", safetyFactor: 1.25 }, inputs: [inp("panel", 1, ["s"])] });
     const r = solveLayout(doc, schedule, fixtureCatalog);
     expect(codes(r.findings).filter((c) => c.startsWith("life-safety-") && c !== "life-safety-caution")).toEqual([]);
     expect(codes(r.findings)).toContain("life-safety-caution");

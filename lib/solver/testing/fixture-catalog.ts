@@ -71,15 +71,16 @@ export const fixtureCatalogInput = {
     {
       id: "fx-fire",
       name: "Fixture fire input",
-      description: "Normally open detectors in parallel with a 4.7 kΩ end-of-line resistor.",
-      schemes: ["single-eol"],
+      description: "Normally open detectors: 4.7 kΩ in series and 2.2 kΩ across the contacts, so rest, alarm, short and cut all read apart.",
+      schemes: ["double-eol"],
       eolOhms: 4700,
+      alarmOhms: 2200,
       bands: {
-        "single-eol": [
-          { report: "short", fromOhms: 0, toOhms: 200 },
-          { report: "active", fromOhms: 200, toOhms: 1500 },
-          { report: "normal", fromOhms: 1500, toOhms: 6800 },
-          { report: "open", fromOhms: 6800, toOhms: null },
+        "double-eol": [
+          { report: "short", fromOhms: 0, toOhms: 1000 },
+          { report: "active", fromOhms: 1000, toOhms: 5800 },
+          { report: "normal", fromOhms: 5800, toOhms: 9000 },
+          { report: "open", fromOhms: 9000, toOhms: null },
         ],
       },
       tolerancePct: 5,
