@@ -1,0 +1,29 @@
+import { describe, expect, it } from "vitest";
+import { applyBulkEdit, bulkEditPatchSchema, createDetectorFormSchema, formatGauge, parseGauge, scheduleSchema, updateDetectorFormSchema } from "@/lib/schedule/schema";
+import { det } from "@/lib/solver/testing/fixture-schedule";
+
+describe("schedule schemas", () => {
+  it("parse gauges written as AWG or mm², and format them back", () => {
+    expect(["22 AWG", "22awg", "AWG 24", "0.5 mm2", "0,75 mm²", ".22 mm2"].map(parseGauge)).toEqual([{ awg: 22 }, { awg: 22 }, { awg: 24 }, { mm2: 0.5 }, { mm2: 0.75 }, { mm2: 0.22 }]);
+    expect(parseGauge("thick")).toBeNull();
+    expect(formatGauge({ awg: 18 })).toBe("18 AWG");
+    expect(formatGauge({ mm2: 1.5 })).toBe("1.5 mm2");
+  });
+  it("limit the cable run to more than 0 m and at most 2000 m", () => {
+    const row = { label: "Door", catalogId: "fx-door", area: "", room: "", gauge: { awg: 22 }, supervision: "single-eol" };
+    expect(createDetectorFormSchema.safeParse({ ...row, cableM: "12.5" }).data?.cableM).toBe(12.5); // a form's text field
+    expect(createDetectorFormSchema.safeParse({ ...row, cableM: 0 }).success).toBe(false);
+    expect(createDetectorFormSchema.safeParse({ ...row, cableM: 2000 }).success).toBe(true);
+    expect(createDetectorFormSchema.safeParse({ ...row, cableM: 2000.5 }).success).toBe(false);
+  });
+  it("refuse an empty update and a schedule with a repeated id", () => {
+    expect(updateDetectorFormSchema.safeParse({}).success).toBe(false);
+    expect(updateDetectorFormSchema.safeParse({ room: "Hall" }).success).toBe(true);
+    expect(scheduleSchema.safeParse([det("a", "fx-door"), det("a", "fx-pir")]).error?.issues[0].message).toMatch(/used twice/);
+  });
+  it("apply a bulk edit to the named rows only", () => {
+    const edit = bulkEditPatchSchema.parse({ ids: ["b"], patch: { area: "Upper", cableM: "30" } });
+    const out = applyBulkEdit([det("a", "fx-door"), det("b", "fx-door")], edit);
+    expect(out.map((d) => [d.id, d.area, d.cableM])).toEqual([["a", "Ground", 20], ["b", "Upper", 30]]);
+  });
+});
