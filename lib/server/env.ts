@@ -2,10 +2,12 @@ import "server-only";
 import { z } from "zod";
 
 // Secrets and addresses come only from the environment; a missing or malformed one stops start-up with its name.
+const required = () => z.string({ error: (i) => (i.input === undefined ? "is not set" : "must be text") });
+
 const envSchema = z.object({
-  DATABASE_URL: z.string().regex(/^mariadb:\/\//, "DATABASE_URL must be a mariadb:// URL"),
-  NEXTAUTH_SECRET: z.string().min(32, "NEXTAUTH_SECRET must be at least 32 characters"),
-  NEXTAUTH_URL: z.url(),
+  DATABASE_URL: required().regex(/^mariadb:\/\//, "DATABASE_URL must be a mariadb:// URL"),
+  NEXTAUTH_SECRET: required().min(32, "NEXTAUTH_SECRET must be at least 32 characters"),
+  NEXTAUTH_URL: required().pipe(z.url("NEXTAUTH_URL must be the public origin, e.g. http://localhost:3000")),
   SMTP_HOST: z.string().default("127.0.0.1"),
   SMTP_PORT: z.coerce.number().int().positive().default(2525),
   MAIL_FROM: z.string().default("Loopwright <no-reply@loopwright.invalid>"),
