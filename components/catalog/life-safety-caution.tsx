@@ -1,0 +1,18 @@
+/** The caution every fire / life-safety screen carries. */
+export function LifeSafetyCaution({ className = "" }: { className?: string }) {
+  return (
+    <p role="note" data-testid="life-safety-caution" className={`rounded-md border border-warn bg-warn-soft px-3 py-2 text-sm text-ink ${className}`}>
+      <strong className="text-warn">Life safety.</strong> Fire detection design must follow the local fire code and the authority having jurisdiction, and be installed and certified
+      by licensed people. Standby battery sizing for a fire system follows the same code. Loopwright&apos;s figures are an aid, not an approval.
+    </p>
+  );
+}
+
+/** For mains-fed hardware. */
+export function MainsCaution({ className = "" }: { className?: string }) {
+  return (
+    <p role="note" className={`rounded-md border border-line bg-white px-3 py-2 text-sm ${className}`}>
+      <strong>Mains power.</strong> Connecting mains is work for a qualified electrician under local wiring rules.
+    </p>
+  );
+}
