@@ -4,6 +4,7 @@ import * as mariadb from "mariadb";
 import bcrypt from "bcryptjs";
 import { initModels, Organisation } from "../models";
 import { seedDemo } from "../lib/demo/seed-demo";
+import { seedRivalOrganisation } from "../lib/demo/seed-rival";
 
 const url = process.env.DATABASE_URL;
 if (!url) throw new Error("DATABASE_URL is not set");
@@ -14,5 +15,10 @@ if ((await Organisation.count()) > 0) {
 } else {
   await sequelize.transaction((t) => seedDemo(t, (p) => bcrypt.hash(p, 10)));
   console.log("demo data: seeded (sign-ins in README.md)");
+  // test-only: a second organisation for the browser tests' cross-organisation checks
+  if (process.env.LOOPWRIGHT_SEED_RIVAL === "1") {
+    await sequelize.transaction((t) => seedRivalOrganisation(t, (p) => bcrypt.hash(p, 10)));
+    console.log("test data: rival organisation seeded");
+  }
 }
 await sequelize.close();

@@ -13,6 +13,8 @@ export NEXTAUTH_URL="http://localhost:$PORT"
 export NEXTAUTH_SECRET="$(cat "$DATA_DIR/session-secret")"
 export SMTP_PORT="$SMTP"
 export LOOPWRIGHT_DEV_OUTBOX=1
+# a second organisation, for the cross-organisation checks of tests/e2e/api-*.spec.ts
+export LOOPWRIGHT_SEED_RIVAL=1
 npx tsx scripts/migrate.ts
 npx tsx scripts/seed.ts
 bash scripts/mail-sink.sh stop "$SMTP"

@@ -1,0 +1,360 @@
+import type { BuildContext, RouteEntry } from "./types";
+
+// Every exported method of every route handler under app/, with a valid request built from ids found at run
+// time. tests/unit/api-registry.test.ts fails when a route method has no entry here, when an entry names a
+// route that is gone, and when an entry's permission differs from the one the handler declares.
+// Adding a route: add its entry here (a valid request, the success status, whether it names an organisation's object).
+
+/** Server actions: none. The policy is route handlers only (lib/server/route.ts); a file with the server-action
+ *  directive must be listed here, and the unit test fails until it is. */
+export const serverActionFiles: string[] = [];
+
+const loopBody = {
+  inputType: "input-2k2",
+  loop: {
+    scheme: "single-eol",
+    placement: "at-detector",
+    detectors: [{ label: "Front door", contact: "NC", tamper: true }],
+    tolerancePct: 5,
+    cable: { gauge: { mm2: 0.22 }, lengthM: 30, tempMinC: -10, tempMaxC: 40 },
+  },
+};
+
+const detectorBody = { label: "Matrix door", catalogId: "contact-door-surface", area: "Ground floor", room: "Hall", cableM: 12, gauge: { awg: 22 }, supervision: "single-eol" };
+
+export const scheduleCsv = ["label,type,area,room,cable_m,gauge,supervision", "Matrix front door,contact-door-surface,Ground floor,Hall,12,22 AWG,shared-ok", "Matrix hall motion,motion-wall,Ground floor,Hall,18,22 AWG,single-eol"].join("\n");
+
+/** The credentials a fresh sign-in uses: the caller's own, or the demo designer's for a signed-out caller. */
+const credentialsOf = (ctx: BuildContext) => ({ email: ctx.caller.email ?? "designer@quillfen.example", password: ctx.caller.password ?? "loop-demo-2026" });
+
+export const routes: RouteEntry[] = [
+  // next-auth
+  {
+    method: "GET",
+    path: "/api/auth/[...nextauth]",
+    access: "public",
+    body: "none",
+    success: 200,
+    orgScoped: false,
+    build: async () => ({ method: "GET", url: "/api/auth/session" }),
+    note: "next-auth's own endpoints (session, csrf, providers); the session is {} when signed out",
+  },
+  {
+    method: "POST",
+    path: "/api/auth/[...nextauth]",
+    access: "public",
+    body: "form",
+    success: 200,
+    orgScoped: false,
+    build: async (ctx) => ({ method: "POST", url: "/api/auth/callback/credentials", form: { ...credentialsOf(ctx), json: "true", callbackUrl: "/" }, csrf: true, fresh: true }),
+    note: "sign-in with e-mail and password (form, CSRF token); sent from a new cookie jar so the caller's own session is kept",
+  },
+
+  // catalog
+  { method: "GET", path: "/api/catalog", access: "catalog:read", body: "none", success: 200, orgScoped: false, build: async () => ({ method: "GET", url: "/api/catalog" }) },
+  {
+    method: "GET",
+    path: "/api/catalog/[entryId]",
+    access: "catalog:read",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "GET", url: `/api/catalog/${(await ctx.fixtures.catalogUpload()).addedEntryId}` }),
+    note: "an entry only the demo organisation's upload adds, so another organisation's member gets 404",
+  },
+  { method: "GET", path: "/api/catalog/uploads", access: "catalog:read", body: "none", success: 200, orgScoped: false, build: async () => ({ method: "GET", url: "/api/catalog/uploads" }) },
+  {
+    method: "POST",
+    path: "/api/catalog/uploads",
+    access: "catalog:upload",
+    body: "multipart",
+    success: 200,
+    orgScoped: false,
+    build: async (ctx) => ({ method: "POST", url: "/api/catalog/uploads", multipart: { mode: "preview", file: ctx.fixtures.goodCatalogFile() } }),
+    note: "preview mode (stores nothing); storing answers 201",
+  },
+  {
+    method: "GET",
+    path: "/api/catalog/uploads/[uploadId]",
+    access: "catalog:read",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "GET", url: `/api/catalog/uploads/${(await ctx.fixtures.catalogUpload()).uploadId}` }),
+  },
+
+  // health, OpenAPI
+  { method: "GET", path: "/api/health", access: "public", body: "none", success: 200, orgScoped: false, build: async () => ({ method: "GET", url: "/api/health" }) },
+  { method: "GET", path: "/api/openapi.json", access: "public", body: "none", success: 200, orgScoped: false, build: async () => ({ method: "GET", url: "/api/openapi.json" }) },
+
+  // invitations and members
+  {
+    method: "POST",
+    path: "/api/invitations/accept",
+    access: "public",
+    body: "json",
+    success: 200,
+    orgScoped: false,
+    build: async (ctx) => ({ method: "POST", url: "/api/invitations/accept", json: { token: await ctx.fixtures.invitationToken(), name: "Matrix Invitee", password: "wire-and-meter-77" } }),
+    requiredKeys: ["token", "name", "password"],
+    note: "public: the e-mailed token is the credential",
+  },
+  { method: "GET", path: "/api/members", access: "members:read", body: "none", success: 200, orgScoped: false, build: async () => ({ method: "GET", url: "/api/members" }) },
+  {
+    method: "POST",
+    path: "/api/members",
+    access: "members:manage",
+    body: "json",
+    success: 200,
+    orgScoped: false,
+    build: async (ctx) => ({ method: "POST", url: "/api/members", json: { email: ctx.fixtures.uniqueEmail("invitee"), role: "installer" } }),
+    requiredKeys: ["email", "role"],
+  },
+  {
+    method: "PATCH",
+    path: "/api/members/[membershipId]",
+    access: "members:manage",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "PATCH", url: `/api/members/${ctx.demo.installerMembershipId}`, json: { role: "installer" } }),
+    requiredKeys: ["role"],
+    note: "the demo installer's role set to the role it has, so the demo data stays as it is",
+  },
+
+  // layouts
+  {
+    method: "GET",
+    path: "/api/layouts/[layoutId]",
+    access: "layout:read",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "GET", url: `/api/layouts/${ctx.demo.layoutId}` }),
+  },
+  {
+    method: "PUT",
+    path: "/api/layouts/[layoutId]",
+    access: "layout:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => {
+      const l = await ctx.fixtures.newLayout();
+      return { method: "PUT", url: `/api/layouts/${l.layoutId}`, json: { version: l.version, document: l.document, note: "saved by the API matrix" } };
+    },
+    requiredKeys: ["version", "document"],
+  },
+  {
+    method: "DELETE",
+    path: "/api/layouts/[layoutId]",
+    access: "layout:write",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "DELETE", url: `/api/layouts/${(await ctx.fixtures.newLayout()).layoutId}` }),
+  },
+  {
+    method: "GET",
+    path: "/api/layouts/[layoutId]/revisions",
+    access: "layout:read",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "GET", url: `/api/layouts/${ctx.demo.layoutId}/revisions` }),
+  },
+  {
+    method: "GET",
+    path: "/api/layouts/[layoutId]/revisions/[rev]",
+    access: "layout:read",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "GET", url: `/api/layouts/${ctx.demo.layoutId}/revisions/1` }),
+  },
+  {
+    method: "POST",
+    path: "/api/layouts/[layoutId]/revisions/[rev]/restore",
+    access: "layout:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => {
+      const l = await ctx.fixtures.newLayout();
+      return { method: "POST", url: `/api/layouts/${l.layoutId}/revisions/1/restore`, json: { version: l.version } };
+    },
+    requiredKeys: [],
+  },
+
+  // loop bench
+  {
+    method: "POST",
+    path: "/api/loops/analyze",
+    access: "loop:analyze",
+    body: "json",
+    success: 200,
+    orgScoped: false,
+    build: async () => ({ method: "POST", url: "/api/loops/analyze", json: loopBody }),
+    requiredKeys: ["inputType", "loop"],
+    negativeAllowed: ["loop.cable.tempMinC", "loop.cable.tempMaxC"],
+  },
+  { method: "GET", path: "/api/loops/input-types", access: "loop:analyze", body: "none", success: 200, orgScoped: false, build: async () => ({ method: "GET", url: "/api/loops/input-types" }) },
+
+  // sites
+  { method: "GET", path: "/api/sites", access: "site:read", body: "none", success: 200, orgScoped: false, build: async () => ({ method: "GET", url: "/api/sites" }) },
+  {
+    method: "POST",
+    path: "/api/sites",
+    access: "site:write",
+    body: "json",
+    success: 200,
+    orgScoped: false,
+    build: async () => ({ method: "POST", url: "/api/sites", json: { name: "API matrix site", address: "1 Test Row", description: "Made by the API permission matrix.", areas: [{ name: "Ground floor", rooms: ["Hall"] }] } }),
+    requiredKeys: ["name"],
+  },
+  { method: "GET", path: "/api/sites/[siteId]", access: "site:read", body: "none", success: 200, orgScoped: true, build: async (ctx) => ({ method: "GET", url: `/api/sites/${ctx.demo.siteId}` }) },
+  {
+    method: "PATCH",
+    path: "/api/sites/[siteId]",
+    access: "site:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "PATCH", url: `/api/sites/${(await ctx.fixtures.scratchSite()).siteId}`, json: { description: "Checked by the API matrix.", address: "2 Test Row" } }),
+    requiredKeys: [],
+  },
+  {
+    method: "GET",
+    path: "/api/sites/[siteId]/layouts",
+    access: "layout:read",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "GET", url: `/api/sites/${ctx.demo.siteId}/layouts` }),
+  },
+  {
+    method: "POST",
+    path: "/api/sites/[siteId]/layouts",
+    access: "layout:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "POST", url: `/api/sites/${(await ctx.fixtures.scratchSite()).siteId}/layouts`, json: { name: "API matrix layout", panelId: "panel-large-32" } }),
+    requiredKeys: ["name", "panelId"],
+  },
+  {
+    method: "GET",
+    path: "/api/sites/[siteId]/schedule",
+    access: "site:read",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "GET", url: `/api/sites/${ctx.demo.siteId}/schedule` }),
+  },
+  {
+    method: "POST",
+    path: "/api/sites/[siteId]/schedule",
+    access: "schedule:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "POST", url: `/api/sites/${(await ctx.fixtures.scratchSite()).siteId}/schedule`, json: detectorBody }),
+    requiredKeys: ["label", "catalogId", "area", "room", "cableM", "gauge", "supervision"],
+  },
+  {
+    method: "PATCH",
+    path: "/api/sites/[siteId]/schedule",
+    access: "schedule:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => {
+      const d = await ctx.fixtures.newDetector();
+      return { method: "PATCH", url: `/api/sites/${d.siteId}/schedule`, json: { ids: [d.detectorId], patch: { cableM: 15, room: "Hall" } } };
+    },
+    requiredKeys: ["ids", "patch"],
+  },
+  {
+    method: "DELETE",
+    path: "/api/sites/[siteId]/schedule",
+    access: "schedule:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => {
+      const d = await ctx.fixtures.newDetector();
+      return { method: "DELETE", url: `/api/sites/${d.siteId}/schedule`, json: { ids: [d.detectorId] } };
+    },
+    requiredKeys: ["ids"],
+  },
+  {
+    method: "PATCH",
+    path: "/api/sites/[siteId]/schedule/[detectorId]",
+    access: "schedule:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => {
+      const d = await ctx.fixtures.newDetector();
+      return { method: "PATCH", url: `/api/sites/${d.siteId}/schedule/${d.detectorId}`, json: { label: "Matrix door, renamed", cableM: 14 } };
+    },
+    requiredKeys: [],
+  },
+  {
+    method: "DELETE",
+    path: "/api/sites/[siteId]/schedule/[detectorId]",
+    access: "schedule:write",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => {
+      const d = await ctx.fixtures.newDetector();
+      return { method: "DELETE", url: `/api/sites/${d.siteId}/schedule/${d.detectorId}` };
+    },
+  },
+  {
+    method: "GET",
+    path: "/api/sites/[siteId]/schedule/export.csv",
+    access: "site:read",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "GET", url: `/api/sites/${ctx.demo.siteId}/schedule/export.csv` }),
+  },
+  {
+    method: "POST",
+    path: "/api/sites/[siteId]/schedule/import",
+    access: "schedule:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "POST", url: `/api/sites/${(await ctx.fixtures.scratchSite()).siteId}/schedule/import`, json: { mode: "preview", csv: scheduleCsv, fileName: "matrix.csv" } }),
+    requiredKeys: ["mode", "csv"],
+    note: "preview mode stores nothing; confirm stores the rows in one transaction",
+  },
+  {
+    method: "POST",
+    path: "/api/sites/[siteId]/suggestions",
+    access: "layout:read",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "POST", url: `/api/sites/${(await ctx.fixtures.scratchSite()).siteId}/suggestions`, json: { busCableM: 50 } }),
+    requiredKeys: [],
+  },
+
+  // development outbox
+  {
+    method: "GET",
+    path: "/dev/outbox/[mailId]/attachments/[index]",
+    access: "public",
+    body: "none",
+    success: 200,
+    orgScoped: false,
+    build: async (ctx) => {
+      const a = await ctx.fixtures.mailAttachment();
+      return { method: "GET", url: `/dev/outbox/${a.mailId}/attachments/${a.index}` };
+    },
+    note: "development only: answers 404 unless LOOPWRIGHT_DEV_OUTBOX=1 (the e2e server sets it); never enabled in production",
+  },
+];

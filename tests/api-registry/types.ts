@@ -1,0 +1,99 @@
+import type { Permission, Role } from "@/lib/auth/permissions";
+
+// The shape of the route registry: one entry per exported method of every route handler, with what it
+// needs to be called for real. Shared by the unit test (entries against the file system) and the browser
+// tests (permission matrix, cross-organisation checks, fuzz).
+
+export const methods = ["GET", "POST", "PUT", "PATCH", "DELETE"] as const;
+export type Method = (typeof methods)[number];
+
+/** A permission from lib/auth/permissions.ts, or "public" for a route that checks no session. */
+export type Access = Permission | "public";
+
+export type FilePart = { name: string; mimeType: string; buffer: Buffer };
+
+/** One HTTP request, described without a client so the registry stays free of Playwright at run time. */
+export interface RequestSpec {
+  method: Method;
+  /** Path and query, e.g. /api/sites/3 */
+  url: string;
+  /** Sent as application/json. */
+  json?: unknown;
+  /** Sent as multipart/form-data. */
+  multipart?: Record<string, string | FilePart>;
+  /** Sent as application/x-www-form-urlencoded. */
+  form?: Record<string, string>;
+  /** Add next-auth's csrfToken to `form`, fetched first in the same cookie jar. */
+  csrf?: boolean;
+  /** Send from a new, signed-out cookie jar (the request would change the caller's own session). */
+  fresh?: boolean;
+}
+
+export type CallerKind = "signed-out" | "demo" | "rival";
+
+/** Who makes the request. */
+export interface Caller {
+  kind: CallerKind;
+  role: Role | null;
+  email: string | null;
+  password: string | null;
+}
+
+/** Objects of the demo organisation found at run time (read-only: the requests never change them). */
+export interface DemoObjects {
+  organisationId: number;
+  siteId: number;
+  layoutId: number;
+  /** A membership whose role a request may "change" to the role it already has. */
+  installerMembershipId: number;
+}
+
+/** Fresh objects in the demo organisation, made as its admin, for requests that change or delete what they name. */
+export interface Fixtures {
+  /** A site of the demo organisation with a small device schedule, made once per run. */
+  scratchSite(): Promise<{ siteId: number; detectorIds: string[] }>;
+  /** A new detector on the scratch site. */
+  newDetector(): Promise<{ siteId: number; detectorId: string }>;
+  /** A new layout on the scratch site (revision 1, version 1) and its document. */
+  newLayout(): Promise<{ layoutId: number; version: number; document: unknown }>;
+  /** A fresh invitation token of the demo organisation (read from the fake SMTP server's outbox). */
+  invitationToken(): Promise<string>;
+  /** A stored catalog version of the demo organisation; its file adds `addedEntryId`. */
+  catalogUpload(): Promise<{ uploadId: number; addedEntryId: string }>;
+  /** A mail with one attachment in the development outbox. */
+  mailAttachment(): Promise<{ mailId: number; index: number }>;
+  /** A catalog file the shipped catalog accepts. */
+  goodCatalogFile(): FilePart;
+  /** A unique e-mail address under .example. */
+  uniqueEmail(prefix: string): string;
+}
+
+export interface BuildContext {
+  caller: Caller;
+  demo: DemoObjects;
+  fixtures: Fixtures;
+}
+
+export interface RouteEntry {
+  method: Method;
+  /** The route file's folder under app/, route groups dropped: /api/sites/[siteId]/layouts */
+  path: string;
+  access: Access;
+  /** What the request carries; "json" entries are fuzzed. */
+  body: "none" | "json" | "multipart" | "form";
+  /** Status of a valid request by a caller the permission allows. */
+  success: number;
+  /** Names an object of an organisation (path id, or a catalog entry only an upload has): another organisation's member gets 404. */
+  orgScoped: boolean;
+  /** A valid request; for orgScoped entries it names the demo organisation's objects. */
+  build(ctx: BuildContext): Promise<RequestSpec>;
+  /** Fuzz: top-level body keys whose absence makes the body invalid. */
+  requiredKeys?: string[];
+  /** Fuzz: dotted paths of numbers that may be negative (a temperature), left out of the negative-number mutation. */
+  negativeAllowed?: string[];
+  /** Why the route exists or behaves as it does, when it is not plain. */
+  note?: string;
+}
+
+/** Registry key of a route method: "PUT /api/layouts/[layoutId]". */
+export const routeKey = (e: { method: string; path: string }) => `${e.method} ${e.path}`;
