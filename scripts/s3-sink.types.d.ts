@@ -1,0 +1,16 @@
+// Types for the untyped `s3rver` package (the local fake S3 server), as scripts/s3-sink.ts and the tests use it.
+declare module "s3rver" {
+  interface S3rverOptions {
+    port?: number;
+    address?: string;
+    directory: string;
+    silent?: boolean;
+    resetOnClose?: boolean;
+    configureBuckets?: { name: string; configs?: (string | Buffer)[] }[];
+  }
+  export default class S3rver {
+    constructor(options: S3rverOptions);
+    run(): Promise<{ address: string; family: string; port: number }>;
+    close(): Promise<void>;
+  }
+}
