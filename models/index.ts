@@ -4,6 +4,8 @@ import { roles, type Role } from "../lib/auth/permissions";
 import { initCatalogModels } from "./catalog";
 
 export { OrganisationCatalog } from "./catalog";
+import { initDesignModels } from "./design";
+export { Layout, LayoutRevision, ScheduleDetectorRecord } from "./design";
 
 export class Organisation extends Model<InferAttributes<Organisation>, InferCreationAttributes<Organisation>> {
   declare id: CreationOptional<number>;
@@ -183,4 +185,5 @@ export function initModels(sequelize: Sequelize) {
   User.hasMany(Membership, { foreignKey: "userId" });
   Site.hasMany(Area, { foreignKey: "siteId", as: "areas" });
   Area.hasMany(Room, { foreignKey: "areaId", as: "rooms" });
+  initDesignModels(sequelize);
 }

@@ -1,0 +1,14 @@
+import { z } from "zod";
+import { idParam, route } from "@/lib/server/route";
+import { deleteLayout, getLayout, saveLayout, saveLayoutSchema } from "@/lib/server/layouts";
+
+const params = z.object({ layoutId: idParam });
+
+// GET /api/layouts/:layoutId — the layout and its current revision's document
+export const GET = route({ permission: "layout:read", params }, async ({ actor, params }) => getLayout(actor, params.layoutId));
+
+// PUT /api/layouts/:layoutId — save a revision (409 { error, currentVersion } on a stale version, 422 on unknown references)
+export const PUT = route({ permission: "layout:write", params, body: saveLayoutSchema }, async ({ actor, params, body }) => saveLayout(actor, params.layoutId, body));
+
+// DELETE /api/layouts/:layoutId — delete the layout and its revisions
+export const DELETE = route({ permission: "layout:write", params }, async ({ actor, params }) => deleteLayout(actor, params.layoutId));

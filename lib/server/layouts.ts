@@ -1,0 +1,335 @@
+import "server-only";
+import { col, literal, Op, type Transaction } from "sequelize";
+import { z } from "zod";
+import { db } from "./db";
+import { audit } from "./audit";
+import { ApiError, conflict, notFound } from "./errors";
+import { findSite } from "./sites";
+import { catalogFor, ensureCan, loadSchedule } from "./schedules";
+import type { Actor } from "./session";
+import { Layout, LayoutRevision, Site, User } from "@/models";
+import type { Catalog } from "@/lib/catalog/schema";
+import { boardEntry, indexCatalog } from "@/lib/layout/catalog-index";
+import { boardName } from "@/lib/layout/names";
+import { layoutDocumentSchema, layoutPowerSchema, type LayoutDocument } from "@/lib/layout/schema";
+import type { Schedule } from "@/lib/schedule/schema";
+import { solveLayout, suggestHardware, type SolveResult, type Suggestion } from "@/lib/solver";
+import type { Severity } from "@/lib/findings";
+import { summarizeSolve, type LayoutSolveSummary } from "@/lib/layout/layout-summary";
+
+export type { LayoutSolveSummary };
+
+// Layouts and their revisions. Every save is a new revision; the layout row carries a version for optimistic concurrency.
+
+export interface LayoutMeta {
+  id: number;
+  siteId: number;
+  name: string;
+  status: string;
+  version: number;
+  currentRevision: number;
+  createdAt: string;
+  updatedAt: string;
+  summary: LayoutSolveSummary;
+}
+
+export interface LayoutView {
+  layout: LayoutMeta;
+  document: LayoutDocument;
+}
+
+export interface RevisionMeta {
+  revision: number;
+  note: string;
+  createdAt: string;
+  createdBy: string | null;
+  summary: LayoutSolveSummary;
+}
+
+export const summarize = summarizeSolve;
+
+const nameSchema = z.string().trim().min(1, "a name is needed").max(200);
+const noteSchema = z.string().trim().max(500);
+
+export const createLayoutSchema = z.union([
+  z.strictObject({ name: nameSchema, note: noteSchema.optional(), document: layoutDocumentSchema }),
+  z.strictObject({ name: nameSchema, note: noteSchema.optional(), panelId: z.string().min(1).max(63) }),
+  z.strictObject({ name: nameSchema, note: noteSchema.optional(), suggestion: z.strictObject({ allowShared: z.boolean(), busCableM: z.number().nonnegative().max(100000).optional() }) }),
+]);
+export type CreateLayoutInput = z.infer<typeof createLayoutSchema>;
+
+export const saveLayoutSchema = z.strictObject({
+  version: z.number().int().positive(),
+  document: layoutDocumentSchema,
+  name: nameSchema.optional(),
+  note: noteSchema.optional(),
+});
+export type SaveLayoutInput = z.infer<typeof saveLayoutSchema>;
+
+export const restoreSchema = z.strictObject({ version: z.number().int().positive().optional() }).optional();
+
+export const suggestRequestSchema = z
+  .strictObject({ busCableM: z.number().nonnegative().max(100000).optional(), power: layoutPowerSchema.optional() })
+  .optional();
+
+/** What in the document names things that are not in the catalog or the schedule (422 on save). */
+export function referenceIssues(doc: LayoutDocument, schedule: Schedule, catalog: Catalog): { path: string; message: string }[] {
+  const ix = indexCatalog(catalog);
+  const issues: { path: string; message: string }[] = [];
+  if (!ix.panels.has(doc.panelId)) issues.push({ path: "document.panelId", message: `control panel ${doc.panelId} is not in your organisation's catalog` });
+  doc.boards.forEach((b, i) => {
+    if (!boardEntry(ix, b.kind, b.catalogId)) issues.push({ path: `document.boards.${i}.catalogId`, message: `${boardName(doc, b.key)}: ${b.catalogId} is not a ${b.kind} board in the catalog` });
+  });
+  const ids = new Set(schedule.map((d) => d.id));
+  doc.inputs.forEach((inp, i) =>
+    inp.detectorIds.forEach((d, j) => {
+      if (!ids.has(d)) issues.push({ path: `document.inputs.${i}.detectorIds.${j}`, message: `detector ${d} is not in this site's device schedule` });
+    }),
+  );
+  return issues;
+}
+
+function checkReferences(doc: LayoutDocument, schedule: Schedule, catalog: Catalog) {
+  const issues = referenceIssues(doc, schedule, catalog);
+  if (issues.length) throw new ApiError(422, "The layout refers to hardware or detectors that do not exist; it was not saved.", issues);
+}
+
+type LayoutWithCurrent = Layout & { current?: LayoutRevision; site?: Site };
+
+function meta(l: Layout, summary: LayoutSolveSummary): LayoutMeta {
+  return {
+    id: l.id,
+    siteId: l.siteId,
+    name: l.name,
+    status: l.status,
+    version: l.version,
+    currentRevision: l.currentRevision,
+    createdAt: l.createdAt.toISOString(),
+    updatedAt: l.updatedAt.toISOString(),
+    summary,
+  };
+}
+
+const ownSite = (actor: Actor) => ({ model: Site, as: "site", attributes: ["id", "name", "organisationId"], where: { organisationId: actor.organisationId }, required: true });
+const currentRevision = (attributes?: string[]) => ({ model: LayoutRevision, as: "current", required: true, ...(attributes ? { attributes } : {}), where: { revision: { [Op.eq]: col("Layout.current_revision") } } });
+
+/** One query: the layout (only if its site is the actor's organisation's) with its current revision. */
+async function findLayoutWithCurrent(actor: Actor, layoutId: number, transaction?: Transaction): Promise<LayoutWithCurrent & { current: LayoutRevision; site: Site }> {
+  const l = (await Layout.findOne({ where: { id: layoutId }, include: [ownSite(actor), currentRevision()], transaction })) as LayoutWithCurrent | null;
+  if (!l || !l.current || !l.site) throw notFound("That layout");
+  return l as LayoutWithCurrent & { current: LayoutRevision; site: Site };
+}
+
+async function findOwnLayout(actor: Actor, layoutId: number, transaction?: Transaction): Promise<Layout> {
+  const l = await Layout.findOne({ where: { id: layoutId }, include: [ownSite(actor)], transaction });
+  if (!l) throw notFound("That layout");
+  return l;
+}
+
+/** The site's layouts, newest first, each with its current revision's summary (two queries). */
+export async function listLayouts(actor: Actor, siteId: number): Promise<LayoutMeta[]> {
+  await findSite(actor, siteId);
+  const rows = (await Layout.findAll({ where: { siteId }, include: [currentRevision(["id", "revision", "summary"])], order: [["updatedAt", "DESC"], ["id", "DESC"]] })) as LayoutWithCurrent[];
+  return rows.map((l) => meta(l, l.current!.summary as LayoutSolveSummary));
+}
+
+export async function getLayout(actor: Actor, layoutId: number): Promise<LayoutView> {
+  const l = await findLayoutWithCurrent(actor, layoutId);
+  return { layout: meta(l, l.current.summary as LayoutSolveSummary), document: l.current.document as LayoutDocument };
+}
+
+export interface EditorData extends LayoutView {
+  site: { id: number; name: string };
+  schedule: Schedule;
+  catalog: Catalog;
+}
+
+/** Everything the editor needs, in a bounded number of queries: the layout with its site and current revision, the schedule, the catalog. */
+export async function loadLayoutForEditor(actor: Actor, layoutId: number): Promise<EditorData> {
+  const l = await findLayoutWithCurrent(actor, layoutId);
+  const [schedule, catalog] = await Promise.all([loadSchedule(l.siteId), catalogFor(actor.organisationId)]);
+  return {
+    layout: meta(l, l.current.summary as LayoutSolveSummary),
+    document: l.current.document as LayoutDocument,
+    site: { id: l.site.id, name: l.site.name },
+    schedule,
+    catalog,
+  };
+}
+
+/** A blank layout on a panel, with the standby profile the schedule calls for. */
+export function blankDocument(panelId: string, schedule: Schedule, catalog: Catalog): LayoutDocument {
+  const ix = indexCatalog(catalog);
+  const fire = schedule.some((d) => {
+    const c = ix.detectors.get(d.catalogId);
+    return !!c && (c.lifeSafety || c.category === "smoke" || c.category === "heat");
+  });
+  return { panelId, boards: [], inputs: [], power: fire ? { standbyProfileId: "nfpa72-fire", safetyFactor: 1.25 } : { standbyProfileId: "intruder-grade-2", safetyFactor: 1.2 }, busCableM: 0 };
+}
+
+async function insertLayout(actor: Actor, siteId: number, name: string, document: LayoutDocument, summary: LayoutSolveSummary, note: string, detail: Record<string, unknown>): Promise<LayoutMeta> {
+  return db().transaction(async (transaction) => {
+    const l = await Layout.create({ siteId, name, currentRevision: 1, version: 1, createdBy: actor.userId }, { transaction });
+    await LayoutRevision.create({ layoutId: l.id, revision: 1, document, summary, note, createdBy: actor.userId }, { transaction });
+    await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "layout.create", entityType: "layout", entityId: l.id, detail: { siteId, name, ...detail, counts: summary.counts } }, transaction);
+    return meta(l, summary);
+  });
+}
+
+export async function createLayout(actor: Actor, siteId: number, input: CreateLayoutInput): Promise<LayoutView> {
+  ensureCan(actor, "layout:write");
+  await findSite(actor, siteId);
+  const [schedule, catalog] = await Promise.all([loadSchedule(siteId), catalogFor(actor.organisationId)]);
+  let document: LayoutDocument;
+  let from: string;
+  if ("document" in input) {
+    document = input.document;
+    from = "document";
+  } else if ("panelId" in input) {
+    document = blankDocument(input.panelId, schedule, catalog);
+    from = "blank";
+  } else {
+    const s = suggestHardware(schedule, catalog, { allowShared: input.suggestion.allowShared, busCableM: input.suggestion.busCableM });
+    if (!s.found) throw new ApiError(422, `No suggestion: ${s.reason}`);
+    document = s.layout;
+    from = input.suggestion.allowShared ? "suggestion-shared" : "suggestion-single";
+  }
+  checkReferences(document, schedule, catalog);
+  const summary = summarize(document, solveLayout(document, schedule, catalog));
+  const layout = await insertLayout(actor, siteId, input.name, document, summary, input.note ?? "", { from });
+  return { layout, document };
+}
+
+/**
+ * Save a new revision. The version check and the increment are one UPDATE ... WHERE version = ?;
+ * no row changed means someone saved in between: 409 with the current version.
+ */
+export async function saveLayout(actor: Actor, layoutId: number, input: SaveLayoutInput): Promise<{ layout: LayoutMeta }> {
+  ensureCan(actor, "layout:write");
+  const l = await findOwnLayout(actor, layoutId);
+  const [schedule, catalog] = await Promise.all([loadSchedule(l.siteId), catalogFor(actor.organisationId)]);
+  checkReferences(input.document, schedule, catalog);
+  const summary = summarize(input.document, solveLayout(input.document, schedule, catalog));
+  return writeRevision(actor, l, { expectVersion: input.version, document: input.document, summary, note: input.note ?? "", name: input.name, action: "layout.save" });
+}
+
+async function writeRevision(
+  actor: Actor,
+  l: Layout,
+  w: { expectVersion: number; document: LayoutDocument; summary: LayoutSolveSummary; note: string; name?: string; action: string; detail?: Record<string, unknown> },
+): Promise<{ layout: LayoutMeta }> {
+  return db().transaction(async (transaction) => {
+    const [changed] = await Layout.update(
+      { version: literal("version + 1") as unknown as number, currentRevision: literal("current_revision + 1") as unknown as number, ...(w.name ? { name: w.name } : {}) },
+      { where: { id: l.id, version: w.expectVersion }, transaction },
+    );
+    if (changed === 0) {
+      const now = await Layout.findByPk(l.id, { attributes: ["id", "version"], transaction });
+      if (!now) throw notFound("That layout");
+      throw conflict(`This layout was saved by someone else since you opened it (you had version ${w.expectVersion}, it is now version ${now.version}).`, { currentVersion: now.version });
+    }
+    const fresh = await Layout.findByPk(l.id, { transaction });
+    if (!fresh) throw notFound("That layout");
+    await LayoutRevision.create({ layoutId: l.id, revision: fresh.currentRevision, document: w.document, summary: w.summary, note: w.note, createdBy: actor.userId }, { transaction });
+    await audit(
+      { organisationId: actor.organisationId, userId: actor.userId, action: w.action, entityType: "layout", entityId: l.id, detail: { revision: fresh.currentRevision, version: fresh.version, counts: w.summary.counts, ...w.detail } },
+      transaction,
+    );
+    return { layout: meta(fresh, w.summary) };
+  });
+}
+
+export async function listRevisions(actor: Actor, layoutId: number): Promise<RevisionMeta[]> {
+  await findOwnLayout(actor, layoutId);
+  const rows = await LayoutRevision.findAll({
+    where: { layoutId },
+    attributes: ["revision", "note", "summary", "createdAt", "createdBy"],
+    include: [{ model: User, as: "creator", attributes: ["name"] }],
+    order: [["revision", "DESC"]],
+  });
+  return rows.map((r) => ({
+    revision: r.revision,
+    note: r.note,
+    createdAt: r.createdAt.toISOString(),
+    createdBy: (r as LayoutRevision & { creator?: User | null }).creator?.name ?? null,
+    summary: r.summary as LayoutSolveSummary,
+  }));
+}
+
+export async function getRevision(actor: Actor, layoutId: number, revision: number): Promise<{ revision: RevisionMeta; document: LayoutDocument }> {
+  await findOwnLayout(actor, layoutId);
+  const r = await LayoutRevision.findOne({ where: { layoutId, revision }, include: [{ model: User, as: "creator", attributes: ["name"] }] });
+  if (!r) throw notFound("That revision");
+  return {
+    revision: { revision: r.revision, note: r.note, createdAt: r.createdAt.toISOString(), createdBy: (r as LayoutRevision & { creator?: User | null }).creator?.name ?? null, summary: r.summary as LayoutSolveSummary },
+    document: r.document as LayoutDocument,
+  };
+}
+
+/** Restore = a new revision holding the old document, checked and solved like any save. */
+export async function restoreRevision(actor: Actor, layoutId: number, revision: number, expectVersion?: number): Promise<LayoutView> {
+  ensureCan(actor, "layout:write");
+  const l = await findOwnLayout(actor, layoutId);
+  const old = await LayoutRevision.findOne({ where: { layoutId, revision }, attributes: ["document"] });
+  if (!old) throw notFound("That revision");
+  const document = layoutDocumentSchema.parse(old.document);
+  const [schedule, catalog] = await Promise.all([loadSchedule(l.siteId), catalogFor(actor.organisationId)]);
+  const issues = referenceIssues(document, schedule, catalog);
+  if (issues.length) throw new ApiError(422, `Revision ${revision} refers to hardware or detectors that no longer exist, so it cannot be restored as it is.`, issues);
+  const summary = summarize(document, solveLayout(document, schedule, catalog));
+  const { layout } = await writeRevision(actor, l, { expectVersion: expectVersion ?? l.version, document, summary, note: `Restored revision ${revision}`, action: "layout.restore", detail: { restoredFrom: revision } });
+  return { layout, document };
+}
+
+export async function deleteLayout(actor: Actor, layoutId: number): Promise<{ deleted: true }> {
+  ensureCan(actor, "layout:write");
+  await db().transaction(async (transaction) => {
+    const l = await findOwnLayout(actor, layoutId, transaction);
+    await LayoutRevision.destroy({ where: { layoutId }, transaction });
+    await l.destroy({ transaction });
+    await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "layout.delete", entityType: "layout", entityId: layoutId, detail: { siteId: l.siteId, name: l.name, lastRevision: l.currentRevision } }, transaction);
+  });
+  return { deleted: true };
+}
+
+export interface SuggestionView {
+  allowShared: boolean;
+  found: boolean;
+  reason: string | null;
+  cost: number | null;
+  parts: { kind: string; catalogId: string; name: string; count: number; unitPrice: number }[];
+  boards: number;
+  inputsUsed: number;
+  inputsTotal: number;
+  sharedInputs: number;
+  counts: Record<Severity, number> | null;
+  document: LayoutDocument | null;
+}
+
+function suggestionView(allowShared: boolean, s: Suggestion): SuggestionView {
+  if (!s.found) return { allowShared, found: false, reason: s.reason, cost: null, parts: [], boards: 0, inputsUsed: 0, inputsTotal: 0, sharedInputs: 0, counts: null, document: null };
+  return {
+    allowShared,
+    found: true,
+    reason: null,
+    cost: s.cost,
+    parts: s.parts,
+    boards: s.layout.boards.length,
+    inputsUsed: s.result.totals.inputsUsed,
+    inputsTotal: s.result.totals.inputsTotal,
+    sharedInputs: s.sharedInputs,
+    counts: s.result.counts,
+    document: s.layout,
+  };
+}
+
+/** The cheapest hardware for the site's schedule both ways: one detector per input, and shared inputs allowed. */
+export async function suggestForSite(actor: Actor, siteId: number, opts: z.infer<typeof suggestRequestSchema> = {}): Promise<{ suggestions: SuggestionView[] }> {
+  await findSite(actor, siteId);
+  const [schedule, catalog] = await Promise.all([loadSchedule(siteId), catalogFor(actor.organisationId)]);
+  if (schedule.length === 0) throw new ApiError(422, "The device schedule is empty: add detectors before asking for hardware.");
+  const base = { busCableM: opts?.busCableM, power: opts?.power };
+  return {
+    suggestions: [false, true].map((allowShared) => suggestionView(allowShared, suggestHardware(schedule, catalog, { ...base, allowShared }))),
+  };
+}
