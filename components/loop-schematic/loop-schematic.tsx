@@ -1,0 +1,278 @@
+// The loop as wired, as SVG: panel input terminals on the left, the cable's conductors, the detector(s) on the
+// right; resistors drawn where they physically sit, contacts open or closed, an injected fault in red.
+// Pure and props-driven (the loop bench and the terminal sheet both draw it).
+import { useId } from "react";
+import type { InputType } from "@/lib/catalog/schema";
+import type { DetectorState, Fault, LoopSpec } from "@/lib/loop";
+import { FAULT_WORDS, statesLabel } from "@/lib/loop";
+import { schematicModel, type ContactEl, type ParallelEl, type ResistorEl, type Rung, type SeriesEl } from "./schematic-model";
+import { ContactH, ContactV, Dot, FAULT, INK, MUTED, ResistorH, ResistorV, WARN } from "./symbols";
+
+export interface LoopSchematicProps {
+  loop: LoopSpec;
+  /** One per detector; missing ones are at rest. */
+  states?: readonly DetectorState[];
+  fault?: Fault;
+  /** Gives the expected resistor values when the loop does not state them. */
+  inputType?: InputType;
+  /** Shown at the panel's meter, e.g. "2.32 kΩ". */
+  readingText?: string;
+  className?: string;
+}
+
+const W_CONTACT = 84;
+const W_RESISTOR = 92;
+const BRANCH_GAP = 60;
+const RUNG_GAP = 92;
+const CABLE_W = 260;
+const CABLE_BG = "#eef3f6";
+
+const widthOf = (e: SeriesEl): number =>
+  e.kind === "contact" ? W_CONTACT : e.kind === "resistor" ? W_RESISTOR : Math.max(...e.branches.map((b) => b.reduce((s, x) => s + widthOf(x), 0))) + 32;
+
+function gaugeText(loop: LoopSpec): string {
+  const g = loop.cable.gauge;
+  return "awg" in g ? `${g.awg} AWG` : `${g.mm2} mm²`;
+}
+
+function Line({ x1, y1, x2, y2, colour = INK, width = 1.5 }: { x1: number; y1: number; x2: number; y2: number; colour?: string; width?: number }) {
+  return <line x1={x1} y1={y1} x2={x2} y2={y2} stroke={colour} strokeWidth={width} strokeLinecap="square" />;
+}
+
+function Horizontal({ e, x, y, tol }: { e: ContactEl | ResistorEl; x: number; y: number; tol: number }) {
+  return e.kind === "contact" ? <ContactH c={e} x={x} y={y} /> : <ResistorH r={e} x={x} y={y} tolerancePct={tol} />;
+}
+
+function Parallel({ p, x, yA, tol }: { p: ParallelEl; x: number; yA: number; tol: number }) {
+  const w = widthOf(p);
+  const x0 = x + 6;
+  const x1 = x + w - 6;
+  const yLast = yA + (p.branches.length - 1) * BRANCH_GAP;
+  return (
+    <g>
+      <Line x1={x0} y1={yA} x2={x0} y2={yLast} />
+      <Line x1={x1} y1={yA} x2={x1} y2={yLast} />
+      <Dot x={x0} y={yA} />
+      <Dot x={x1} y={yA} />
+      {p.branches.map((b, k) => {
+        const y = yA + k * BRANCH_GAP;
+        const bw = b.reduce((s, e) => s + widthOf(e), 0);
+        let cx = x + (w - bw) / 2;
+        return (
+          <g key={k}>
+            {k > 0 ? <Line x1={x0} y1={y} x2={x1} y2={y} /> : null}
+            {b.map((e) => {
+              const ew = widthOf(e);
+              const el = <Horizontal key={e.key} e={e as ContactEl | ResistorEl} x={cx + ew / 2} y={y} tol={tol} />;
+              cx += ew;
+              return el;
+            })}
+          </g>
+        );
+      })}
+    </g>
+  );
+}
+
+function describe(loop: LoopSpec, states: readonly DetectorState[], fault: Fault): string {
+  const where = loop.scheme === "none" ? "no resistor" : loop.placement === "at-panel" ? "resistor at the panel" : loop.placement === "loop-back" ? "loop-back resistor" : "resistor at the detector";
+  const f = fault === "none" ? "no fault" : FAULT_WORDS[fault];
+  return `${loop.scheme} loop, ${where}, ${loop.detectors.length} detector${loop.detectors.length > 1 ? "s" : ""} (${statesLabel(loop.detectors, states)}), ${f}; cable ${loop.cable.lengthM} m of ${gaugeText(loop)}.`;
+}
+
+export function LoopSchematic({ loop, states: given, fault = "none", inputType, readingText, className }: LoopSchematicProps) {
+  const uid = useId();
+  const states = loop.detectors.map((_, i) => given?.[i] ?? "rest");
+  const m = schematicModel(loop, states, inputType);
+  const tol = loop.tolerancePct;
+
+  const maxBranches = Math.max(1, ...m.far.series.map((e) => (e.kind === "parallel" ? e.branches.length : 1)));
+  const yA = 78;
+  const yB = yA + Math.max(150, (maxBranches - 1) * BRANCH_GAP + 80);
+  const loopBack = m.conductors === 4;
+  const yC = yB + 44;
+  const yD = yC + 96;
+  const bottom = (loopBack ? yD : yB) + 58;
+
+  const TERM_X = 104;
+  const hasPanelSide = !!(m.panel.series || m.panel.across || loopBack);
+  const PX = hasPanelSide ? 268 : 140; // cable starts here
+  const CX = PX + CABLE_W; // cable ends here
+  const FX = CX + 30; // far-end elements start here
+  const seriesX: number[] = [];
+  let cursor = FX;
+  for (const e of m.far.series) {
+    seriesX.push(cursor);
+    cursor += widthOf(e);
+  }
+  const firstRungX = cursor + (m.far.rungs[0]?.kind === "wire" ? 14 : 34);
+  const rungX = m.far.rungs.map((_, i) => firstRungX + i * RUNG_GAP);
+  const endX = rungX.length ? rungX[rungX.length - 1] : cursor + 14;
+  const lastRung: Rung | undefined = m.far.rungs[m.far.rungs.length - 1];
+  const rightEdge = endX + (loopBack ? 60 : lastRung?.kind === "items" ? 110 : 40);
+  const width = Math.max(rightEdge, FX + 220);
+  const midY = (yA + yB) / 2;
+  const lbX = 200; // loop-back resistor, at the panel
+
+  const shortX = fault === "short-panel" ? PX + 18 : fault === "short-detector" ? CX - 18 : null;
+  const cutX = PX + CABLE_W / 2;
+  const meterX = 58;
+  const atPanelWarning = loop.placement === "at-panel" && loop.scheme !== "none";
+
+  return (
+    <svg
+      viewBox={`0 0 ${width} ${bottom}`}
+      role="img"
+      aria-labelledby={`${uid}-t ${uid}-d`}
+      className={className}
+      // never drawn so small that its 11-unit labels fall below about 9 px; wider loops scroll instead
+      style={{ fontFamily: "inherit", width: "100%", minWidth: Math.round(width * 0.82), height: "auto" }}
+      data-testid="loop-schematic"
+      data-placement={loop.placement}
+      data-fault={fault}
+    >
+      <title id={`${uid}-t`}>Loop schematic</title>
+      <desc id={`${uid}-d`}>{describe(loop, states, fault)}</desc>
+
+      {/* regions */}
+      <rect x={8} y={yA - 48} width={TERM_X - 8} height={yB - yA + 96} rx={8} fill="#f1efe8" stroke="#b9b4a6" />
+      <text x={16} y={yA - 32} fontSize={12} fontWeight={700} fill={INK}>
+        Panel input
+      </text>
+      <text x={TERM_X - 10} y={yA - 8} textAnchor="end" fontSize={10.5} fill={MUTED}>
+        IN
+      </text>
+      <text x={TERM_X - 10} y={yB + 16} textAnchor="end" fontSize={10.5} fill={MUTED}>
+        COM
+      </text>
+      {hasPanelSide ? (
+        <g>
+          <rect x={TERM_X + 8} y={yA - 48} width={PX - TERM_X - 16} height={bottom - yA + 38} rx={8} fill="none" stroke={atPanelWarning ? WARN : "#b9b4a6"} strokeDasharray="5 4" />
+          <text x={TERM_X + 16} y={yA - 32} fontSize={11} fontWeight={600} fill={atPanelWarning ? WARN : MUTED}>
+            {atPanelWarning ? "resistor at the panel" : "at the panel"}
+          </text>
+        </g>
+      ) : null}
+      <rect x={FX - 16} y={yA - 48} width={width - FX + 8} height={(loopBack ? bottom - 10 : yB + 48) - (yA - 48)} rx={8} fill="none" stroke="#b9b4a6" strokeDasharray="5 4" />
+      <text x={FX - 8} y={yA - 32} fontSize={11} fontWeight={600} fill={MUTED}>
+        at the detector{loop.detectors.length > 1 ? "s" : ""}
+      </text>
+
+      {/* meter across the input terminals */}
+      <Line x1={meterX} y1={yA} x2={TERM_X} y2={yA} colour={MUTED} width={1} />
+      <Line x1={meterX} y1={yB} x2={TERM_X} y2={yB} colour={MUTED} width={1} />
+      <Line x1={meterX} y1={yA} x2={meterX} y2={midY - 16} colour={MUTED} width={1} />
+      <Line x1={meterX} y1={midY + 16} x2={meterX} y2={yB} colour={MUTED} width={1} />
+      <circle cx={meterX} cy={midY} r={16} fill="#fff" stroke={INK} strokeWidth={1.5} />
+      <text x={meterX} y={midY + 5} textAnchor="middle" fontSize={14} fontWeight={700} fill={INK}>
+        Ω
+      </text>
+      {readingText ? (
+        <text x={meterX} y={midY + 34} textAnchor="middle" fontSize={11} fontWeight={700} fill={INK} data-testid="schematic-reading">
+          {readingText}
+        </text>
+      ) : null}
+
+      <rect x={PX} y={yA - 12} width={CABLE_W} height={(loopBack ? yD : yB) - yA + 24} rx={10} fill={CABLE_BG} />
+
+      {/* the two input conductors, terminal to far end */}
+      <Line x1={TERM_X} y1={yA} x2={endX} y2={yA} />
+      <Line x1={TERM_X} y1={yB} x2={endX} y2={yB} />
+      <circle cx={TERM_X} cy={yA} r={4.5} fill="#fff" stroke={INK} strokeWidth={1.5} />
+      <circle cx={TERM_X} cy={yB} r={4.5} fill="#fff" stroke={INK} strokeWidth={1.5} />
+
+      {/* resistors at the input terminals */}
+      {m.panel.series ? <ResistorH r={m.panel.series} x={TERM_X + 56} y={yA} tolerancePct={tol} highlight={atPanelWarning ? WARN : undefined} /> : null}
+      {m.panel.across ? (
+        <g>
+          <Line x1={PX - 40} y1={yA} x2={PX - 40} y2={yB} />
+          <Dot x={PX - 40} y={yA} />
+          <Dot x={PX - 40} y={yB} />
+          <ResistorV r={m.panel.across} x={PX - 40} y={midY} tolerancePct={tol} highlight={atPanelWarning ? WARN : undefined} labelSide="left" />
+        </g>
+      ) : null}
+
+      {/* cable */}
+      <text x={PX + CABLE_W / 2} y={midY - 6} textAnchor="middle" fontSize={11.5} fontWeight={600} fill={INK}>
+        cable {loop.cable.lengthM} m
+      </text>
+      <text x={PX + CABLE_W / 2} y={midY + 10} textAnchor="middle" fontSize={10.5} fill={MUTED}>
+        {gaugeText(loop)} · {m.conductors} conductors
+      </text>
+      {["c1", "c2", "c3", "c4"].slice(0, m.conductors).map((c, i) => (
+        <text key={c} x={PX + 6} y={[yA, yB, yC, yD][i] - 4} fontSize={9} fill={MUTED}>
+          {c}
+        </text>
+      ))}
+
+      {/* the loop-back pair: out to the far end and back to the resistor at the panel */}
+      {loopBack && lastRung?.kind === "loop-back" ? (
+        <g data-part="loop-back">
+          <Line x1={endX} y1={yA} x2={endX + 32} y2={yA} />
+          <Line x1={endX + 32} y1={yA} x2={endX + 32} y2={yD} />
+          <Line x1={endX} y1={yB} x2={endX} y2={yC} />
+          <Line x1={lbX} y1={yC} x2={endX} y2={yC} />
+          <Line x1={lbX} y1={yD} x2={endX + 32} y2={yD} />
+          <Line x1={lbX} y1={yC} x2={lbX} y2={yD} />
+          <ResistorV r={lastRung.resistor} x={lbX} y={(yC + yD) / 2} tolerancePct={tol} labelSide="left" />
+          <text x={lbX + 10} y={yD + 18} fontSize={10} fill={MUTED}>
+            loop-back resistor: at the panel, electrically at the far end
+          </text>
+        </g>
+      ) : null}
+
+      {/* far end: series elements along c1, then the rungs across to c2 */}
+      {m.far.series.map((e, i) =>
+        e.kind === "parallel" ? (
+          <Parallel key={e.key} p={e} x={seriesX[i]} yA={yA} tol={tol} />
+        ) : (
+          <Horizontal key={e.key} e={e} x={seriesX[i] + widthOf(e) / 2} y={yA} tol={tol} />
+        ),
+      )}
+      {m.far.rungs.map((r, i) => {
+        const x = rungX[i];
+        const last = i === m.far.rungs.length - 1;
+        if (r.kind === "loop-back") return null;
+        return (
+          <g key={i}>
+            <Line x1={x} y1={yA} x2={x} y2={yB} />
+            {!last || loopBack ? (
+              <>
+                <Dot x={x} y={yA} />
+                <Dot x={x} y={yB} />
+              </>
+            ) : null}
+            {r.kind === "items"
+              ? r.items.map((e, k) => {
+                  const y = midY + (k - (r.items.length - 1) / 2) * 56;
+                  return e.kind === "contact" ? <ContactV key={e.key} c={e} x={x} y={y} /> : <ResistorV key={e.key} r={e} x={x} y={y} tolerancePct={tol} />;
+                })
+              : null}
+          </g>
+        );
+      })}
+
+      {/* injected fault */}
+      {shortX !== null ? (
+        <g data-part="fault-short">
+          <Line x1={shortX} y1={yA} x2={shortX} y2={yB} colour={FAULT} width={4} />
+          <circle cx={shortX} cy={yA} r={3.5} fill={FAULT} />
+          <circle cx={shortX} cy={yB} r={3.5} fill={FAULT} />
+          <text x={shortX + (fault === "short-panel" ? 8 : -8)} y={yB - 10} textAnchor={fault === "short-panel" ? "start" : "end"} fontSize={11} fontWeight={700} fill={FAULT}>
+            short
+          </text>
+        </g>
+      ) : null}
+      {fault === "cut" ? (
+        <g data-part="fault-cut">
+          <rect x={cutX - 9} y={yA - 4} width={18} height={8} fill={CABLE_BG} />
+          <Line x1={cutX - 9} y1={yA - 6} x2={cutX - 5} y2={yA + 6} colour={FAULT} width={2} />
+          <Line x1={cutX + 5} y1={yA - 6} x2={cutX + 9} y2={yA + 6} colour={FAULT} width={2} />
+          <text x={cutX} y={yA - 12} textAnchor="middle" fontSize={11} fontWeight={700} fill={FAULT}>
+            cut
+          </text>
+        </g>
+      ) : null}
+    </svg>
+  );
+}
