@@ -1,0 +1,99 @@
+import { test, expect, type Page } from "@playwright/test";
+import { signIn } from "./support";
+
+const shot = (page: Page, name: string) => page.screenshot({ path: `test-results/loop-bench-${name}.png`, fullPage: true });
+
+test("a short at the detector end reads normal with the resistor at the panel, and short with the resistor at the detector", async ({ page }) => {
+  await signIn(page, "installer");
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Loop bench" }).click();
+  await expect(page.getByRole("heading", { name: "Loop bench" })).toBeVisible();
+
+  await page.getByLabel("Input type", { exact: true }).selectOption({ label: "2.2 kΩ input" });
+  await page.getByRole("radio", { name: "single end-of-line", exact: true }).check();
+  await expect(page.getByTestId("panel-report")).toHaveText("normal");
+  await expect(page.getByTestId("meter-reading")).toContainText("kΩ");
+  await shot(page, "at-rest");
+
+  await page.getByRole("radio", { name: "resistor at the panel", exact: true }).check();
+  await page.getByRole("radio", { name: "short at the detector end", exact: true }).check();
+  // the resistor stays in circuit beyond the short: 2.2 kΩ plus the cable, inside the normal band
+  await expect(page.getByTestId("panel-report")).toHaveText("normal");
+  await expect(page.getByTestId("defeat-warning")).toContainText("Defeat");
+  await expect(page.getByTestId("verdict-short-detector")).toContainText("defeat");
+  await expect(page.getByTestId("loop-schematic")).toHaveAttribute("data-placement", "at-panel");
+  await expect(page.getByTestId("loop-schematic").locator('[data-part="fault-short"]')).toHaveCount(1);
+  await expect(page.getByTestId("findings").locator('[data-code="short-reads-normal"]')).toBeVisible();
+  await shot(page, "at-panel-short");
+
+  await page.getByRole("radio", { name: "resistor at the detector", exact: true }).check();
+  // the short now bypasses the resistor: a few ohms of cable
+  await expect(page.getByTestId("panel-report")).toHaveText("short");
+  await expect(page.getByTestId("defeat-warning")).toHaveCount(0);
+  await expect(page.getByTestId("meter-reading")).toHaveText(/ Ω$/);
+  await expect(page.getByTestId("verdict-short-detector")).toContainText("detected");
+});
+
+test("the bench is keyboard-operable: detector states, a shared input's decode table, resistor values", async ({ page }) => {
+  await signIn(page, "designer");
+  await page.goto("/loop-bench");
+  await page.getByLabel("Input type", { exact: true }).selectOption({ label: "5.6 kΩ input" });
+  await page.getByRole("radio", { name: "shared input", exact: true }).check();
+  await expect(page.getByTestId("decode-table")).toBeVisible();
+  await page.getByTestId("detector-state-0").getByRole("radio", { name: "active", exact: true }).focus();
+  await page.keyboard.press("Space");
+  await expect(page.getByTestId("panel-report")).toHaveText("detector A active");
+  await page.getByTestId("resistor-field-eol").getByRole("textbox").fill("5k1");
+  await expect(page.getByTestId("resistor-field-eol")).toContainText("The input type expects 5.6 kΩ");
+  await page.getByTestId("resistor-field-eol").getByRole("textbox").fill("5k");
+  await expect(page.getByTestId("nearest-preferred").first()).toContainText("Nearest E24: 4.7 kΩ or 5.1 kΩ");
+  await shot(page, "shared");
+});
+
+test("POST /api/loops/analyze: 422 with a readable path for a negative length, 404 for an unknown input type, 401 signed out", async ({ page, request }) => {
+  const body = (lengthM: number, inputType = "input-2k2") => ({
+    inputType,
+    loop: {
+      scheme: "single-eol",
+      placement: "at-detector",
+      detectors: [{ label: "Front door", contact: "NC", tamper: true }],
+      tolerancePct: 5,
+      cable: { gauge: { mm2: 0.22 }, lengthM, tempMinC: -10, tempMaxC: 40 },
+    },
+  });
+
+  const out = await request.post("/api/loops/analyze", { data: body(30) });
+  expect(out.status()).toBe(401);
+  expect((await out.json()).error).toMatch(/sign in/i);
+
+  await signIn(page, "installer");
+  const bad = await page.request.post("/api/loops/analyze", { data: body(-5) });
+  expect(bad.status()).toBe(422);
+  const err = await bad.json();
+  expect(err.issues).toContainEqual({ path: "loop.cable.lengthM", message: expect.stringMatching(/can't be negative/) });
+
+  const shared = await page.request.post("/api/loops/analyze", { data: { ...body(30), loop: { ...body(30).loop, scheme: "shared" } } });
+  expect(shared.status()).toBe(422);
+  expect((await shared.json()).issues).toContainEqual({ path: "loop.detectors", message: "a shared input takes exactly two detectors (this loop has 1)" });
+
+  const unsupported = await page.request.post("/api/loops/analyze", { data: { ...body(30), loop: { ...body(30).loop, scheme: "double-eol" } } });
+  expect(unsupported.status()).toBe(422);
+  expect((await unsupported.json()).issues.map((i: { path: string }) => i.path)).toEqual(expect.arrayContaining(["loop.scheme", "loop.alarmOhms"]));
+
+  const missing = await page.request.post("/api/loops/analyze", { data: body(30, "no-such-input") });
+  expect(missing.status()).toBe(404);
+
+  const ok = await page.request.post("/api/loops/analyze", { data: body(30) });
+  expect(ok.status()).toBe(200);
+  const analysis = await ok.json();
+  expect(analysis.faults).toEqual({ "short-panel": "detected", "short-detector": "detected", cut: "mistaken" });
+  expect(analysis.rows.find((r: { fault: string }) => r.fault === "cut").maxOhms).toBe("Infinity");
+
+  const types = await page.request.get("/api/loops/input-types");
+  expect((await types.json()).inputTypes.map((t: { id: string }) => t.id)).toContain("input-2k2");
+
+  const doc = await request.get("/api/openapi.json");
+  expect(doc.status()).toBe(200);
+  const openapi = await doc.json();
+  expect(openapi.openapi).toBe("3.1.0");
+  expect(openapi.paths["/api/loops/analyze"].post.responses).toHaveProperty("422");
+});
