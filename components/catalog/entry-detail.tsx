@@ -54,7 +54,7 @@ export function InputTypeBands({ inputType }: { inputType: InputType }) {
             <h3 className="font-semibold">{schemeLabel[scheme]}</h3>
             <BandScale inputType={inputType} scheme={scheme} />
             <div className="grid gap-4 md:grid-cols-2">
-              <table className="text-sm">
+              <table className="self-start text-sm">
                 <caption className="text-left text-xs font-medium text-slate-500">Bands: a reading from (inclusive) up to (exclusive) gives the report</caption>
                 <thead className="text-left text-slate-500">
                   <tr>
@@ -73,7 +73,7 @@ export function InputTypeBands({ inputType }: { inputType: InputType }) {
                   ))}
                 </tbody>
               </table>
-              <table className="text-sm">
+              <table className="self-start text-sm">
                 <caption className="text-left text-xs font-medium text-slate-500">
                   Expected readings of a sound loop ({inputType.tolerancePct}% parts, up to {formatOhms(inputType.maxLoopOhms)} of cable)
                 </caption>

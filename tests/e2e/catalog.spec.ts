@@ -56,6 +56,12 @@ test.describe.serial("the catalog", () => {
     await expect(figures.getByRole("row", { name: /Max loop resistance/ })).toContainText("50 Ω");
     await page.screenshot({ path: "test-results/catalog-input-type.png", fullPage: true });
 
+    // a shared input: one scale per scheme, four expected readings on the shared one
+    await page.goto("/catalog/input-5k6");
+    await expect(page.getByTestId("band-scale")).toHaveCount(3);
+    await expect(page.locator('[data-testid="band-scale"][data-scheme="shared"]').getByTestId("expected-reading")).toHaveCount(4);
+    await page.getByTestId("scheme-shared").screenshot({ path: "test-results/catalog-shared-scale.png" });
+
     expect((await page.request.get("/api/catalog/no-such-entry")).status()).toBe(404);
     const one = await page.request.get("/api/catalog/input-fire-1k-4k7");
     expect(one.status()).toBe(200);

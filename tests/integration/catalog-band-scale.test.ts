@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { bandSegments, defaultFrame as f, edgeLabels, formatEdge, ohmsToX, placeLabels, readingMarks } from "@/components/catalog/band-scale-geometry";
+import { bandSegments, defaultFrame as f, detailFrame, edgeLabels, formatEdge, ohmsToX, placeLabels, readingMarks, scaleTicks } from "@/components/catalog/band-scale-geometry";
 import { shippedCatalog } from "@/lib/catalog/shipped";
 
 // The band scale's geometry (pure; kept beside the catalog's integration tests).
@@ -14,15 +14,16 @@ describe("band scale geometry", () => {
     expect(ohmsToX(1_000)).toBeCloseTo((f.logLeft + f.logRight) / 2, 9);
     // equal ratios give equal distances on a log scale: 100→200 Ω as far as 2.2→4.4 kΩ
     expect(ohmsToX(200) - ohmsToX(100)).toBeCloseTo(ohmsToX(4_400) - ohmsToX(2_200), 9);
-    expect(ohmsToX(250_000)).toBe(f.infLeft);
-    expect(ohmsToX(Infinity)).toBe(f.infRight);
+    expect(ohmsToX(250_000)).toBe(f.inf!.left);
+    expect(ohmsToX(Infinity)).toBe(f.inf!.right);
+    expect(scaleTicks().map((t) => t.text)).toEqual(["10 Ω", "100 Ω", "1 kΩ", "10 kΩ", "100 kΩ"]);
   });
 
   it("draws contiguous bands ending at the end of the ∞ segment", () => {
     const segs = bandSegments(inputType("input-5k6").bands.shared!);
     for (let i = 1; i < segs.length; i++) expect(segs[i].x0).toBe(segs[i - 1].x1);
     expect(segs[0].x0).toBe(f.logLeft);
-    expect(segs.at(-1)).toMatchObject({ report: "open", toOhms: null, x1: f.infRight });
+    expect(segs.at(-1)).toMatchObject({ report: "open", toOhms: null, x1: f.inf!.right });
   });
 
   it("labels band edges in Ω and kΩ, stacking close ones so none overlaps in a row", () => {
@@ -55,5 +56,24 @@ describe("band scale geometry", () => {
     expect(no.marks[0].maxOhms).toBeCloseTo(6_035, 9);
     expect(no.marks[0].xMin).toBeLessThan(no.marks[0].x);
     expect(no.marks[0].xMax).toBeGreaterThan(no.marks[0].x);
+  });
+
+  it("zooms onto crowded expected readings with a detail frame, and not onto a lone one", () => {
+    const shared = inputType("input-5k6");
+    const { marks } = readingMarks(shared, "shared");
+    const d = detailFrame(marks)!;
+    // 5.6 kΩ rest at 5 % low, 13.9 kΩ both active at 5 % high plus 100 Ω of loop, each with a factor 1.6 margin
+    expect(d.minOhms).toBeCloseTo((5_600 * 0.95) / 1.6, 6);
+    expect(d.maxOhms).toBeCloseTo((13_900 * 1.05 + 100) * 1.6, 6);
+    expect(d.inf).toBeNull();
+    expect(ohmsToX(Infinity, d)).toBe(d.logRight);
+    // inside the detail, the 7 kΩ / 7.4 kΩ edges are far apart; outside edges (1.2 kΩ) are left out
+    const edges = edgeLabels(shared.bands.shared!, d);
+    expect(edges.map((e) => e.text)).not.toContain("1.2 kΩ");
+    const at = (t: string) => edges.find((e) => e.text === t)!.x;
+    expect(at("7.4 kΩ") - at("7 kΩ")).toBeGreaterThan(15);
+    expect(bandSegments(shared.bands.shared!, d)[0]).toMatchObject({ report: "trouble", x0: d.logLeft }); // the short band lies wholly below the frame
+    expect(scaleTicks(d).map((t) => t.ohms)).toEqual([5_000, 10_000, 20_000]);
+    expect(detailFrame(readingMarks(inputType("input-2k2"), "single-eol").marks)).toBeNull();
   });
 });
