@@ -9,7 +9,7 @@ const cache = new Map<string, CatalogResult>();
 
 /** The shipped catalog directory: `catalog/` at the repository root (the working directory of the app and its tests). */
 export function shippedCatalogDir(): string {
-  return join(process.cwd(), "catalog");
+  return join(/*turbopackIgnore: true*/ process.cwd(), "catalog");
 }
 
 /** Read and validate every `*.yaml` file in the directory, in name order; cached per directory. */
