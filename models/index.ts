@@ -4,6 +4,8 @@ import { roles, type Role } from "../lib/auth/permissions";
 import { initCatalogModels } from "./catalog";
 
 export { OrganisationCatalog } from "./catalog";
+import { initReviewModels } from "./review";
+export { CommissioningPhoto, CommissioningReading, LayoutComment, LayoutDecision, LayoutReview } from "./review";
 import { initDesignModels } from "./design";
 export { Layout, LayoutRevision, ScheduleDetectorRecord } from "./design";
 
@@ -186,4 +188,5 @@ export function initModels(sequelize: Sequelize) {
   Site.hasMany(Area, { foreignKey: "siteId", as: "areas" });
   Area.hasMany(Room, { foreignKey: "areaId", as: "rooms" });
   initDesignModels(sequelize);
+  initReviewModels(sequelize);
 }

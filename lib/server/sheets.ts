@@ -1,0 +1,125 @@
+import "server-only";
+import type { Transaction } from "sequelize";
+import { db } from "./db";
+import { notFound } from "./errors";
+import { catalogFor, ensureCan, loadSchedule } from "./schedules";
+import type { Actor } from "./session";
+import { Layout, LayoutReview, LayoutRevision, Site } from "@/models";
+import { billOfMaterials, type BillOfMaterials } from "@/lib/bom/bill-of-materials";
+import { bomCsv, zoneListCsv } from "@/lib/bom/csv";
+import type { Catalog } from "@/lib/catalog/schema";
+import { layoutDocumentSchema, type LayoutDocument } from "@/lib/layout/schema";
+import { effectiveReview, type EffectiveReview } from "@/lib/review/effective-state";
+import type { Schedule } from "@/lib/schedule/schema";
+import { buildTerminalSheet } from "@/lib/sheet/build-sheet";
+import type { TerminalSheet } from "@/lib/sheet/sheet-types";
+import { terminalSheetPdf, type SheetMeta } from "@/lib/server/pdf/terminal-sheet-pdf";
+import type { PageSize } from "@/lib/server/pdf/pdf-kit";
+
+// Terminal sheets, zone lists and bills of materials of a layout revision: by default the approved revision
+// (the one to wire), else the current one.
+
+export interface LayoutRef {
+  layout: Layout;
+  site: Site;
+  review: EffectiveReview;
+}
+
+/** The layout, only if its site belongs to the actor's organisation (404 otherwise), with its review state. */
+export async function findLayoutForReview(actor: Actor, layoutId: number, transaction?: Transaction, lock = false): Promise<LayoutRef> {
+  db();
+  const layout = await Layout.findOne({
+    where: { id: layoutId },
+    include: [{ model: Site, as: "site", attributes: ["id", "name", "organisationId"], where: { organisationId: actor.organisationId }, required: true }],
+    transaction,
+    ...(lock && transaction ? { lock: transaction.LOCK.UPDATE } : {}),
+  });
+  if (!layout) throw notFound("That layout");
+  const stored = await LayoutReview.findByPk(layoutId, { transaction, ...(lock && transaction ? { lock: transaction.LOCK.UPDATE } : {}) });
+  return { layout, site: (layout as Layout & { site: Site }).site, review: effectiveReview(stored, layout.currentRevision) };
+}
+
+export interface RevisionContext extends LayoutRef {
+  revision: number;
+  document: LayoutDocument;
+  schedule: Schedule;
+  catalog: Catalog;
+}
+
+export async function loadRevision(actor: Actor, ref: LayoutRef, revision: number, transaction?: Transaction): Promise<RevisionContext> {
+  const row = await LayoutRevision.findOne({ where: { layoutId: ref.layout.id, revision }, attributes: ["document"], transaction });
+  if (!row) throw notFound("That revision");
+  const [schedule, catalog] = await Promise.all([loadSchedule(ref.layout.siteId, transaction), catalogFor(actor.organisationId)]);
+  return { ...ref, revision, document: layoutDocumentSchema.parse(row.document), schedule, catalog };
+}
+
+export interface SheetOptions {
+  /** Default: the approved revision, else the current one. */
+  revision?: number;
+}
+
+export async function loadSheetContext(actor: Actor, layoutId: number, opts: SheetOptions = {}): Promise<RevisionContext> {
+  ensureCan(actor, "sheet:read");
+  const ref = await findLayoutForReview(actor, layoutId);
+  return loadRevision(actor, ref, opts.revision ?? ref.review.approvedRevision ?? ref.layout.currentRevision);
+}
+
+export interface SheetView {
+  layoutId: number;
+  siteId: number;
+  meta: SheetMeta;
+  review: EffectiveReview;
+  /** The revision shown is the approved one (what to wire). */
+  approved: boolean;
+  sheet: TerminalSheet;
+}
+
+const today = () => new Date().toISOString().slice(0, 10);
+
+export function sheetMetaOf(ctx: RevisionContext): SheetMeta {
+  return { siteName: ctx.site.name, layoutName: ctx.layout.name, revision: ctx.revision, generatedAt: today() };
+}
+
+export async function getTerminalSheet(actor: Actor, layoutId: number, opts: SheetOptions = {}): Promise<SheetView> {
+  const ctx = await loadSheetContext(actor, layoutId, opts);
+  return {
+    layoutId,
+    siteId: ctx.site.id,
+    meta: sheetMetaOf(ctx),
+    review: ctx.review,
+    approved: ctx.review.approvedRevision === ctx.revision,
+    sheet: buildTerminalSheet(ctx.document, ctx.schedule, ctx.catalog),
+  };
+}
+
+/** A file name from free text: letters, digits and dashes only. */
+export function fileStem(...parts: (string | number)[]): string {
+  return (
+    parts
+      .map((p) => String(p).normalize("NFKD").replace(/[^A-Za-z0-9]+/g, "-").replace(/^-+|-+$/g, "").toLowerCase())
+      .filter(Boolean)
+      .join("-")
+      .slice(0, 80) || "layout"
+  );
+}
+
+export async function terminalSheetPdfFor(actor: Actor, layoutId: number, opts: SheetOptions & { size?: PageSize } = {}): Promise<{ pdf: Buffer; fileName: string }> {
+  const ctx = await loadSheetContext(actor, layoutId, opts);
+  const pdf = await terminalSheetPdf(buildTerminalSheet(ctx.document, ctx.schedule, ctx.catalog), sheetMetaOf(ctx), opts.size ?? "A4");
+  return { pdf, fileName: `${fileStem("terminal-sheet", ctx.site.name, ctx.layout.name, `rev-${ctx.revision}`)}.pdf` };
+}
+
+export async function zoneListCsvFor(actor: Actor, layoutId: number, opts: SheetOptions = {}): Promise<{ csv: string; fileName: string }> {
+  const ctx = await loadSheetContext(actor, layoutId, opts);
+  return { csv: zoneListCsv(buildTerminalSheet(ctx.document, ctx.schedule, ctx.catalog)), fileName: `${fileStem("zones", ctx.site.name, ctx.layout.name, `rev-${ctx.revision}`)}.csv` };
+}
+
+export async function bomFor(actor: Actor, layoutId: number, opts: SheetOptions = {}): Promise<{ revision: number; bom: BillOfMaterials }> {
+  const ctx = await loadSheetContext(actor, layoutId, opts);
+  return { revision: ctx.revision, bom: billOfMaterials(ctx.document, ctx.schedule, ctx.catalog) };
+}
+
+export async function bomCsvFor(actor: Actor, layoutId: number, opts: SheetOptions = {}): Promise<{ csv: string; fileName: string }> {
+  const ctx = await loadSheetContext(actor, layoutId, opts);
+  return { csv: bomCsv(billOfMaterials(ctx.document, ctx.schedule, ctx.catalog)), fileName: `${fileStem("bom", ctx.site.name, ctx.layout.name, `rev-${ctx.revision}`)}.csv` };
+}
