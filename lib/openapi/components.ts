@@ -1,11 +1,15 @@
 // components.schemas of the OpenAPI document, generated from the zod schemas the handlers parse with
 // (zod 4's z.toJSONSchema over a registry, so shared schemas become $refs instead of copies).
 import { z } from "zod";
-import { idSchema, inputTypeSchema, reportSchema } from "@/lib/catalog/schema";
+import { catalogFileSchema, idSchema, inputTypeSchema, reportSchema } from "@/lib/catalog/schema";
 import { analyzeRequestSchema, inputTypeRefSchema, loopSpecSchema } from "@/lib/loop";
 import { siteInputSchema, siteUpdateSchema } from "@/lib/sites/site-schema";
 import { acceptSchema, inviteSchema, roleChangeSchema } from "@/lib/server/members";
 import { roles } from "@/lib/auth/permissions";
+import { layoutDocumentSchema } from "@/lib/layout/schema";
+import { bulkEditPatchSchema, createDetectorFormSchema, updateDetectorFormSchema } from "@/lib/schedule/schema";
+import { createLayoutSchema, restoreSchema, saveLayoutSchema, suggestRequestSchema } from "@/lib/server/layouts";
+import { deleteDetectorsSchema, importRequestSchema } from "@/lib/server/schedules";
 import { findingSchema, loopAnalysisJsonSchema, readingJsonSchema, resistorUseSchema } from "./loop-analysis-schema";
 
 export type JsonSchema = Record<string, unknown>;
@@ -72,6 +76,17 @@ const named: Record<string, z.ZodType> = {
   RoleChange: roleChangeSchema,
   MemberList: memberListSchema,
   Health: healthSchema,
+  Catalog: catalogFileSchema,
+  LayoutDocument: layoutDocumentSchema,
+  LayoutCreate: createLayoutSchema,
+  LayoutSave: saveLayoutSchema,
+  LayoutRestore: restoreSchema,
+  SuggestionRequest: suggestRequestSchema,
+  DetectorCreate: createDetectorFormSchema,
+  DetectorUpdate: updateDetectorFormSchema,
+  ScheduleBulkEdit: bulkEditPatchSchema,
+  ScheduleDelete: deleteDetectorsSchema,
+  ScheduleImport: importRequestSchema,
 };
 
 export function componentSchemas(): Record<string, JsonSchema> {

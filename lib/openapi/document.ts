@@ -16,6 +16,8 @@ interface OperationSpec {
   query?: { name: string; description: string; schema: JsonSchema; required?: boolean }[];
   /** Component name of the JSON body. */
   body?: string;
+  /** A body that is not JSON (e.g. a multipart upload). */
+  bodyContent?: { contentType: string; schema: JsonSchema };
   ok: { status?: number; description: string; schema?: JsonSchema; contentType?: string };
   /** Error statuses beyond the ones every route gives (401/403 for signed-in routes, 422 with a body, 500). */
   errors?: number[];
@@ -27,7 +29,7 @@ const ERROR_WORDS: Record<number, string> = {
   403: "Signed in, but the role lacks the permission (the message names who has it).",
   404: "Nothing with that id in the caller's organisation (another organisation's ids read as missing).",
   409: "Conflicts with what exists.",
-  413: "The body is too large (2 MiB).",
+  413: "The body is too large for this route.",
   415: "The body is not sent as application/json.",
   422: "Some fields are not valid: `issues` lists each with its dotted path.",
   429: "Too many attempts; wait before trying again.",
@@ -47,7 +49,7 @@ function operation(id: string, spec: OperationSpec): Record<string, unknown> {
     statuses.add(401);
     statuses.add(403);
   }
-  if (spec.body) [400, 413, 415, 422].forEach((s) => statuses.add(s));
+  if (spec.body || spec.bodyContent) [400, 413, 415, 422].forEach((s) => statuses.add(s));
   if (spec.query) statuses.add(422);
   if (spec.pathParams?.length) statuses.add(404);
   statuses.add(500);
@@ -76,12 +78,20 @@ function operation(id: string, spec: OperationSpec): Record<string, unknown> {
         }
       : {}),
     ...(spec.body ? { requestBody: { required: true, content: { "application/json": { schema: REF(spec.body) } } } } : {}),
+    ...(spec.bodyContent ? { requestBody: { required: true, content: { [spec.bodyContent.contentType]: { schema: spec.bodyContent.schema } } } } : {}),
     responses,
   };
 }
 
 const siteId = { name: "siteId", description: "A site of the caller's organisation." };
 const membershipId = { name: "membershipId", description: "A membership of the caller's organisation." };
+const layoutId = { name: "layoutId", description: "A layout of one of the caller's organisation's sites." };
+const rev = { name: "rev", description: "A revision number of the layout (1 is the first)." };
+const detectorId = { name: "detectorId", description: "A detector of the site's device schedule." };
+const uploadId = { name: "uploadId", description: "A stored version of the organisation's catalog file." };
+const entryId = { name: "entryId", description: "The id of a catalog entry (any kind).", schema: REF("Id") };
+const object = (description: string) => ({ description, schema: { type: "object" } });
+
 
 /** Path → method → operation. Every route.ts under app/api must appear here. */
 const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = {
@@ -171,6 +181,89 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
       { tag: "loops", summary: "The input types a loop can be analysed against: the shipped catalog plus the organisation's upload", permission: "loop:analyze", ok: { description: "Input types, by id.", schema: REF("InputTypeList") } },
     ],
   },
+  "/api/catalog": {
+    get: [
+      "getCatalog",
+      {
+        tag: "catalog",
+        summary: "The organisation's effective catalog (shipped plus its latest upload) and where entries come from",
+        permission: "catalog:read",
+        ok: {
+          description: "The catalog in use, the upload it comes from, entries added and overridden, and any problem with the latest upload.",
+          schema: { type: "object", properties: { catalog: REF("Catalog"), upload: { type: ["object", "null"] }, added: { type: "array" }, overridden: { type: "array" }, problem: { type: ["object", "null"] } }, required: ["catalog"] },
+        },
+      },
+    ],
+  },
+  "/api/catalog/{entryId}": {
+    get: ["getCatalogEntry", { tag: "catalog", summary: "One entry of the effective catalog with its kind and origin", permission: "catalog:read", pathParams: [entryId], ok: object("The entry, its kind and whether it is shipped, added or overridden.") }],
+  },
+  "/api/catalog/uploads": {
+    get: ["listCatalogUploads", { tag: "catalog", summary: "The stored versions of the organisation's catalog file, newest first", permission: "catalog:read", ok: object("{ uploads }: version, file name, size, SHA-256, who uploaded it, when.") }],
+    post: [
+      "uploadCatalog",
+      {
+        tag: "catalog",
+        summary: "Upload a YAML catalog file: preview the changes, or store it as the next version",
+        description: "`mode=preview` (or `?preview=1`) validates the file and shows the diff without storing; `mode=store` keeps it as the next version. A file that does not validate is refused with 422 and located errors; a store after another version came in gives 409.",
+        permission: "catalog:upload",
+        query: [{ name: "preview", description: "1 or true: preview whatever the form says.", schema: { type: "string", enum: ["0", "1", "true", "false"] } }],
+        bodyContent: {
+          contentType: "multipart/form-data",
+          schema: {
+            type: "object",
+            properties: { file: { type: "string", contentMediaType: "text/yaml", description: "The .yaml file, at most 256 KiB." }, mode: { type: "string", enum: ["preview", "store"], default: "preview" }, baseVersion: { type: "integer", minimum: 0 } },
+            required: ["file"],
+          },
+        },
+        ok: object("The preview (errors, diff) or the stored version with its diff."),
+        errors: [409],
+      },
+    ],
+  },
+  "/api/catalog/uploads/{uploadId}": {
+    get: ["downloadCatalogUpload", { tag: "catalog", summary: "Download one stored version as YAML", permission: "catalog:read", pathParams: [uploadId], ok: { description: "The file as uploaded.", schema: { type: "string" }, contentType: "text/yaml" } }],
+  },
+  "/api/sites/{siteId}/schedule": {
+    get: ["listSchedule", { tag: "schedule", summary: "The site's device schedule in schedule order", permission: "site:read", pathParams: [siteId], ok: object("{ detectors }.") }],
+    post: ["createDetector", { tag: "schedule", summary: "Add one detector (its catalog id checked against the organisation's catalog)", permission: "schedule:write", pathParams: [siteId], body: "DetectorCreate", ok: object("The new detector.") }],
+    patch: ["bulkEditSchedule", { tag: "schedule", summary: "Bulk edit: one patch for many detectors, all or nothing", permission: "schedule:write", pathParams: [siteId], body: "ScheduleBulkEdit", ok: object("{ updated }.") }],
+    delete: ["deleteScheduleDetectors", { tag: "schedule", summary: "Delete the detectors named in { ids }, all or nothing", permission: "schedule:write", pathParams: [siteId], body: "ScheduleDelete", ok: object("{ deleted }.") }],
+  },
+  "/api/sites/{siteId}/schedule/{detectorId}": {
+    patch: ["updateDetector", { tag: "schedule", summary: "Change one detector", permission: "schedule:write", pathParams: [siteId, detectorId], body: "DetectorUpdate", ok: object("The detector as saved.") }],
+    delete: ["deleteDetector", { tag: "schedule", summary: "Delete one detector", permission: "schedule:write", pathParams: [siteId, detectorId], ok: object("{ deleted }.") }],
+  },
+  "/api/sites/{siteId}/schedule/export.csv": {
+    get: ["exportSchedule", { tag: "schedule", summary: "The device schedule as RFC 4180 CSV, in the import's columns", permission: "site:read", pathParams: [siteId], ok: { description: "CSV, one detector a row.", schema: { type: "string" }, contentType: "text/csv" } }],
+  },
+  "/api/sites/{siteId}/schedule/import": {
+    post: [
+      "importSchedule",
+      { tag: "schedule", summary: "Import a CSV: preview checks it and stores nothing; confirm stores it in one transaction", description: "Any bad row refuses the whole file (422, nothing stored) with its row number.", permission: "schedule:write", pathParams: [siteId], body: "ScheduleImport", ok: object("The preview (rows, errors) or what was stored.") },
+    ],
+  },
+  "/api/sites/{siteId}/layouts": {
+    get: ["listLayouts", { tag: "layouts", summary: "The site's layouts with their current revision's findings summary", permission: "layout:read", pathParams: [siteId], ok: object("{ layouts }.") }],
+    post: ["createLayout", { tag: "layouts", summary: "Create a layout from a document, a blank panel, or a hardware suggestion (revision 1)", permission: "layout:write", pathParams: [siteId], body: "LayoutCreate", ok: object("The new layout.") }],
+  },
+  "/api/sites/{siteId}/suggestions": {
+    post: ["suggestHardware", { tag: "layouts", summary: "The cheapest catalog hardware for the schedule, one detector per input and with shared inputs", permission: "layout:read", pathParams: [siteId], body: "SuggestionRequest", ok: object("Both suggestions with their costs and findings.") }],
+  },
+  "/api/layouts/{layoutId}": {
+    get: ["getLayout", { tag: "layouts", summary: "The layout and its current revision's document", permission: "layout:read", pathParams: [layoutId], ok: object("The layout with its document (see LayoutDocument).") }],
+    put: ["saveLayout", { tag: "layouts", summary: "Save a revision", description: "409 `{ error, currentVersion }` when `version` is stale; 422 on references to hardware or detectors that do not exist.", permission: "layout:write", pathParams: [layoutId], body: "LayoutSave", ok: object("The saved revision with its findings summary."), errors: [409] }],
+    delete: ["deleteLayout", { tag: "layouts", summary: "Delete the layout and its revisions", permission: "layout:write", pathParams: [layoutId], ok: object("Deleted.") }],
+  },
+  "/api/layouts/{layoutId}/revisions": {
+    get: ["listRevisions", { tag: "layouts", summary: "Every revision, newest first, with who saved it and its findings summary", permission: "layout:read", pathParams: [layoutId], ok: object("{ revisions }.") }],
+  },
+  "/api/layouts/{layoutId}/revisions/{rev}": {
+    get: ["getRevision", { tag: "layouts", summary: "One revision's document", permission: "layout:read", pathParams: [layoutId, rev], ok: object("The revision and its document.") }],
+  },
+  "/api/layouts/{layoutId}/revisions/{rev}/restore": {
+    post: ["restoreRevision", { tag: "layouts", summary: "A new revision with the old document", description: "409 when `version` is stale.", permission: "layout:write", pathParams: [layoutId, rev], body: "LayoutRestore", ok: object("The new revision."), errors: [409] }],
+  },
 };
 
 export interface OpenApiDocument {
@@ -206,6 +299,9 @@ export function openApiDocument(): OpenApiDocument {
     tags: [
       { name: "loops", description: "Loop supervision: readings, reports, faults and findings." },
       { name: "sites", description: "Buildings the organisation designs for." },
+      { name: "schedule", description: "A site's device schedule: the list of its detectors." },
+      { name: "layouts", description: "Designs of a site's system: hardware chosen and detectors assigned, in revisions." },
+      { name: "catalog", description: "The shipped catalog and the organisation's uploaded catalog file." },
       { name: "members", description: "Who works on the organisation's designs, and in which role." },
       { name: "session", description: "Signing in and out." },
       { name: "service", description: "Health and this description." },
