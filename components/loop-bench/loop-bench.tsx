@@ -283,7 +283,7 @@ export function LoopBench({ inputTypes }: { inputTypes: InputType[] }) {
         </aside>
         {analysis.valid !== false ? (
           <Card title="Every state and fault" testId="all-rows">
-            <StatesTable rows={analysis.rows} current={reading?.row ?? null} onSelect={(st, fault) => setS((prev) => ({ ...prev, states: prev.states.map((x, i) => st[i] ?? x), fault }))} />
+            <StatesTable rows={analysis.rows} detectors={loop.detectors} current={reading?.row ?? null} onSelect={(st, fault) => setS((prev) => ({ ...prev, states: prev.states.map((x, i) => st[i] ?? x), fault }))} />
           </Card>
         ) : null}
         <Card title={`Findings (${analysis.findings.length})`} testId="findings-card">

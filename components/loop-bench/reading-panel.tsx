@@ -11,7 +11,7 @@ function ReportPills({ reports, large }: { reports: readonly Report[]; large?: b
       {reports.map((r, i) => (
         <span key={r} className="inline-flex items-center gap-2">
           {i > 0 ? <span className="text-sm text-slate-500">or</span> : null}
-          <span className={`rounded-md px-2.5 py-0.5 font-semibold ${REPORT_CLASS[r]} ${large ? "text-2xl" : "text-sm"}`}>{reportWord(r)}</span>
+          <span className={`whitespace-nowrap rounded-md px-2.5 py-0.5 font-semibold ${REPORT_CLASS[r]} ${large ? "text-2xl" : "text-sm"}`}>{reportWord(r)}</span>
         </span>
       ))}
     </span>

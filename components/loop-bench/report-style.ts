@@ -29,7 +29,7 @@ export const REPORT_FILL: Record<Report, string> = {
 export const reportWord = (r: Report) => REPORT_WORDS[r];
 
 export const STATUS_WORDS: Record<RowStatus, string> = {
-  ok: "as it should",
+  ok: "right",
   uncertain: "uncertain",
   misread: "misread",
   defeat: "defeat",
