@@ -23,7 +23,8 @@ const securityHeaders = [
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // Sequelize loads dialect modules dynamically; bundling it breaks the build.
-  serverExternalPackages: ["sequelize", "mariadb"],
+  // pdfkit reads its font metrics from its own package folder at run time.
+  serverExternalPackages: ["sequelize", "mariadb", "pdfkit"],
   poweredByHeader: false,
   // Several checkouts' builds can coexist (e.g. parallel test runs): NEXT_DIST_DIR picks the folder.
   distDir: process.env.NEXT_DIST_DIR || ".next",

@@ -8,6 +8,12 @@ DB_SOCKET="$DB_DIR/mysqld.sock"
 DB_USER="loopwright"
 DB_PASSWORD="${LOOPWRIGHT_DB_PASSWORD:-loopwright-local}"
 SMTP_PORT="${LOOPWRIGHT_SMTP_PORT:-2525}"
+S3_PORT="${LOOPWRIGHT_S3_PORT:-4569}"
+
+# Point the app at a fake S3 server on loopback (scripts/s3-sink.sh) on the given port.
+export_s3_env() {
+  export S3_ENDPOINT="http://127.0.0.1:$1" S3_BUCKET="${S3_BUCKET:-loopwright-photos}" S3_ACCESS_KEY="S3RVER" S3_SECRET_KEY="S3RVER"
+}
 mkdir -p "$DATA_DIR"
 
 # The session secret lives in the git-ignored data folder, made once per machine.

@@ -14,5 +14,6 @@ work="$(mktemp -d)"; trap 'rm -rf "$work"' EXIT
 tar -xzf "$archive" -C "$work"
 [ -f "$work/database.sql" ] || { echo "not a Loopwright backup: database.sql missing" >&2; exit 1; }
 client "$db" < "$work/database.sql"
+if [ -z "${S3_ENDPOINT+x}" ] && [ -f "$DATA_DIR/s3-sink-$S3_PORT.pid" ]; then export_s3_env "$S3_PORT"; fi
 if [ -n "${S3_ENDPOINT:-}" ] && [ -d "$work/objects" ]; then (cd "$ROOT" && npx tsx scripts/objects.ts import "$work/objects"); fi
 echo "restored $archive into $db"

@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # Started by Playwright: a fresh e2e database with demo data, a fake SMTP server, and the built app on
-# E2E_PORT (default 3100; the SMTP sink listens 1000 above it).
+# E2E_PORT (default 3100; the SMTP sink listens 1000 above it, the fake S3 server 1500 above).
 set -euo pipefail
 source "$(dirname "$0")/env.sh"
 cd "$ROOT"
@@ -19,5 +19,10 @@ npx tsx scripts/migrate.ts
 npx tsx scripts/seed.ts
 bash scripts/mail-sink.sh stop "$SMTP"
 bash scripts/mail-sink.sh start "$SMTP" "$DATABASE_URL"
-trap 'bash scripts/mail-sink.sh stop "$SMTP"' EXIT
+S3="$((PORT + 1500))"
+export_s3_env "$S3"
+bash scripts/s3-sink.sh stop "$S3"
+rm -rf "$DATA_DIR/s3-$S3"
+bash scripts/s3-sink.sh start "$S3"
+trap 'bash scripts/mail-sink.sh stop "$SMTP"; bash scripts/s3-sink.sh stop "$S3"' EXIT
 npx next start --hostname 127.0.0.1 --port "$PORT"

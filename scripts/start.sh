@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # One command from a fresh clone to the app on http://localhost:3000 (bound to 127.0.0.1):
-# npm packages, MariaDB (Debian package), migrations, demo data, fake SMTP, production build, server.
+# npm packages, MariaDB (Debian package), migrations, demo data, fake SMTP and S3, production build, server.
 set -euo pipefail
 source "$(dirname "$0")/env.sh"
 cd "$ROOT"
@@ -18,11 +18,13 @@ npx tsx scripts/migrate.ts
 npx tsx scripts/seed.ts
 
 bash scripts/mail-sink.sh start "$SMTP_PORT" "$DATABASE_URL"
+export_s3_env "$S3_PORT"
+bash scripts/s3-sink.sh start "$S3_PORT"
 
 # Rebuild only when a source file is newer than the last build.
 if [ ! -f .next/BUILD_ID ] || [ -n "$(git ls-files -z 2>/dev/null | xargs -0 -r find 2>/dev/null -newer .next/BUILD_ID -print -quit)" ]; then
   npx next build
 fi
 
-echo "Loopwright on http://localhost:3000 — demo sign-ins are in README.md; outbox at /dev/outbox. Ctrl-C stops the app; npm run stop stops MariaDB and the mail sink."
+echo "Loopwright on http://localhost:3000 — demo sign-ins are in README.md; outbox at /dev/outbox. Ctrl-C stops the app; npm run stop stops MariaDB, the mail sink and the fake S3 server."
 exec npx next start --hostname 127.0.0.1 --port 3000

@@ -3,6 +3,7 @@ import { execFileSync } from "node:child_process";
 import { mkdtempSync, rmSync, statSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
+import { S3Client, PutObjectCommand, GetObjectCommand } from "@aws-sdk/client-s3";
 
 const ROOT = path.resolve(__dirname, "../..");
 const run = (cmd: string, args: string[], env: Record<string, string> = {}) =>
@@ -15,6 +16,10 @@ function fingerprint(db: string) {
   const tables = sql(db, "SHOW TABLES").trim().split("\n").filter(Boolean).sort();
   return Object.fromEntries(tables.map((t) => [t, { rows: Number(sql(db, "SELECT COUNT(*) FROM `" + t + "`").trim()), checksum: sql(db, "CHECKSUM TABLE `" + t + "`").trim().split(/\s+/).pop() }]));
 }
+
+const s3Env = (port: number) => ({ S3_ENDPOINT: `http://127.0.0.1:${port}`, S3_BUCKET: "loopwright-photos", S3_ACCESS_KEY: "S3RVER", S3_SECRET_KEY: "S3RVER" });
+const s3 = (port: number) =>
+  new S3Client({ endpoint: `http://127.0.0.1:${port}`, region: "us-east-1", forcePathStyle: true, credentials: { accessKeyId: "S3RVER", secretAccessKey: "S3RVER" }, requestChecksumCalculation: "WHEN_REQUIRED", responseChecksumValidation: "WHEN_REQUIRED" });
 
 describe("backup and restore", () => {
   it("round-trips the demo data into an empty instance, table by table", () => {
@@ -37,6 +42,32 @@ describe("backup and restore", () => {
       expect(() => run("bash", ["scripts/restore.sh", archive, dst], { S3_ENDPOINT: "" })).toThrow(/not empty/);
       expect(fingerprint(dst)).toEqual(before);
     } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  }, 120_000);
+
+  it("carries the uploaded files: an object in the store before the backup is in a fresh store after the restore", async () => {
+    const [srcPort, dstPort] = [4591, 4592];
+    const src = "loopwright_test_backup_obj_src";
+    const dst = "loopwright_test_backup_obj_dst";
+    const dir = mkdtempSync(path.join(tmpdir(), "lw-backup-obj-"));
+    try {
+      run("bash", ["scripts/db.sh", "create", src]);
+      run("bash", ["scripts/db.sh", "create", dst]);
+      run("npx", ["tsx", "scripts/migrate.ts"], { DATABASE_URL: url(src) });
+      run("bash", ["scripts/s3-sink.sh", "start", String(srcPort), path.join(dir, "s3-src")], s3Env(srcPort));
+      const body = Buffer.from([0xff, 0xd8, 0xff, 0xe0, 1, 2, 3, 4]); // a JPEG's first bytes
+      await s3(srcPort).send(new PutObjectCommand({ Bucket: "loopwright-photos", Key: "photos/1/terminal.jpg", Body: body, ContentType: "image/jpeg" }));
+      const archive = path.join(dir, "backup.tar.gz");
+      run("bash", ["scripts/backup.sh", archive, src], s3Env(srcPort));
+      run("bash", ["scripts/s3-sink.sh", "start", String(dstPort), path.join(dir, "s3-dst")], s3Env(dstPort));
+      run("bash", ["scripts/restore.sh", archive, dst], s3Env(dstPort));
+      const back = await s3(dstPort).send(new GetObjectCommand({ Bucket: "loopwright-photos", Key: "photos/1/terminal.jpg" }));
+      expect(Buffer.from(await back.Body!.transformToByteArray())).toEqual(body);
+      expect(back.ContentType).toBe("image/jpeg");
+    } finally {
+      run("bash", ["scripts/s3-sink.sh", "stop", String(srcPort)]);
+      run("bash", ["scripts/s3-sink.sh", "stop", String(dstPort)]);
       rmSync(dir, { recursive: true, force: true });
     }
   }, 120_000);
