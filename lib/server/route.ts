@@ -17,10 +17,16 @@ export function zodIssues(error: ZodError): ApiErrorIssue[] {
   return error.issues.map((i) => ({ path: i.path.map(String).join(".") || "(body)", message: i.message }));
 }
 
+// The mariadb connector's codes for a server that went away: refused, reset, closed under a query
+// (ER_SOCKET_UNEXPECTED_CLOSE), a pooled connection closed since (ER_CMD_CONNECTION_CLOSED), killed at shutdown.
+const connectionLost = /^(ECONNREFUSED|ECONNRESET|EHOSTUNREACH|ETIMEDOUT|EPIPE|ER_GET_CONNECTION_TIMEOUT|ER_CONNECTION_TIMEOUT|ER_SOCKET_UNEXPECTED_CLOSE|ER_SOCKET_TIMEOUT|ER_CMD_CONNECTION_CLOSED|ER_CONNECTION_ALREADY_CLOSED|ER_CONNECTION_KILLED|ER_SERVER_SHUTDOWN)$/;
+
 function isDatabaseDown(e: unknown): boolean {
   if (e instanceof ConnectionError || e instanceof TimeoutError) return true;
-  const code = (e as { original?: { code?: string }; parent?: { code?: string } })?.original?.code ?? (e as { parent?: { code?: string } })?.parent?.code;
-  return !!code && /^(ECONNREFUSED|ECONNRESET|ER_GET_CONNECTION_TIMEOUT|ER_CONNECTION_TIMEOUT|ER_SOCKET_UNEXPECTED_CLOSE|ETIMEDOUT|EPIPE)$/.test(code);
+  type Cause = { code?: string; sqlState?: string };
+  const cause = (e as { original?: Cause; parent?: Cause })?.original ?? (e as { parent?: Cause })?.parent;
+  // SQLSTATE class 08 is "connection exception"
+  return (!!cause?.code && connectionLost.test(cause.code)) || (!!cause?.sqlState && cause.sqlState.startsWith("08"));
 }
 
 /** Maps anything thrown to the one JSON error shape; internals never leave the server. */
