@@ -143,6 +143,9 @@ export interface ImportPreview {
 }
 
 function preview(csv: string, catalog: Catalog): ImportPreview {
+  // a NUL byte means a binary file behind a .csv name; refused as a whole, like a catalog upload
+  const nul = csv.indexOf("\u0000");
+  if (nul >= 0) return { rows: [], errors: [{ row: csv.slice(0, nul).split("\n").length, column: null, message: "the file contains a NUL byte, so it is not a text file: save it as UTF-8 CSV" }], records: 0 };
   const parsed = parseScheduleCsv(csv, catalog);
   const rows = parsed.rows.map((detector, i) => ({ row: parsed.rowNumbers[i], detector }));
   const badRows = new Set(parsed.errors.filter((e) => e.row > 1).map((e) => e.row));
