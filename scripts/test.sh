@@ -15,10 +15,12 @@ echo "== lint"; npx eslint . --max-warnings=0
 echo "== types"; npx tsc --noEmit -p .
 echo "== unit and property tests"; npx vitest run --project unit
 
-echo "== integration tests (MariaDB database loopwright_test, created fresh)"
+# built before the integration tests: the database fault test runs the production server (next start)
+echo "== production build"; npx next build
+
+echo "== integration tests (MariaDB database loopwright_test, created fresh; a private MariaDB on 3326 for the fault test)"
 bash scripts/db.sh create loopwright_test
 DATABASE_URL="$(db_url loopwright_test)" NEXTAUTH_URL="http://localhost:3100" npx vitest run --project integration
 
 echo "== browser tests (Chromium, database loopwright_e2e, created fresh)"
-npx next build
 npx playwright test
