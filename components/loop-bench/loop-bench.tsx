@@ -250,7 +250,7 @@ export function LoopBench({ inputTypes }: { inputTypes: InputType[] }) {
           <div role="note" className="rounded-lg border border-warn bg-warn-soft p-3 text-sm" data-testid="life-safety-caution">
             <p className="font-semibold text-warn">Life-safety devices</p>
             <p className="mt-1">
-              {LIFE_SAFETY_CAUTION} A fire design must follow the local fire code and the authority having jurisdiction, and be installed and certified by licensed people.
+              {LIFE_SAFETY_CAUTION} Installation and certification are for licensed people.
             </p>
           </div>
         ) : null}

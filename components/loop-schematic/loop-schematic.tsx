@@ -20,11 +20,11 @@ export interface LoopSchematicProps {
   className?: string;
 }
 
-const W_CONTACT = 84;
-const W_RESISTOR = 92;
+const W_CONTACT = 90;
+const W_RESISTOR = 96;
 const BRANCH_GAP = 60;
 const RUNG_GAP = 92;
-const CABLE_W = 260;
+const CABLE_W = 220;
 const CABLE_BG = "#eef3f6";
 
 const widthOf = (e: SeriesEl): number =>
@@ -87,7 +87,7 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
   const tol = loop.tolerancePct;
 
   const maxBranches = Math.max(1, ...m.far.series.map((e) => (e.kind === "parallel" ? e.branches.length : 1)));
-  const yA = 78;
+  const yA = 90;
   const yB = yA + Math.max(150, (maxBranches - 1) * BRANCH_GAP + 80);
   const loopBack = m.conductors === 4;
   const yC = yB + 44;
@@ -125,8 +125,8 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
       role="img"
       aria-labelledby={`${uid}-t ${uid}-d`}
       className={className}
-      // never drawn so small that its 11-unit labels fall below about 9 px; wider loops scroll instead
-      style={{ fontFamily: "inherit", width: "100%", minWidth: Math.round(width * 0.82), height: "auto" }}
+      // never drawn so small that its labels fall below about 8.5 px; wider loops scroll instead
+      style={{ fontFamily: "inherit", width: "100%", minWidth: Math.round(width * 0.72), height: "auto" }}
       data-testid="loop-schematic"
       data-placement={loop.placement}
       data-fault={fault}
@@ -135,26 +135,26 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
       <desc id={`${uid}-d`}>{describe(loop, states, fault)}</desc>
 
       {/* regions */}
-      <rect x={8} y={yA - 48} width={TERM_X - 8} height={yB - yA + 96} rx={8} fill="#f1efe8" stroke="#b9b4a6" />
-      <text x={16} y={yA - 32} fontSize={12} fontWeight={700} fill={INK}>
+      <rect x={8} y={yA - 60} width={TERM_X - 8} height={yB - yA + 108} rx={8} fill="#f1efe8" stroke="#b9b4a6" />
+      <text x={16} y={yA - 42} fontSize={13} fontWeight={700} fill={INK}>
         Panel input
       </text>
-      <text x={TERM_X - 10} y={yA - 8} textAnchor="end" fontSize={10.5} fill={MUTED}>
+      <text x={TERM_X - 10} y={yA - 8} textAnchor="end" fontSize={12} fill={MUTED}>
         IN
       </text>
-      <text x={TERM_X - 10} y={yB + 16} textAnchor="end" fontSize={10.5} fill={MUTED}>
+      <text x={TERM_X - 10} y={yB + 16} textAnchor="end" fontSize={12} fill={MUTED}>
         COM
       </text>
       {hasPanelSide ? (
         <g>
-          <rect x={TERM_X + 8} y={yA - 48} width={PX - TERM_X - 16} height={bottom - yA + 38} rx={8} fill="none" stroke={atPanelWarning ? WARN : "#b9b4a6"} strokeDasharray="5 4" />
-          <text x={TERM_X + 16} y={yA - 32} fontSize={11} fontWeight={600} fill={atPanelWarning ? WARN : MUTED}>
+          <rect x={TERM_X + 8} y={yA - 60} width={PX - TERM_X - 16} height={bottom - yA + 50} rx={8} fill="none" stroke={atPanelWarning ? WARN : "#b9b4a6"} strokeDasharray="5 4" />
+          <text x={TERM_X + 16} y={yA - 42} fontSize={12.5} fontWeight={600} fill={atPanelWarning ? WARN : MUTED}>
             {atPanelWarning ? "resistor at the panel" : "at the panel"}
           </text>
         </g>
       ) : null}
-      <rect x={FX - 16} y={yA - 48} width={width - FX + 8} height={(loopBack ? bottom - 10 : yB + 48) - (yA - 48)} rx={8} fill="none" stroke="#b9b4a6" strokeDasharray="5 4" />
-      <text x={FX - 8} y={yA - 32} fontSize={11} fontWeight={600} fill={MUTED}>
+      <rect x={FX - 16} y={yA - 60} width={width - FX + 8} height={(loopBack ? bottom - 10 : yB + 48) - (yA - 60)} rx={8} fill="none" stroke="#b9b4a6" strokeDasharray="5 4" />
+      <text x={FX - 8} y={yA - 42} fontSize={12.5} fontWeight={600} fill={MUTED}>
         at the detector{loop.detectors.length > 1 ? "s" : ""}
       </text>
 
@@ -164,11 +164,11 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
       <Line x1={meterX} y1={yA} x2={meterX} y2={midY - 16} colour={MUTED} width={1} />
       <Line x1={meterX} y1={midY + 16} x2={meterX} y2={yB} colour={MUTED} width={1} />
       <circle cx={meterX} cy={midY} r={16} fill="#fff" stroke={INK} strokeWidth={1.5} />
-      <text x={meterX} y={midY + 5} textAnchor="middle" fontSize={14} fontWeight={700} fill={INK}>
+      <text x={meterX} y={midY + 5} textAnchor="middle" fontSize={15} fontWeight={700} fill={INK}>
         Ω
       </text>
       {readingText ? (
-        <text x={meterX} y={midY + 34} textAnchor="middle" fontSize={11} fontWeight={700} fill={INK} data-testid="schematic-reading">
+        <text x={meterX} y={midY + 34} textAnchor="middle" fontSize={12.5} fontWeight={700} fill={INK} data-testid="schematic-reading">
           {readingText}
         </text>
       ) : null}
@@ -193,14 +193,14 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
       ) : null}
 
       {/* cable */}
-      <text x={PX + CABLE_W / 2} y={midY - 6} textAnchor="middle" fontSize={11.5} fontWeight={600} fill={INK}>
+      <text x={PX + CABLE_W / 2} y={midY - 6} textAnchor="middle" fontSize={13} fontWeight={600} fill={INK}>
         cable {loop.cable.lengthM} m
       </text>
-      <text x={PX + CABLE_W / 2} y={midY + 10} textAnchor="middle" fontSize={10.5} fill={MUTED}>
+      <text x={PX + CABLE_W / 2} y={midY + 10} textAnchor="middle" fontSize={12} fill={MUTED}>
         {gaugeText(loop)} · {m.conductors} conductors
       </text>
       {["c1", "c2", "c3", "c4"].slice(0, m.conductors).map((c, i) => (
-        <text key={c} x={PX + 6} y={[yA, yB, yC, yD][i] - 4} fontSize={9} fill={MUTED}>
+        <text key={c} x={PX + 6} y={[yA, yB, yC, yD][i] - 4} fontSize={10} fill={MUTED}>
           {c}
         </text>
       ))}
@@ -215,7 +215,7 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
           <Line x1={lbX} y1={yD} x2={endX + 32} y2={yD} />
           <Line x1={lbX} y1={yC} x2={lbX} y2={yD} />
           <ResistorV r={lastRung.resistor} x={lbX} y={(yC + yD) / 2} tolerancePct={tol} labelSide="left" />
-          <text x={lbX + 10} y={yD + 18} fontSize={10} fill={MUTED}>
+          <text x={lbX + 10} y={yD + 18} fontSize={11.5} fill={MUTED}>
             loop-back resistor: at the panel, electrically at the far end
           </text>
         </g>
@@ -258,7 +258,7 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
           <Line x1={shortX} y1={yA} x2={shortX} y2={yB} colour={FAULT} width={4} />
           <circle cx={shortX} cy={yA} r={3.5} fill={FAULT} />
           <circle cx={shortX} cy={yB} r={3.5} fill={FAULT} />
-          <text x={shortX + (fault === "short-panel" ? 8 : -8)} y={yB - 10} textAnchor={fault === "short-panel" ? "start" : "end"} fontSize={11} fontWeight={700} fill={FAULT}>
+          <text x={shortX + (fault === "short-panel" ? 8 : -8)} y={yB - 10} textAnchor={fault === "short-panel" ? "start" : "end"} fontSize={12.5} fontWeight={700} fill={FAULT}>
             short
           </text>
         </g>
@@ -268,7 +268,7 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
           <rect x={cutX - 9} y={yA - 4} width={18} height={8} fill={CABLE_BG} />
           <Line x1={cutX - 9} y1={yA - 6} x2={cutX - 5} y2={yA + 6} colour={FAULT} width={2} />
           <Line x1={cutX + 5} y1={yA - 6} x2={cutX + 9} y2={yA + 6} colour={FAULT} width={2} />
-          <text x={cutX} y={yA - 12} textAnchor="middle" fontSize={11} fontWeight={700} fill={FAULT}>
+          <text x={cutX} y={yA - 12} textAnchor="middle" fontSize={12.5} fontWeight={700} fill={FAULT}>
             cut
           </text>
         </g>

@@ -63,10 +63,10 @@ export function ResistorH({ r, x, y, tolerancePct, highlight }: { r: ResistorEl;
       <rect x={x - 26} y={y - 5} width={52} height={10} fill={BG} />
       <line x1={x - 26} y1={y} x2={x + 26} y2={y} stroke={INK} strokeWidth={1.5} />
       <Stripes ohms={r.ohms} tolerancePct={tolerancePct} x={x} y={y} />
-      <text x={x} y={y - 13} textAnchor="middle" fontSize={11} fontWeight={600} fill={highlight ?? INK}>
+      <text x={x} y={y - 13} textAnchor="middle" fontSize={12.5} fontWeight={600} fill={highlight ?? INK}>
         {valueText(r)}
       </text>
-      <text x={x} y={y + 22} textAnchor="middle" fontSize={10} fill={highlight ?? MUTED}>
+      <text x={x} y={y + 22} textAnchor="middle" fontSize={11.5} fill={highlight ?? MUTED}>
         {r.label}
       </text>
     </g>
@@ -81,10 +81,10 @@ export function ResistorV({ r, x, y, tolerancePct, highlight, labelSide = "right
       <rect x={x - 5} y={y - 26} width={10} height={52} fill={BG} />
       <line x1={x} y1={y - 26} x2={x} y2={y + 26} stroke={INK} strokeWidth={1.5} />
       <Stripes ohms={r.ohms} tolerancePct={tolerancePct} x={x} y={y} vertical />
-      <text x={tx} y={y - 2} textAnchor={anchor} fontSize={11} fontWeight={600} fill={highlight ?? INK}>
+      <text x={tx} y={y - 2} textAnchor={anchor} fontSize={12.5} fontWeight={600} fill={highlight ?? INK}>
         {valueText(r)}
       </text>
-      <text x={tx} y={y + 11} textAnchor={anchor} fontSize={10} fill={highlight ?? MUTED}>
+      <text x={tx} y={y + 11} textAnchor={anchor} fontSize={11.5} fill={highlight ?? MUTED}>
         {r.label}
       </text>
     </g>
@@ -112,10 +112,10 @@ export function ContactH({ c, x, y }: { c: ContactEl; x: number; y: number }) {
       ) : (
         <line x1={x - 18} y1={y} x2={x + 14} y2={y - 15} stroke={col} strokeWidth={2.5} strokeLinecap="round" />
       )}
-      <text x={x} y={y - 21} textAnchor="middle" fontSize={10.5} fontWeight={600} fill={col}>
+      <text x={x} y={y - 21} textAnchor="middle" fontSize={12} fontWeight={600} fill={col}>
         {c.label}
       </text>
-      <text x={x} y={y + 16} textAnchor="middle" fontSize={10} fill={c.operated ? col : MUTED}>
+      <text x={x} y={y + 16} textAnchor="middle" fontSize={11.5} fill={c.operated ? col : MUTED}>
         {stateText(c)}
       </text>
     </g>
@@ -135,10 +135,10 @@ export function ContactV({ c, x, y }: { c: ContactEl; x: number; y: number }) {
       ) : (
         <line x1={x} y1={y + 18} x2={x - 15} y2={y - 14} stroke={col} strokeWidth={2.5} strokeLinecap="round" />
       )}
-      <text x={x + 9} y={y - 2} fontSize={10.5} fontWeight={600} fill={col}>
+      <text x={x + 9} y={y - 2} fontSize={12} fontWeight={600} fill={col}>
         {c.label}
       </text>
-      <text x={x + 9} y={y + 11} fontSize={10} fill={c.operated ? col : MUTED}>
+      <text x={x + 9} y={y + 11} fontSize={11.5} fill={c.operated ? col : MUTED}>
         {stateText(c)}
       </text>
     </g>
