@@ -90,7 +90,14 @@ const rev = { name: "rev", description: "A revision number of the layout (1 is t
 const detectorId = { name: "detectorId", description: "A detector of the site's device schedule." };
 const uploadId = { name: "uploadId", description: "A stored version of the organisation's catalog file." };
 const entryId = { name: "entryId", description: "The id of a catalog entry (any kind).", schema: REF("Id") };
+const photoId = { name: "photoId", description: "A photo of the layout's commissioning record." };
 const object = (description: string) => ({ description, schema: { type: "object" } });
+const json = (description: string) => ({ contentType: "application/json", schema: { type: "object", description } });
+const pdf = (description: string) => ({ description, schema: { type: "string", contentMediaType: "application/pdf" }, contentType: "application/pdf" });
+const csv = (description: string) => ({ description, schema: { type: "string" }, contentType: "text/csv" });
+const sizeQuery = { name: "size", description: "Paper size.", schema: { type: "string", enum: ["A4", "LETTER"] } };
+const revisionQuery = { name: "revision", description: "A revision number; default: the approved revision (else the current one).", schema: { type: "integer", minimum: 1 } };
+const layoutQuery = { name: "layoutId", description: "Which of the site's layouts.", schema: { type: "integer", minimum: 1 }, required: true };
 
 
 /** Path → method → operation. Every route.ts under app/api must appear here. */
@@ -261,6 +268,74 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
   "/api/layouts/{layoutId}/revisions/{rev}": {
     get: ["getRevision", { tag: "layouts", summary: "One revision's document", permission: "layout:read", pathParams: [layoutId, rev], ok: object("The revision and its document.") }],
   },
+  "/api/layouts/{layoutId}/comments": {
+    get: ["listComments", { tag: "review", summary: "The layout's comment thread, oldest first", permission: "layout:read", pathParams: [layoutId], ok: object("{ comments }.") }],
+    post: ["addComment", { tag: "review", summary: "Comment on the layout, a board, an input or a detector", permission: "layout:comment", pathParams: [layoutId], bodyContent: json("The comment and what it is about."), ok: { status: 201, ...object("The comment.") } }],
+  },
+  "/api/layouts/{layoutId}/review": {
+    get: ["getReview", { tag: "review", summary: "The review state, the steps the caller may take (with reasons for the others), comments and decisions", permission: "layout:read", pathParams: [layoutId], ok: object("The review.") }],
+    post: [
+      "reviewStep",
+      { tag: "review", summary: "One review step: submit, withdraw, approve or reject", description: "Approve and reject are the engineer's; 409 from the wrong state or when a newer revision was saved.", permission: "layout:submit", pathParams: [layoutId], bodyContent: json("{ action, … }."), ok: object("The review after the step."), errors: [409] },
+    ],
+  },
+  "/api/layouts/{layoutId}/sheet": {
+    get: ["getSheet", { tag: "sheets", summary: "The terminal sheet as data: the approved revision, else the current one", description: 'Open readings are sent as "Infinity".', permission: "sheet:read", pathParams: [layoutId], query: [revisionQuery], ok: object("The terminal sheet.") }],
+  },
+  "/api/layouts/{layoutId}/sheet/pdf": {
+    get: ["getSheetPdf", { tag: "sheets", summary: "The terminal sheet as a PDF", permission: "sheet:read", pathParams: [layoutId], query: [sizeQuery, revisionQuery], ok: pdf("The terminal sheet.") }],
+  },
+  "/api/layouts/{layoutId}/sheet/send": {
+    post: ["sendSheet", { tag: "sheets", summary: "E-mail the terminal sheet PDF to the site's assigned installer", description: "409 when the site has no installer.", permission: "sheet:send", pathParams: [layoutId], bodyContent: json("{ size }: A4 or LETTER."), ok: object("{ sent }."), errors: [409] }],
+  },
+  "/api/layouts/{layoutId}/commissioning": {
+    get: ["getCommissioning", { tag: "commissioning", summary: "Progress per loop on the approved revision, the readings and the photos", description: 'Open readings are sent as "Infinity".', permission: "sheet:read", pathParams: [layoutId], ok: object("The commissioning record so far.") }],
+  },
+  "/api/layouts/{layoutId}/commissioning/readings": {
+    post: [
+      "recordReading",
+      { tag: "commissioning", summary: "Record one meter reading, judged against the approved sheet", description: "201; 200 with the stored reading when the clientId was seen before.", permission: "commissioning:record", pathParams: [layoutId], bodyContent: json("The loop, the reading in ohms and a clientId."), ok: { status: 201, ...object("The reading and its verdict.") } },
+    ],
+  },
+  "/api/layouts/{layoutId}/commissioning/complete": {
+    post: ["completeCommissioning", { tag: "commissioning", summary: "Mark the approved layout commissioned, once every loop has passed", permission: "commissioning:record", pathParams: [layoutId], ok: object("The review after the step."), errors: [409] }],
+  },
+  "/api/layouts/{layoutId}/commissioning/report": {
+    get: ["getCommissioningReport", { tag: "commissioning", summary: "The commissioning record PDF, once every loop of the approved revision has passed", permission: "sheet:read", pathParams: [layoutId], query: [sizeQuery], ok: pdf("The commissioning record."), errors: [409] }],
+  },
+  "/api/layouts/{layoutId}/photos": {
+    post: [
+      "uploadPhoto",
+      {
+        tag: "commissioning",
+        summary: "A photo of the terminations for a loop or the whole layout",
+        description: "JPEG, PNG or WebP by its bytes, at most 8 MiB; 201 (200 when the clientId was seen before).",
+        permission: "commissioning:record",
+        pathParams: [layoutId],
+        bodyContent: { contentType: "multipart/form-data", schema: { type: "object", properties: { file: { type: "string", contentMediaType: "image/*" }, boardKey: { type: "string" }, input: { type: "integer" }, clientId: { type: "string" } }, required: ["file"] } },
+        ok: { status: 201, ...object("The stored photo.") },
+      },
+    ],
+  },
+  "/api/layouts/{layoutId}/photos/{photoId}": {
+    get: ["getPhoto", { tag: "commissioning", summary: "One commissioning photo, as stored", permission: "sheet:read", pathParams: [layoutId, photoId], ok: { description: "The image.", schema: { type: "string" }, contentType: "image/*" } }],
+  },
+  "/api/sites/{siteId}/compare": {
+    get: [
+      "compareLayouts",
+      { tag: "layouts", summary: "Two to six of the site's layouts side by side: cost, inputs, supplies, supervision coverage, findings, shared-input trade-offs", permission: "layout:read", pathParams: [siteId], query: [{ name: "ids", description: "Layout ids, comma-separated (2 to 6).", schema: { type: "string" }, required: true }], ok: object("The comparison.") },
+    ],
+  },
+  "/api/sites/{siteId}/decisions": {
+    get: ["listDecisions", { tag: "review", summary: "The decision log of the site's layouts (review steps and choices with reasons), newest first", permission: "layout:read", pathParams: [siteId], ok: object("{ decisions }.") }],
+    post: ["chooseLayout", { tag: "review", summary: "Record which of the compared layouts was chosen, and why", permission: "layout:write", pathParams: [siteId], bodyContent: json("The chosen layout and the reason."), ok: { status: 201, ...object("The decision.") } }],
+  },
+  "/api/sites/{siteId}/exports/bom.csv": {
+    get: ["exportBom", { tag: "sheets", summary: "The bill of materials (catalog list prices, resistors by value, batteries) as RFC 4180 CSV", permission: "sheet:read", pathParams: [siteId], query: [layoutQuery, revisionQuery], ok: csv("One line per part.") }],
+  },
+  "/api/sites/{siteId}/exports/zones.csv": {
+    get: ["exportZones", { tag: "sheets", summary: "The zone list for the monitoring centre as RFC 4180 CSV", permission: "sheet:read", pathParams: [siteId], query: [layoutQuery, revisionQuery], ok: csv("Zone, label, area, room, device type, board, input, report types.") }],
+  },
   "/api/layouts/{layoutId}/revisions/{rev}/restore": {
     post: ["restoreRevision", { tag: "layouts", summary: "A new revision with the old document", description: "409 when `version` is stale.", permission: "layout:write", pathParams: [layoutId, rev], body: "LayoutRestore", ok: object("The new revision."), errors: [409] }],
   },
@@ -302,6 +377,9 @@ export function openApiDocument(): OpenApiDocument {
       { name: "schedule", description: "A site's device schedule: the list of its detectors." },
       { name: "layouts", description: "Designs of a site's system: hardware chosen and detectors assigned, in revisions." },
       { name: "catalog", description: "The shipped catalog and the organisation's uploaded catalog file." },
+      { name: "review", description: "Comments, review steps and decisions on layouts." },
+      { name: "sheets", description: "Terminal sheets and exports for installers and monitoring centres." },
+      { name: "commissioning", description: "Meter readings and photos proving each loop." },
       { name: "members", description: "Who works on the organisation's designs, and in which role." },
       { name: "session", description: "Signing in and out." },
       { name: "service", description: "Health and this description." },
