@@ -1,10 +1,10 @@
-import { execFile, execFileSync, spawn, type ChildProcess } from "node:child_process";
+import { execFile, execFileSync } from "node:child_process";
 import { promisify } from "node:util";
-import { existsSync, readFileSync } from "node:fs";
-import { createServer } from "node:net";
+import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import * as mariadb from "mariadb";
+import { CookieClient, ensureBuild, startServer, type RunningServer } from "@/tests/api-registry/http-server";
 
 // The production server with its database taken away and given back: a private MariaDB on port 3326
 // (scripts/db.sh with LOOPWRIGHT_DB_PORT=3326), stopped in the middle of a run of layout saves. Meanwhile
@@ -23,60 +23,10 @@ const db = (...args: string[]) => execFileSync("bash", ["scripts/db.sh", ...args
 const dbAsync = (...args: string[]) => promisify(execFile)("bash", ["scripts/db.sh", ...args], { cwd: root, env: dbEnv, timeout: 180_000 });
 const connect = () => mariadb.createConnection({ host: "127.0.0.1", port: DB_PORT, user: "loopwright", password: "loopwright-local", database: DB_NAME });
 
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const s = createServer();
-    s.once("error", reject);
-    s.listen(0, "127.0.0.1", () => {
-      const { port } = s.address() as { port: number };
-      s.close(() => resolve(port));
-    });
-  });
-}
-
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
-/** fetch with one cookie jar (the next-auth session). */
-class Client {
-  private cookies = new Map<string, string>();
-  constructor(private readonly base: string) {}
-  async request(path: string, init: { method?: string; json?: unknown; form?: Record<string, string> } = {}) {
-    const headers: Record<string, string> = { cookie: [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ") };
-    let body: string | undefined;
-    if (init.json !== undefined) {
-      headers["content-type"] = "application/json";
-      body = JSON.stringify(init.json);
-    } else if (init.form) {
-      headers["content-type"] = "application/x-www-form-urlencoded";
-      body = new URLSearchParams(init.form).toString();
-    }
-    const res = await fetch(this.base + path, { method: init.method ?? "GET", headers, body, redirect: "manual" });
-    for (const c of res.headers.getSetCookie()) {
-      const [pair] = c.split(";");
-      const i = pair.indexOf("=");
-      this.cookies.set(pair.slice(0, i), pair.slice(i + 1));
-    }
-    const text = await res.text();
-    let parsed: Record<string, unknown> | null = null;
-    try {
-      parsed = JSON.parse(text);
-    } catch {
-      parsed = null;
-    }
-    return { status: res.status, text, json: parsed as Record<string, any> }; // eslint-disable-line @typescript-eslint/no-explicit-any
-  }
-  async signIn(email: string, password: string) {
-    const { json } = await this.request("/api/auth/csrf");
-    const res = await this.request("/api/auth/callback/credentials", { method: "POST", form: { csrfToken: json.csrfToken, email, password, json: "true", callbackUrl: "/" } });
-    expect(res.status).toBe(200);
-    expect((await this.request("/api/auth/session")).json.userId).toBeGreaterThan(0);
-  }
-}
-
-let server: ChildProcess | undefined;
-let serverLog = "";
-let client: Client;
-let base = "";
+let server: RunningServer | undefined;
+let client: CookieClient;
 
 beforeAll(async () => {
   db("up");
@@ -85,36 +35,14 @@ beforeAll(async () => {
   execFileSync("npx", ["tsx", "scripts/migrate.ts"], { cwd: root, env, stdio: "pipe", timeout: 120_000 });
   execFileSync("npx", ["tsx", "scripts/seed.ts"], { cwd: root, env, stdio: "pipe", timeout: 120_000 });
   // scripts/test.sh builds before the integration tests; a run on its own builds here
-  if (!existsSync(join(root, distDir, "BUILD_ID"))) execFileSync("npx", ["next", "build"], { cwd: root, env: { ...process.env, NEXT_DIST_DIR: distDir }, stdio: "inherit", timeout: 900_000 });
-
-  const port = await freePort();
-  base = `http://127.0.0.1:${port}`;
-  server = spawn("npx", ["next", "start", "--hostname", "127.0.0.1", "--port", String(port)], {
-    cwd: root,
-    env: { ...process.env, DATABASE_URL: dbUrl, NEXTAUTH_URL: `http://127.0.0.1:${port}`, NEXTAUTH_SECRET: secret, NEXT_DIST_DIR: distDir, LOOPWRIGHT_DEV_OUTBOX: "0" },
-    detached: true, // its own process group, ended as a whole in afterAll
-    stdio: ["ignore", "pipe", "pipe"],
-  });
-  server.stdout?.on("data", (d) => (serverLog += d));
-  server.stderr?.on("data", (d) => (serverLog += d));
-  for (let i = 0; i < 120; i++) {
-    const ok = await fetch(`${base}/api/health`).then((r) => r.status === 200, () => false);
-    if (ok) break;
-    if (server.exitCode !== null) throw new Error(`next start exited:\n${serverLog}`);
-    await sleep(500);
-  }
-  client = new Client(base);
+  ensureBuild(root, distDir);
+  server = await startServer({ root, distDir, databaseUrl: dbUrl, secret });
+  client = new CookieClient(server.base);
   await client.signIn("designer@quillfen.example", "loop-demo-2026");
 }, 1_000_000);
 
 afterAll(() => {
-  if (server?.pid) {
-    try {
-      process.kill(-server.pid, "SIGTERM");
-    } catch {
-      // already gone
-    }
-  }
+  server?.stop();
   try {
     db("up"); // leave the private instance running for the next run (it is started once per machine)
   } catch {
@@ -188,7 +116,7 @@ describe("the database goes away and comes back", () => {
       recovered = (await client.request("/api/health")).status === 200;
       if (!recovered) await sleep(500);
     }
-    expect(recovered, serverLog.slice(-2000)).toBe(true);
+    expect(recovered, server!.log().slice(-2000)).toBe(true);
     const upHealth = await client.request("/api/health");
     expect(upHealth.json.database.state).toBe("up");
 

@@ -1,0 +1,110 @@
+import { execFileSync, spawn } from "node:child_process";
+import { existsSync } from "node:fs";
+import { createServer } from "node:net";
+import { join } from "node:path";
+
+// The production server started from a test or a bench (next start on a free loopback port), and a fetch
+// client with one cookie jar that signs in through next-auth's credentials endpoint.
+
+export async function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const s = createServer();
+    s.once("error", reject);
+    s.listen(0, "127.0.0.1", () => {
+      const { port } = s.address() as { port: number };
+      s.close(() => resolve(port));
+    });
+  });
+}
+
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+/** Builds into `distDir` when it holds no build yet (scripts/test.sh builds before the integration tests). */
+export function ensureBuild(root: string, distDir: string) {
+  if (!existsSync(join(root, distDir, "BUILD_ID"))) execFileSync("npx", ["next", "build"], { cwd: root, env: { ...process.env, NEXT_DIST_DIR: distDir }, stdio: "inherit", timeout: 900_000 });
+}
+
+export interface RunningServer {
+  base: string;
+  log(): string;
+  stop(): void;
+}
+
+/** `next start` in its own process group on a free port; resolves once GET /api/health answers 200. */
+export async function startServer(opts: { root: string; distDir: string; databaseUrl: string; secret: string; env?: Record<string, string> }): Promise<RunningServer> {
+  const port = await freePort();
+  const base = `http://127.0.0.1:${port}`;
+  let log = "";
+  const child = spawn("npx", ["next", "start", "--hostname", "127.0.0.1", "--port", String(port)], {
+    cwd: opts.root,
+    env: { ...process.env, DATABASE_URL: opts.databaseUrl, NEXTAUTH_URL: base, NEXTAUTH_SECRET: opts.secret, NEXT_DIST_DIR: opts.distDir, LOOPWRIGHT_DEV_OUTBOX: "0", ...opts.env },
+    detached: true,
+    stdio: ["ignore", "pipe", "pipe"],
+  });
+  child.stdout?.on("data", (d) => (log += d));
+  child.stderr?.on("data", (d) => (log += d));
+  const stop = () => {
+    if (child.pid && child.exitCode === null)
+      try {
+        process.kill(-child.pid, "SIGTERM");
+      } catch {
+        // already gone
+      }
+  };
+  for (let i = 0; i < 240; i++) {
+    if (await fetch(`${base}/api/health`).then((r) => r.status === 200, () => false)) return { base, log: () => log, stop };
+    if (child.exitCode !== null) break;
+    await sleep(250);
+  }
+  stop();
+  throw new Error(`next start did not answer on ${base}:\n${log.slice(-3000)}`);
+}
+
+export interface ClientResponse {
+  status: number;
+  text: string;
+  json: any; // eslint-disable-line @typescript-eslint/no-explicit-any
+}
+
+/** fetch with one cookie jar (the next-auth session). */
+export class CookieClient {
+  private cookies = new Map<string, string>();
+  constructor(readonly base: string) {}
+
+  cookieHeader(): string {
+    return [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
+  }
+
+  async request(path: string, init: { method?: string; json?: unknown; form?: Record<string, string> } = {}): Promise<ClientResponse> {
+    const headers: Record<string, string> = { cookie: this.cookieHeader() };
+    let body: string | undefined;
+    if (init.json !== undefined) {
+      headers["content-type"] = "application/json";
+      body = JSON.stringify(init.json);
+    } else if (init.form) {
+      headers["content-type"] = "application/x-www-form-urlencoded";
+      body = new URLSearchParams(init.form).toString();
+    }
+    const res = await fetch(this.base + path, { method: init.method ?? "GET", headers, body, redirect: "manual" });
+    for (const c of res.headers.getSetCookie()) {
+      const [pair] = c.split(";");
+      const i = pair.indexOf("=");
+      this.cookies.set(pair.slice(0, i), pair.slice(i + 1));
+    }
+    const text = await res.text();
+    let json: unknown = null;
+    try {
+      json = JSON.parse(text);
+    } catch {
+      json = null;
+    }
+    return { status: res.status, text, json };
+  }
+
+  async signIn(email: string, password: string): Promise<void> {
+    const csrf = await this.request("/api/auth/csrf");
+    const res = await this.request("/api/auth/callback/credentials", { method: "POST", form: { csrfToken: csrf.json.csrfToken, email, password, json: "true", callbackUrl: "/" } });
+    const session = await this.request("/api/auth/session");
+    if (res.status !== 200 || !(session.json?.userId > 0)) throw new Error(`sign-in of ${email} failed: ${res.status} ${res.text.slice(0, 200)}`);
+  }
+}
