@@ -1,3 +1,4 @@
+import { randomUUID } from "node:crypto";
 import type { BuildContext, RouteEntry } from "./types";
 
 // Every exported method of every route handler under app/, with a valid request built from ids found at run
@@ -186,6 +187,102 @@ export const routes: RouteEntry[] = [
     requiredKeys: [],
   },
 
+  // review, terminal sheet, commissioning
+  { method: "GET", path: "/api/layouts/[layoutId]/review", access: "layout:read", body: "none", success: 200, orgScoped: true, build: async (ctx) => ({ method: "GET", url: `/api/layouts/${ctx.demo.layoutId}/review` }) },
+  {
+    method: "POST",
+    path: "/api/layouts/[layoutId]/review",
+    access: "layout:submit",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "POST", url: `/api/layouts/${(await ctx.fixtures.newLayout()).layoutId}/review`, json: { action: "submit" } }),
+    requiredKeys: ["action"],
+    note: "a fresh draft sent for review; approve and reject also need layout:approve (engineers), checked by the review state machine",
+  },
+  { method: "GET", path: "/api/layouts/[layoutId]/comments", access: "layout:read", body: "none", success: 200, orgScoped: true, build: async (ctx) => ({ method: "GET", url: `/api/layouts/${ctx.demo.layoutId}/comments` }) },
+  {
+    method: "POST",
+    path: "/api/layouts/[layoutId]/comments",
+    access: "layout:comment",
+    body: "json",
+    success: 201,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "POST", url: `/api/layouts/${(await ctx.fixtures.newLayout()).layoutId}/comments`, json: { body: "Input 3 could take the stair door.", target: { kind: "input", boardKey: "panel", input: 3 } } }),
+    requiredKeys: ["body"],
+  },
+  { method: "GET", path: "/api/layouts/[layoutId]/sheet", access: "sheet:read", body: "none", success: 200, orgScoped: true, build: async (ctx) => ({ method: "GET", url: `/api/layouts/${ctx.demo.layoutId}/sheet` }) },
+  { method: "GET", path: "/api/layouts/[layoutId]/sheet/pdf", access: "sheet:read", body: "none", success: 200, orgScoped: true, build: async (ctx) => ({ method: "GET", url: `/api/layouts/${ctx.demo.layoutId}/sheet/pdf?size=LETTER` }) },
+  {
+    method: "POST",
+    path: "/api/layouts/[layoutId]/sheet/send",
+    access: "sheet:send",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "POST", url: `/api/layouts/${ctx.demo.layoutId}/sheet/send`, json: { size: "A4" } }),
+    requiredKeys: [],
+    note: "mails the demo layout's sheet to the demo site's installer (the fake SMTP server keeps it); the layout itself is not changed",
+  },
+  { method: "GET", path: "/api/layouts/[layoutId]/commissioning", access: "sheet:read", body: "none", success: 200, orgScoped: true, build: async (ctx) => ({ method: "GET", url: `/api/layouts/${ctx.demo.layoutId}/commissioning` }) },
+  {
+    method: "POST",
+    path: "/api/layouts/[layoutId]/commissioning/readings",
+    access: "commissioning:record",
+    body: "json",
+    success: 201,
+    orgScoped: true,
+    build: async (ctx) => {
+      const { layoutId, loops } = await ctx.fixtures.approvedLayout();
+      const l = loops[0];
+      return { method: "POST", url: `/api/layouts/${layoutId}/commissioning/readings`, json: { clientId: randomUUID(), boardKey: l.boardKey, input: l.input, test: l.readings[0].test, reading: l.readings[0].reading } };
+    },
+    requiredKeys: ["clientId", "boardKey", "input", "test", "reading"],
+  },
+  {
+    method: "GET",
+    path: "/api/layouts/[layoutId]/commissioning/report",
+    access: "sheet:read",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "GET", url: `/api/layouts/${(await ctx.fixtures.passedLayout()).layoutId}/commissioning/report?size=A4` }),
+    note: "409 until every loop of the approved revision has passed",
+  },
+  {
+    method: "POST",
+    path: "/api/layouts/[layoutId]/commissioning/complete",
+    access: "commissioning:record",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "POST", url: `/api/layouts/${(await ctx.fixtures.passedLayout()).layoutId}/commissioning/complete` }),
+  },
+  {
+    method: "POST",
+    path: "/api/layouts/[layoutId]/photos",
+    access: "commissioning:record",
+    body: "multipart",
+    success: 201,
+    orgScoped: true,
+    build: async (ctx) => {
+      const { layoutId, loops } = await ctx.fixtures.approvedLayout();
+      return { method: "POST", url: `/api/layouts/${layoutId}/photos`, multipart: { file: ctx.fixtures.photoFile(), boardKey: loops[0].boardKey, input: String(loops[0].input) } };
+    },
+  },
+  {
+    method: "GET",
+    path: "/api/layouts/[layoutId]/photos/[photoId]",
+    access: "sheet:read",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => {
+      const p = await ctx.fixtures.photo();
+      return { method: "GET", url: `/api/layouts/${p.layoutId}/photos/${p.photoId}` };
+    },
+  },
+
   // loop bench
   {
     method: "POST",
@@ -342,6 +439,36 @@ export const routes: RouteEntry[] = [
     build: async (ctx) => ({ method: "POST", url: `/api/sites/${(await ctx.fixtures.scratchSite()).siteId}/suggestions`, json: { busCableM: 50 } }),
     requiredKeys: [],
   },
+
+  // comparison, decisions, exports
+  {
+    method: "GET",
+    path: "/api/sites/[siteId]/compare",
+    access: "layout:read",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => {
+      const [a, b] = [await ctx.fixtures.newLayout(), await ctx.fixtures.newLayout()];
+      return { method: "GET", url: `/api/sites/${(await ctx.fixtures.scratchSite()).siteId}/compare?ids=${a.layoutId},${b.layoutId}` };
+    },
+  },
+  { method: "GET", path: "/api/sites/[siteId]/decisions", access: "layout:read", body: "none", success: 200, orgScoped: true, build: async (ctx) => ({ method: "GET", url: `/api/sites/${ctx.demo.siteId}/decisions` }) },
+  {
+    method: "POST",
+    path: "/api/sites/[siteId]/decisions",
+    access: "layout:write",
+    body: "json",
+    success: 201,
+    orgScoped: true,
+    build: async (ctx) => {
+      const [a, b] = [await ctx.fixtures.newLayout(), await ctx.fixtures.newLayout()];
+      return { method: "POST", url: `/api/sites/${(await ctx.fixtures.scratchSite()).siteId}/decisions`, json: { chosenLayoutId: b.layoutId, comparedLayoutIds: [a.layoutId, b.layoutId], reason: "More spare inputs for the extension." } };
+    },
+    requiredKeys: ["chosenLayoutId", "comparedLayoutIds", "reason"],
+  },
+  { method: "GET", path: "/api/sites/[siteId]/exports/zones.csv", access: "sheet:read", body: "none", success: 200, orgScoped: true, build: async (ctx) => ({ method: "GET", url: `/api/sites/${ctx.demo.siteId}/exports/zones.csv?layoutId=${ctx.demo.layoutId}` }) },
+  { method: "GET", path: "/api/sites/[siteId]/exports/bom.csv", access: "sheet:read", body: "none", success: 200, orgScoped: true, build: async (ctx) => ({ method: "GET", url: `/api/sites/${ctx.demo.siteId}/exports/bom.csv?layoutId=${ctx.demo.layoutId}` }) },
 
   // development outbox
   {

@@ -62,6 +62,14 @@ export interface Fixtures {
   catalogUpload(): Promise<{ uploadId: number; addedEntryId: string }>;
   /** A mail with one attachment in the development outbox. */
   mailAttachment(): Promise<{ mailId: number; index: number }>;
+  /** A new layout on the scratch site (the hardware suggestion), sent for review and approved by the demo engineer; each loop with a passing reading per test. */
+  approvedLayout(): Promise<{ layoutId: number; loops: { boardKey: string; input: number; readings: { test: string; reading: string }[] }[] }>;
+  /** An approved layout on which the demo engineer recorded a passing reading for every test of every loop. */
+  passedLayout(): Promise<{ layoutId: number }>;
+  /** A photo on an approved layout, uploaded by the demo engineer. */
+  photo(): Promise<{ layoutId: number; photoId: number }>;
+  /** A small JPEG photo of terminations. */
+  photoFile(): FilePart;
   /** A catalog file the shipped catalog accepts. */
   goodCatalogFile(): FilePart;
   /** A unique e-mail address under .example. */

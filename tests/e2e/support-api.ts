@@ -1,6 +1,7 @@
 import { createHash } from "node:crypto";
 import { readFileSync } from "node:fs";
-import { expect, type APIRequestContext, type APIResponse, type PlaywrightWorkerArgs } from "@playwright/test";
+import { expect, request, type APIRequestContext, type APIResponse, type PlaywrightWorkerArgs } from "@playwright/test";
+import { randomUUID } from "node:crypto";
 import * as mariadb from "mariadb";
 import { roles, type Role } from "@/lib/auth/permissions";
 import { RIVAL_PASSWORD, rivalOrganisationName, rivalSiteName, rivalUsers } from "@/lib/demo/seed-rival";
@@ -166,6 +167,10 @@ export function makeFixtures(admin: APIRequestContext, conn: mariadb.Connection,
   let upload: Promise<{ uploadId: number; addedEntryId: string }> | undefined;
   const goodCatalogFile = (): FilePart => ({ name: "good-upload.yaml", mimeType: "application/yaml", buffer: readFileSync("tests/fixtures/catalog/good-upload.yaml") });
   const uniqueEmail = (prefix: string) => `${prefix}.${Date.now().toString(36)}.${++unique}@matrix.example`;
+  const photoFile = (): FilePart => ({ name: "terminations.jpg", mimeType: "image/jpeg", buffer: readFileSync("tests/fixtures/photos/terminations.jpg") });
+  // Review and commissioning steps are the engineer's (the admin may not approve or record readings): a session of its own.
+  let engineerApi: Promise<APIRequestContext> | undefined;
+  const engineer = () => (engineerApi ??= signInApi({ request } as Playwright, demo.engineer, DEMO_PASSWORD));
 
   const scratchSite = () =>
     (scratch ??= (async () => {
@@ -174,11 +179,40 @@ export function makeFixtures(admin: APIRequestContext, conn: mariadb.Connection,
       return { siteId: site.id as number, detectorIds: (imported.detectors as { id: string }[]).map((d) => d.id) };
     })());
 
+  const approvedLayout = async () => {
+    const { siteId } = await scratchSite();
+    const v = await ok(await admin.post(`/api/sites/${siteId}/layouts`, { data: { name: `Fixture approved layout ${++unique}`, suggestion: { allowShared: false, busCableM: 20 } } }), "layout to approve");
+    const layoutId = v.layout.id as number;
+    const eng = await engineer();
+    for (const action of ["submit", "approve"]) await ok(await eng.post(`/api/layouts/${layoutId}/review`, { data: { action } }), `review ${action}`);
+    const sheet = await ok(await admin.get(`/api/layouts/${layoutId}/sheet`), "sheet");
+    type Row = { spare: boolean; boardKey: string; input: number; expected: { test: string; nominalOhms: number | "Infinity" }[] };
+    const loops = (sheet.sheet.boards as { rows: Row[] }[])
+      .flatMap((b) => b.rows)
+      .filter((r) => !r.spare)
+      .map((r) => ({ boardKey: r.boardKey, input: r.input, readings: r.expected.map((e) => ({ test: e.test, reading: e.nominalOhms === "Infinity" ? "OL" : e.nominalOhms.toFixed(2) })) }));
+    return { layoutId, loops };
+  };
+
   return {
     created,
     scratchSite,
     goodCatalogFile,
     uniqueEmail,
+    photoFile,
+    approvedLayout,
+    async passedLayout() {
+      const { layoutId, loops } = await approvedLayout();
+      const eng = await engineer();
+      for (const l of loops)
+        for (const r of l.readings) await ok(await eng.post(`/api/layouts/${layoutId}/commissioning/readings`, { data: { clientId: randomUUID(), boardKey: l.boardKey, input: l.input, test: r.test, reading: r.reading } }), "passing reading");
+      return { layoutId };
+    },
+    async photo() {
+      const { layoutId, loops } = await approvedLayout();
+      const p = await ok(await (await engineer()).post(`/api/layouts/${layoutId}/photos`, { multipart: { file: photoFile(), boardKey: loops[0].boardKey, input: String(loops[0].input) } }), "photo");
+      return { layoutId, photoId: p.photo.id as number };
+    },
     async newDetector() {
       const { siteId } = await scratchSite();
       const d = await ok(

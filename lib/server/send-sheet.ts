@@ -1,0 +1,68 @@
+import "server-only";
+import { db } from "./db";
+import { audit } from "./audit";
+import { ApiError } from "./errors";
+import { env } from "./env";
+import { sendMail } from "./mail";
+import { ensureCan } from "./schedules";
+import { findLayoutForReview, getTerminalSheet, terminalSheetPdfFor } from "./sheets";
+import type { Actor } from "./session";
+import { Membership, Site, User } from "@/models";
+import type { PageSize } from "@/lib/server/pdf/pdf-kit";
+
+// The terminal sheet e-mailed to the site's installer as a PDF attachment.
+
+export interface SiteInstaller {
+  userId: number;
+  name: string;
+  email: string;
+}
+
+/** The installer assigned to the layout's site, if there is one and they are still a member of the organisation. */
+export async function installerOfSite(actor: Actor, siteInstallerUserId: number | null): Promise<SiteInstaller | null> {
+  if (siteInstallerUserId == null) return null;
+  db();
+  const m = await Membership.findOne({ where: { organisationId: actor.organisationId, userId: siteInstallerUserId }, include: [{ model: User, attributes: ["id", "name", "email"] }] });
+  const u = (m as (Membership & { User?: User }) | null)?.User;
+  return u ? { userId: u.id, name: u.name, email: u.email } : null;
+}
+
+export async function layoutInstaller(actor: Actor, layoutId: number): Promise<SiteInstaller | null> {
+  const { site } = await findLayoutForReview(actor, layoutId);
+  const full = await Site.findOne({ where: { id: site.id, organisationId: actor.organisationId }, attributes: ["id", "installerUserId"] });
+  return installerOfSite(actor, full?.installerUserId ?? null);
+}
+
+export interface SentSheet {
+  to: string;
+  installer: string;
+  fileName: string;
+  revision: number;
+  approved: boolean;
+  sizeBytes: number;
+}
+
+export async function sendSheetToInstaller(actor: Actor, layoutId: number, opts: { size?: PageSize } = {}): Promise<SentSheet> {
+  ensureCan(actor, "sheet:send");
+  const installer = await layoutInstaller(actor, layoutId);
+  if (!installer) throw new ApiError(409, "This site has no installer assigned: assign one on the site first, then send the sheet.");
+  const view = await getTerminalSheet(actor, layoutId);
+  const { pdf, fileName } = await terminalSheetPdfFor(actor, layoutId, { size: opts.size ?? "A4" });
+  const rev = view.meta.revision;
+  const status = view.approved ? `approved revision ${rev}` : `revision ${rev}, NOT APPROVED — for review only`;
+  const link = `${env().NEXTAUTH_URL}/sites/${view.siteId}/layouts/${layoutId}/sheet`;
+  const lines = [
+    `Hello ${installer.name},`,
+    "",
+    `${actor.name} sent you the terminal sheet of ${view.meta.siteName}, layout "${view.meta.layoutName}" (${status}).`,
+    `It lists ${view.sheet.zoneCount} zone${view.sheet.zoneCount === 1 ? "" : "s"} on ${view.sheet.boards.length} board${view.sheet.boards.length === 1 ? "" : "s"}, with the resistors, the core map and the meter reading expected in each test.`,
+    "",
+    `The PDF is attached; the sheet is also online: ${link}`,
+    ...(view.sheet.caution ? ["", view.sheet.caution] : []),
+  ];
+  await sendMail({ to: installer.email, subject: `Terminal sheet: ${view.meta.siteName} — ${view.meta.layoutName}, revision ${rev}`, text: `${lines.join("\n")}\n`, attachments: [{ filename: fileName, content: pdf, contentType: "application/pdf" }] });
+  await db().transaction((transaction) =>
+    audit({ organisationId: actor.organisationId, userId: actor.userId, action: "sheet.send", entityType: "layout", entityId: layoutId, detail: { revision: rev, approved: view.approved, to: installer.email, fileName, sizeBytes: pdf.length } }, transaction),
+  );
+  return { to: installer.email, installer: installer.name, fileName, revision: rev, approved: view.approved, sizeBytes: pdf.length };
+}
