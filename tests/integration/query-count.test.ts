@@ -67,9 +67,10 @@ describe("queries per layout load", () => {
     expect(api500.count).toBe(api10.count);
     expect(editor500.count).toBe(editor10.count);
     expect(list500.count).toBe(list10.count);
-    // bounded: the layout with its site and current revision; then the schedule and the catalog's latest-version check
-    expect(api500.count).toBeLessThanOrEqual(2);
-    expect(editor500.count).toBeLessThanOrEqual(4);
-    expect(list500.count).toBeLessThanOrEqual(3);
+    // and small: one query for the layout with its site and current revision, then the schedule and the catalog's
+    // latest-version check (measured 1, 3 and 2; the bounds leave room for a lookup or two, not for one per row)
+    expect(api500.count).toBeLessThanOrEqual(3);
+    expect(editor500.count).toBeLessThanOrEqual(6);
+    expect(list500.count).toBeLessThanOrEqual(4);
   });
 });
