@@ -13,9 +13,10 @@ import { boardEntry, indexCatalog } from "@/lib/layout/catalog-index";
 import { boardName } from "@/lib/layout/names";
 import { layoutDocumentSchema, layoutPowerSchema, type LayoutDocument } from "@/lib/layout/schema";
 import type { Schedule } from "@/lib/schedule/schema";
-import { solveLayout, suggestHardware, type SolveResult, type Suggestion } from "@/lib/solver";
+import { solveLayout, suggestHardware, type Suggestion } from "@/lib/solver";
 import type { Severity } from "@/lib/findings";
 import { summarizeSolve, type LayoutSolveSummary } from "@/lib/layout/layout-summary";
+import { withCapacityCheck } from "@/lib/layout/capacity-check";
 
 export type { LayoutSolveSummary };
 
@@ -46,7 +47,10 @@ export interface RevisionMeta {
   summary: LayoutSolveSummary;
 }
 
-export const summarize = summarizeSolve;
+/** The server's solve of a document: the solver's findings plus the capacity rule the editor shows too. */
+export function solveForSave(doc: LayoutDocument, schedule: Schedule, catalog: Catalog): LayoutSolveSummary {
+  return summarizeSolve(doc, withCapacityCheck(solveLayout(doc, schedule, catalog)));
+}
 
 const nameSchema = z.string().trim().min(1, "a name is needed").max(200);
 const noteSchema = z.string().trim().max(500);
@@ -195,7 +199,7 @@ export async function createLayout(actor: Actor, siteId: number, input: CreateLa
     from = input.suggestion.allowShared ? "suggestion-shared" : "suggestion-single";
   }
   checkReferences(document, schedule, catalog);
-  const summary = summarize(document, solveLayout(document, schedule, catalog));
+  const summary = solveForSave(document, schedule, catalog);
   const layout = await insertLayout(actor, siteId, input.name, document, summary, input.note ?? "", { from });
   return { layout, document };
 }
@@ -209,7 +213,7 @@ export async function saveLayout(actor: Actor, layoutId: number, input: SaveLayo
   const l = await findOwnLayout(actor, layoutId);
   const [schedule, catalog] = await Promise.all([loadSchedule(l.siteId), catalogFor(actor.organisationId)]);
   checkReferences(input.document, schedule, catalog);
-  const summary = summarize(input.document, solveLayout(input.document, schedule, catalog));
+  const summary = solveForSave(input.document, schedule, catalog);
   return writeRevision(actor, l, { expectVersion: input.version, document: input.document, summary, note: input.note ?? "", name: input.name, action: "layout.save" });
 }
 
@@ -276,7 +280,7 @@ export async function restoreRevision(actor: Actor, layoutId: number, revision: 
   const [schedule, catalog] = await Promise.all([loadSchedule(l.siteId), catalogFor(actor.organisationId)]);
   const issues = referenceIssues(document, schedule, catalog);
   if (issues.length) throw new ApiError(422, `Revision ${revision} refers to hardware or detectors that no longer exist, so it cannot be restored as it is.`, issues);
-  const summary = summarize(document, solveLayout(document, schedule, catalog));
+  const summary = solveForSave(document, schedule, catalog);
   const { layout } = await writeRevision(actor, l, { expectVersion: expectVersion ?? l.version, document, summary, note: `Restored revision ${revision}`, action: "layout.restore", detail: { restoredFrom: revision } });
   return { layout, document };
 }

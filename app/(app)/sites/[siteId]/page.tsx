@@ -1,3 +1,4 @@
+import Link from "next/link";
 import { notFound } from "next/navigation";
 import { pageActor } from "@/lib/server/session";
 import { getSite } from "@/lib/server/sites";
@@ -19,7 +20,20 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
   });
   return (
     <>
-      <PageHeader title={site.name} subtitle={site.address} />
+      <PageHeader
+        title={site.name}
+        subtitle={site.address}
+        actions={
+          <>
+            <Link href={`/sites/${site.id}/schedule`} className="rounded-md border border-line bg-white px-3 py-2 text-sm font-medium hover:bg-slate-50">
+              Device schedule
+            </Link>
+            <Link href={`/sites/${site.id}/layouts`} className="rounded-md bg-signal px-3 py-2 text-sm font-medium text-white hover:bg-[#0c5a5a]">
+              Layouts
+            </Link>
+          </>
+        }
+      />
       <p className="mb-6 max-w-3xl text-sm">{site.description}</p>
       <h2 className="mb-3 text-lg font-semibold">Floors and areas</h2>
       <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">

@@ -1,0 +1,27 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { pageActor } from "@/lib/server/session";
+import { loadLayoutForEditor } from "@/lib/server/layouts";
+import { ApiError } from "@/lib/server/errors";
+import { idParam } from "@/lib/server/route";
+import { can, refusal } from "@/lib/auth/permissions";
+import { Refusal } from "@/components/ui/refusal";
+import { LayoutEditor } from "@/components/editor/layout-editor";
+
+export const metadata: Metadata = { title: "Layout editor" };
+
+export default async function LayoutEditorPage({ params }: { params: Promise<{ siteId: string; layoutId: string }> }) {
+  const { siteId, layoutId } = await params;
+  const { actor, allowed, reason } = await pageActor("layout:read", `/sites/${siteId}/layouts/${layoutId}`);
+  if (!allowed) return <Refusal reason={reason} />;
+  const sid = idParam.safeParse(siteId);
+  const lid = idParam.safeParse(layoutId);
+  if (!sid.success || !lid.success) notFound();
+  const data = await loadLayoutForEditor(actor, lid.data).catch((e) => {
+    if (e instanceof ApiError && e.status === 404) notFound();
+    throw e;
+  });
+  if (data.site.id !== sid.data) notFound();
+  const canWrite = can(actor.role, "layout:write");
+  return <LayoutEditor key={data.layout.id} layout={data.layout} document={data.document} site={data.site} schedule={data.schedule} catalog={data.catalog} canWrite={canWrite} readOnlyReason={canWrite ? "" : refusal(actor.role, "layout:write")} />;
+}

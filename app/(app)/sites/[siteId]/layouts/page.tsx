@@ -1,0 +1,34 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { pageActor } from "@/lib/server/session";
+import { getSite } from "@/lib/server/sites";
+import { listLayouts } from "@/lib/server/layouts";
+import { catalogFor, loadSchedule } from "@/lib/server/schedules";
+import { ApiError } from "@/lib/server/errors";
+import { idParam } from "@/lib/server/route";
+import { can } from "@/lib/auth/permissions";
+import { PageHeader } from "@/components/ui/page-header";
+import { Refusal } from "@/components/ui/refusal";
+import { LayoutsOverview } from "@/components/editor/layouts-overview";
+
+export const metadata: Metadata = { title: "Layouts" };
+
+export default async function LayoutsPage({ params }: { params: Promise<{ siteId: string }> }) {
+  const { siteId } = await params;
+  const { actor, allowed, reason } = await pageActor("layout:read", `/sites/${siteId}/layouts`);
+  if (!allowed) return <Refusal reason={reason} />;
+  const id = idParam.safeParse(siteId);
+  if (!id.success) notFound();
+  const site = await getSite(actor, id.data).catch((e) => {
+    if (e instanceof ApiError && e.status === 404) notFound();
+    throw e;
+  });
+  const [layouts, catalog, schedule] = await Promise.all([listLayouts(actor, site.id), catalogFor(actor.organisationId), loadSchedule(site.id)]);
+  const panels = catalog.panels.map((p) => ({ id: p.id, name: p.name, inputs: p.onboardInputs.count, maxZones: p.maxZones, listPrice: p.listPrice }));
+  return (
+    <>
+      <PageHeader title={`Layouts — ${site.name}`} subtitle="Each layout is one design of the system: hardware chosen and detectors assigned. Every save is kept as a revision." />
+      <LayoutsOverview siteId={site.id} initial={layouts} panels={panels} detectorCount={schedule.length} canWrite={can(actor.role, "layout:write")} />
+    </>
+  );
+}

@@ -1,0 +1,51 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { pageActor } from "@/lib/server/session";
+import { getSite } from "@/lib/server/sites";
+import { catalogFor, loadSchedule } from "@/lib/server/schedules";
+import { ApiError } from "@/lib/server/errors";
+import { idParam } from "@/lib/server/route";
+import { can } from "@/lib/auth/permissions";
+import { PageHeader } from "@/components/ui/page-header";
+import { Refusal } from "@/components/ui/refusal";
+import { ScheduleManager } from "@/components/schedule/schedule-manager";
+import { FireCaution } from "@/components/editor/fire-caution";
+
+export const metadata: Metadata = { title: "Device schedule" };
+
+export default async function SchedulePage({ params }: { params: Promise<{ siteId: string }> }) {
+  const { siteId } = await params;
+  const { actor, allowed, reason } = await pageActor("site:read", `/sites/${siteId}/schedule`);
+  if (!allowed) return <Refusal reason={reason} />;
+  const id = idParam.safeParse(siteId);
+  if (!id.success) notFound();
+  const site = await getSite(actor, id.data).catch((e) => {
+    if (e instanceof ApiError && e.status === 404) notFound();
+    throw e;
+  });
+  const [schedule, catalog] = await Promise.all([loadSchedule(site.id), catalogFor(actor.organisationId)]);
+  const types = catalog.detectors.map((d) => ({ id: d.id, name: d.name, category: d.category, lifeSafety: d.lifeSafety || d.category === "smoke" || d.category === "heat" }));
+  const fireIds = new Set(types.filter((t) => t.lifeSafety).map((t) => t.id));
+  return (
+    <>
+      <PageHeader
+        title={`Device schedule — ${site.name}`}
+        subtitle={
+          <>
+            Every detector of the site with its cable run to the board. Layouts place these detectors on inputs.{" "}
+            <Link href={`/sites/${site.id}/layouts`} className="text-signal hover:underline">
+              Open the layouts
+            </Link>
+          </>
+        }
+      />
+      {schedule.some((d) => fireIds.has(d.catalogId)) ? (
+        <div className="mb-4">
+          <FireCaution />
+        </div>
+      ) : null}
+      <ScheduleManager siteId={site.id} initial={schedule} types={types} areas={site.areas.map((a) => ({ name: a.name, rooms: a.rooms.map((r) => r.name) }))} canWrite={can(actor.role, "schedule:write")} />
+    </>
+  );
+}

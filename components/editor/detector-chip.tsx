@@ -1,0 +1,81 @@
+"use client";
+
+import { useDraggable } from "@dnd-kit/core";
+import type { KeyboardEvent } from "react";
+import { useEditor } from "@/components/editor/editor-context";
+import { detectorDragId } from "@/components/editor/editor-model";
+import { FindingMarker } from "@/components/editor/finding-marker";
+import { unassign } from "@/lib/layout/operations";
+
+const isFire = (category: string | undefined, lifeSafety: boolean | undefined) => !!lifeSafety || category === "smoke" || category === "heat";
+
+/** What a chip shows; also drawn in the drag overlay. */
+export function ChipFace({ detectorId }: { detectorId: string }) {
+  const { detectorsById, ix, zones } = useEditor();
+  const d = detectorsById.get(detectorId);
+  const c = d ? ix.detectors.get(d.catalogId) : undefined;
+  const zone = zones.get(detectorId);
+  return (
+    <span className="flex min-w-0 flex-col text-left">
+      <span className="flex items-start gap-1 font-medium leading-tight">
+        {zone ? (
+          <span className="mt-px shrink-0 rounded bg-ink px-1 text-[10px] font-semibold text-white" title={`Zone ${zone}`}>
+            Z{zone}
+          </span>
+        ) : null}
+        <span className="line-clamp-2 break-words">{d?.label ?? `Unknown detector ${detectorId}`}</span>
+        {isFire(c?.category, c?.lifeSafety) ? <span className="mt-px shrink-0 rounded bg-fault px-1 text-[10px] font-semibold text-white">FIRE</span> : null}
+      </span>
+      <span className="truncate text-[11px] text-slate-500">
+        {c?.name ?? d?.catalogId} · {d ? `${d.cableM} m` : ""}
+      </span>
+    </span>
+  );
+}
+
+/** A detector: dragged with the mouse or the keyboard (Space), or selected (click, Enter) for an input's "place here". */
+export function DetectorChip({ detectorId, onInput }: { detectorId: string; onInput: boolean }) {
+  const { canWrite, selected, select, doc, ctx, apply, findingsAt, highlighted, detectorsById } = useEditor();
+  const { attributes, listeners, setNodeRef, isDragging } = useDraggable({ id: detectorDragId(detectorId), data: { type: "detector" }, disabled: !canWrite });
+  const domId = `detector-${detectorId}`;
+  const isSelected = selected === detectorId;
+  const label = detectorsById.get(detectorId)?.label ?? detectorId;
+  const onKeyDown = (e: KeyboardEvent<HTMLDivElement>) => {
+    if (isDragging) return; // the keyboard sensor has the keys while it is picked up
+    if (canWrite && e.key === "Enter") {
+      e.preventDefault();
+      select(isSelected ? null : detectorId);
+      return;
+    }
+    if (isSelected && e.key === "Escape") select(null);
+    listeners?.onKeyDown?.(e);
+  };
+  return (
+    <div
+      id={domId}
+      data-testid={domId}
+      className={`group flex items-center gap-1 rounded-md border bg-white px-2 py-1 text-xs shadow-sm ${isSelected ? "border-signal ring-2 ring-signal" : "border-line"} ${isDragging ? "opacity-40" : ""} ${highlighted === domId ? "ring-4 ring-warn" : ""}`}
+    >
+      <div
+        ref={setNodeRef}
+        {...attributes}
+        {...listeners}
+        onKeyDown={onKeyDown}
+        onClick={() => canWrite && select(isSelected ? null : detectorId)}
+        aria-pressed={canWrite ? isSelected : undefined}
+        aria-label={`${label}${canWrite ? (isSelected ? ", selected" : "") : ""}`}
+        role="button"
+        tabIndex={0}
+        className={`min-w-0 flex-1 ${canWrite ? "cursor-grab touch-none" : "cursor-default"}`}
+      >
+        <ChipFace detectorId={detectorId} />
+      </div>
+      <FindingMarker domId={domId} findings={findingsAt.get(domId)} />
+      {onInput && canWrite ? (
+        <button type="button" className="rounded px-1 text-slate-400 hover:bg-slate-100 hover:text-ink" aria-label={`Take ${label} off its input`} title="Back to unplaced" onClick={() => apply(unassign(doc, ctx, detectorId))}>
+          ×
+        </button>
+      ) : null}
+    </div>
+  );
+}

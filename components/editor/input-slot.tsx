@@ -1,0 +1,152 @@
+"use client";
+
+import { useDroppable } from "@dnd-kit/core";
+import type { InputType, WiringScheme } from "@/lib/catalog/schema";
+import { useEditor } from "@/components/editor/editor-context";
+import { DetectorChip } from "@/components/editor/detector-chip";
+import { FindingMarker } from "@/components/editor/finding-marker";
+import { dropEdit, inputDropId, placementLabels, resistorLines, resistorText, schemeLabels } from "@/components/editor/editor-model";
+import { setInputWiring, type WiringPatch } from "@/lib/layout/operations";
+import type { LayoutInput } from "@/lib/layout/schema";
+import { inputName } from "@/lib/layout/names";
+
+function OhmsField({ label, value, expected, onCommit }: { label: string; value: number | undefined; expected: number | undefined; onCommit: (v: number | null) => void }) {
+  return (
+    <label className="flex items-center justify-between gap-2">
+      <span>{label}</span>
+      <span className="flex items-center gap-1">
+        <input
+          key={value ?? "expected"}
+          type="number"
+          min={1}
+          step="any"
+          inputMode="decimal"
+          defaultValue={value ?? ""}
+          placeholder={expected !== undefined ? String(expected) : ""}
+          className="w-20 rounded border border-line px-1 py-0.5 text-right"
+          onBlur={(e) => {
+            const t = e.currentTarget.value.trim();
+            const n = Number(t);
+            if (t === "") {
+              if (value !== undefined) onCommit(null);
+            } else if (Number.isFinite(n) && n > 0 && n !== value) onCommit(n);
+          }}
+          onKeyDown={(e) => {
+            if (e.key === "Enter") e.currentTarget.blur();
+          }}
+        />
+        <span>Ω</span>
+      </span>
+    </label>
+  );
+}
+
+function WiringControls({ entry, type, where }: { entry: LayoutInput; type: InputType | undefined; where: string }) {
+  const { doc, ctx, apply } = useEditor();
+  const at = { boardKey: entry.boardKey, input: entry.input };
+  const set = (patch: WiringPatch) => apply(setInputWiring(doc, ctx, at, patch));
+  const schemes: WiringScheme[] = type?.schemes ?? [entry.scheme];
+  return (
+    <details className="mt-1 text-[11px]">
+      <summary className="cursor-pointer text-signal">Wiring</summary>
+      <div className="mt-1 flex flex-col gap-1 rounded bg-slate-50 p-1">
+        <label className="flex items-center justify-between gap-2">
+          <span>Scheme</span>
+          <select aria-label={`Scheme of ${where}`} className="rounded border border-line px-1 py-0.5" value={entry.scheme} onChange={(e) => set({ scheme: e.target.value as WiringScheme })}>
+            {[...new Set([...schemes, entry.scheme])].map((s) => (
+              <option key={s} value={s} disabled={!schemes.includes(s)}>
+                {schemeLabels[s] ?? s}
+              </option>
+            ))}
+          </select>
+        </label>
+        <label className="flex items-center justify-between gap-2">
+          <span>Placement</span>
+          <select aria-label={`Resistor placement of ${where}`} className="rounded border border-line px-1 py-0.5" value={entry.placement} onChange={(e) => set({ placement: e.target.value as LayoutInput["placement"] })}>
+            {Object.entries(placementLabels).map(([v, l]) => (
+              <option key={v} value={v}>
+                {l}
+              </option>
+            ))}
+          </select>
+        </label>
+        {entry.scheme !== "none" ? <OhmsField label={entry.scheme === "shared" ? "Line EOL" : "EOL"} value={entry.eolOhms} expected={type?.eolOhms} onCommit={(v) => set({ eolOhms: v })} /> : null}
+        {entry.scheme === "double-eol" ? <OhmsField label="Alarm" value={entry.alarmOhms} expected={type?.alarmOhms} onCommit={(v) => set({ alarmOhms: v })} /> : null}
+        {entry.scheme === "shared"
+          ? ([0, 1] as const).map((k) => (
+              <OhmsField
+                key={k}
+                label={k === 0 ? "Detector A" : "Detector B"}
+                value={entry.sharedOhms?.[k]}
+                expected={type?.sharedOhms?.[k]}
+                onCommit={(v) => {
+                  const base: [number, number] = entry.sharedOhms ?? [type?.sharedOhms?.[0] ?? 2700, type?.sharedOhms?.[1] ?? 5600];
+                  if (v === null) set({ sharedOhms: null });
+                  else set({ sharedOhms: k === 0 ? [v, base[1]] : [base[0], v] });
+                }}
+              />
+            ))
+          : null}
+        <p className="text-slate-500">Blank fields use the input type&apos;s expected values.</p>
+      </div>
+    </details>
+  );
+}
+
+/** One terminal pair: its number, zones, wiring and detectors; a drop target, with a "place here" button for the selected detector. */
+export function InputSlot({ boardKey, n, type }: { boardKey: string; n: number; type: InputType | undefined }) {
+  const { doc, ctx, canWrite, selected, select, apply, zones, findingsAt, highlighted, detectorsById } = useEditor();
+  const { setNodeRef, isOver } = useDroppable({ id: inputDropId(boardKey, n), data: { accepts: ["detector"] }, disabled: !canWrite });
+  const entry = doc.inputs.find((i) => i.boardKey === boardKey && i.input === n && i.detectorIds.length > 0);
+  const domId = `input-${boardKey}-${n}`;
+  const where = inputName(doc, { boardKey, input: n });
+  const zoneList = entry?.detectorIds.map((d) => zones.get(d)).filter((z): z is number => z !== undefined) ?? [];
+  const canPlace = canWrite && selected && !entry?.detectorIds.includes(selected);
+  const findings = findingsAt.get(domId);
+  const worst = findings?.some((f) => f.severity === "error") ? "border-fault" : findings?.some((f) => f.severity === "warning") ? "border-warn" : entry ? "border-line" : "border-dashed border-line";
+  return (
+    <li
+      ref={setNodeRef}
+      id={domId}
+      data-testid={domId}
+      aria-label={`${where}${entry ? `: ${entry.detectorIds.map((d) => detectorsById.get(d)?.label ?? d).join(" and ")}` : ", free"}`}
+      className={`flex min-h-24 flex-col rounded-md border-2 p-1.5 text-xs ${worst} ${isOver ? "bg-signal-soft" : entry ? "bg-white" : "bg-slate-50"} ${highlighted === domId ? "ring-4 ring-warn" : ""}`}
+    >
+      <div className="mb-1 flex items-center gap-1">
+        <span className="font-mono font-semibold">IN {n}</span>
+        {zoneList.length ? <span className="text-slate-500">zone {zoneList.join(", ")}</span> : <span className="text-slate-400">free</span>}
+        <span className="ml-auto">
+          <FindingMarker domId={domId} findings={findings} />
+        </span>
+      </div>
+      {entry ? (
+        <p className="mb-1 text-[11px] text-slate-600">
+          <span className="font-medium text-ink">{schemeLabels[entry.scheme] ?? entry.scheme}</span>
+          {entry.placement !== "at-detector" ? <span className="text-warn"> · {placementLabels[entry.placement]}</span> : null}
+          <br />
+          {resistorText(resistorLines(entry, type))}
+        </p>
+      ) : null}
+      <div className="flex flex-col gap-1">
+        {entry?.detectorIds.map((d) => (
+          <DetectorChip key={d} detectorId={d} onInput />
+        ))}
+      </div>
+      {canPlace ? (
+        <button
+          type="button"
+          className="mt-auto rounded border border-signal px-1 py-0.5 text-[11px] font-medium text-signal hover:bg-signal-soft"
+          aria-label={`Place ${detectorsById.get(selected!)?.label ?? "the selected detector"} on ${where}${entry ? " (shared input)" : ""}`}
+          onClick={() => {
+            const edit = dropEdit(doc, ctx, { type: "detector", detectorId: selected! }, { type: "input", boardKey, input: n });
+            apply(edit);
+            if (edit?.ok) select(null);
+          }}
+        >
+          {entry ? "Share this input" : "Place here"}
+        </button>
+      ) : null}
+      {entry && canWrite ? <WiringControls entry={entry} type={type} where={where} /> : null}
+    </li>
+  );
+}

@@ -1,0 +1,218 @@
+"use client";
+
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import type { LayoutMeta, LayoutView, SuggestionView } from "@/lib/server/layouts";
+import { describeError, sendJson } from "@/lib/client/fetcher";
+import { useLayouts } from "@/lib/client/use-layouts";
+import { Button } from "@/components/ui/button";
+import { Card } from "@/components/ui/card";
+import { Field } from "@/components/ui/field";
+
+interface PanelChoice {
+  id: string;
+  name: string;
+  inputs: number;
+  maxZones: number;
+  listPrice: number;
+}
+
+const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
+const money = (v: number) => v.toLocaleString(undefined, { minimumFractionDigits: 0, maximumFractionDigits: 2 });
+
+function Counts({ c }: { c: { error: number; warning: number; note: number } }) {
+  return (
+    <span>
+      <span className={c.error ? "font-semibold text-fault" : ""}>{plural(c.error, "error")}</span> · <span className={c.warning ? "text-warn" : ""}>{plural(c.warning, "warning")}</span> · {plural(c.note, "note")}
+    </span>
+  );
+}
+
+function SuggestionCard({ s, busy, canWrite, onAccept }: { s: SuggestionView; busy: boolean; canWrite: boolean; onAccept: () => void }) {
+  const title = s.allowShared ? "Shared inputs allowed" : "One detector per input";
+  return (
+    <Card className="flex flex-col" data-testid={`suggestion-${s.allowShared ? "shared" : "single"}`}>
+      <h3 className="font-semibold">{title}</h3>
+      {!s.found ? (
+        <p className="mt-2 text-sm text-fault">{s.reason}</p>
+      ) : (
+        <>
+          <p className="mt-1 text-2xl font-semibold">{money(s.cost ?? 0)}</p>
+          <p className="text-xs text-slate-500">catalog list prices</p>
+          <ul className="mt-2 text-sm">
+            {s.parts.map((p) => (
+              <li key={`${p.kind}:${p.catalogId}`}>
+                {p.count} × {p.name} <span className="text-slate-500">({money(p.unitPrice)} each)</span>
+              </li>
+            ))}
+          </ul>
+          <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 text-sm">
+            <dt className="text-slate-600">Boards</dt>
+            <dd>{s.boards}</dd>
+            <dt className="text-slate-600">Inputs used</dt>
+            <dd>
+              {s.inputsUsed} of {s.inputsTotal}
+            </dd>
+            <dt className="text-slate-600">Shared inputs</dt>
+            <dd>{s.sharedInputs}</dd>
+            <dt className="text-slate-600">Findings</dt>
+            <dd>{s.counts ? <Counts c={s.counts} /> : null}</dd>
+          </dl>
+          {canWrite ? (
+            <Button className="mt-3" disabled={busy} onClick={onAccept}>
+              Accept as a new layout
+            </Button>
+          ) : null}
+        </>
+      )}
+    </Card>
+  );
+}
+
+/** A site's layouts: open one, start a blank one on a panel, or take a hardware suggestion. */
+export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWrite }: { siteId: number; initial: LayoutMeta[]; panels: PanelChoice[]; detectorCount: number; canWrite: boolean }) {
+  const router = useRouter();
+  const { layouts, mutate } = useLayouts(siteId, initial);
+  const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
+  const [busy, setBusy] = useState(false);
+  const [suggestions, setSuggestions] = useState<SuggestionView[] | null>(null);
+
+  async function create(body: unknown) {
+    setBusy(true);
+    try {
+      const r = await sendJson<LayoutView>(`/api/sites/${siteId}/layouts`, "POST", body);
+      await mutate();
+      router.push(`/sites/${siteId}/layouts/${r.layout.id}`);
+    } catch (e) {
+      setMessage({ kind: "error", text: describeError(e) });
+      setBusy(false);
+    }
+  }
+
+  async function suggest() {
+    setBusy(true);
+    setMessage(null);
+    try {
+      const r = await sendJson<{ suggestions: SuggestionView[] }>(`/api/sites/${siteId}/suggestions`, "POST", {});
+      setSuggestions(r.suggestions);
+    } catch (e) {
+      setMessage({ kind: "error", text: describeError(e) });
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  async function remove(l: LayoutMeta) {
+    if (!window.confirm(`Delete the layout "${l.name}" and its ${l.currentRevision} revision${l.currentRevision === 1 ? "" : "s"}?`)) return;
+    try {
+      await sendJson(`/api/layouts/${l.id}`, "DELETE");
+      setMessage({ kind: "ok", text: `Layout "${l.name}" deleted.` });
+      await mutate();
+    } catch (e) {
+      setMessage({ kind: "error", text: describeError(e) });
+    }
+  }
+
+  return (
+    <div className="flex flex-col gap-6">
+      {message ? (
+        <p role={message.kind === "error" ? "alert" : "status"} className={`text-sm ${message.kind === "error" ? "text-fault" : "text-signal"}`}>
+          {message.text}
+        </p>
+      ) : null}
+      <section>
+        <h2 className="mb-3 text-lg font-semibold">Layouts</h2>
+        {layouts.length === 0 ? <p className="text-sm text-slate-600">No layouts yet.</p> : null}
+        <ul className="grid gap-3 md:grid-cols-2" data-testid="layout-list">
+          {layouts.map((l) => (
+            <li key={l.id}>
+              <Card className="flex h-full flex-col gap-1">
+                <div className="flex items-baseline justify-between gap-2">
+                  <Link href={`/sites/${siteId}/layouts/${l.id}`} className="font-semibold text-signal hover:underline">
+                    {l.name}
+                  </Link>
+                  <span className="rounded bg-slate-100 px-1.5 text-xs uppercase tracking-wide">{l.status}</span>
+                </div>
+                <p className="text-xs text-slate-600">
+                  revision {l.currentRevision} · saved {new Date(l.updatedAt).toLocaleString()}
+                </p>
+                <p className="text-sm">
+                  <Counts c={l.summary.counts} />
+                </p>
+                <p className="text-xs text-slate-600">
+                  {l.summary.detectorsPlaced} detectors placed, {l.summary.unplaced} unplaced · {l.summary.inputsUsed} of {l.summary.inputsTotal} inputs · {l.summary.boards} boards
+                </p>
+                {canWrite ? (
+                  <button type="button" className="mt-auto self-end text-xs text-fault hover:underline" onClick={() => remove(l)}>
+                    Delete
+                  </button>
+                ) : null}
+              </Card>
+            </li>
+          ))}
+        </ul>
+      </section>
+
+      {canWrite ? (
+        <section className="grid gap-4 lg:grid-cols-3">
+          <Card>
+            <h2 className="font-semibold">New layout</h2>
+            <form
+              className="mt-2 flex flex-col gap-3"
+              onSubmit={(e) => {
+                e.preventDefault();
+                const f = new FormData(e.currentTarget);
+                void create({ name: String(f.get("name") ?? ""), panelId: String(f.get("panelId") ?? "") });
+              }}
+            >
+              <Field label="Name" name="name" id="new-layout-name" required maxLength={200} placeholder="e.g. Option B" />
+              <label className="block text-sm">
+                <span className="font-medium">Control panel</span>
+                <select name="panelId" className="mt-1 block w-full rounded-md border border-line bg-white px-3 py-2">
+                  {panels.map((p) => (
+                    <option key={p.id} value={p.id}>
+                      {p.name} — {p.inputs} inputs, {p.maxZones} zones, {money(p.listPrice)}
+                    </option>
+                  ))}
+                </select>
+              </label>
+              <Button type="submit" disabled={busy}>
+                Create layout
+              </Button>
+            </form>
+          </Card>
+          <Card className="lg:col-span-2">
+            <h2 className="font-semibold">Suggest hardware</h2>
+            <p className="mt-1 text-sm text-slate-600">
+              The cheapest catalog hardware that carries all {detectorCount} detectors of the device schedule without errors: once with one detector per input, once letting detectors that allow it share an input.
+            </p>
+            <Button className="mt-3" variant="secondary" disabled={busy || detectorCount === 0} onClick={suggest}>
+              {busy && !suggestions ? "Working…" : "Suggest hardware"}
+            </Button>
+            {suggestions ? (
+              <>
+              {suggestions.length === 2 && suggestions.every((s) => s.found) && JSON.stringify(suggestions[0].document) === JSON.stringify(suggestions[1].document) ? (
+                <p className="mt-3 text-sm text-slate-700" data-testid="suggestions-same">
+                  Sharing inputs saves nothing here: the cheapest hardware is the same both ways (its inputs may not take two detectors, or there are inputs enough).
+                </p>
+              ) : null}
+              <div className="mt-4 grid gap-3 md:grid-cols-2">
+                {suggestions.map((s) => (
+                  <SuggestionCard
+                    key={String(s.allowShared)}
+                    s={s}
+                    busy={busy}
+                    canWrite={canWrite}
+                    onAccept={() => s.document && void create({ name: `Suggested: ${s.allowShared ? "shared inputs allowed" : "one detector per input"}`, document: s.document, note: "Accepted hardware suggestion" })}
+                  />
+                ))}
+              </div>
+              </>
+            ) : null}
+          </Card>
+        </section>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,134 @@
+"use client";
+
+import { useState } from "react";
+import { createDetectorFormSchema, formatGauge, parseGauge, supervisionPreferenceSchema, type ScheduleDetector } from "@/lib/schedule/schema";
+import { Button } from "@/components/ui/button";
+import { supervisionLabels, type DetectorType, type SiteArea } from "@/components/schedule/schedule-labels";
+
+type Values = Omit<ScheduleDetector, "id">;
+
+const blank: Values = { label: "", catalogId: "", area: "", room: "", cableM: 0, gauge: { awg: 22 }, supervision: "double-eol" };
+
+/** Add or edit one detector; validated with the same schema as the route handler. */
+export function DetectorForm({ types, areas, initial, submitLabel, onSubmit, onCancel }: { types: DetectorType[]; areas: SiteArea[]; initial?: Values; submitLabel: string; onSubmit: (v: Values) => Promise<string | null>; onCancel?: () => void }) {
+  const start = initial ?? { ...blank, catalogId: types[0]?.id ?? "" };
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [serverError, setServerError] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+  const [area, setArea] = useState(start.area);
+  const formId = initial ? "edit-detector" : "add-detector";
+  const rooms = areas.find((a) => a.name === area)?.rooms ?? areas.flatMap((a) => a.rooms);
+
+  async function submit(e: React.FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    const f = new FormData(e.currentTarget);
+    const gauge = parseGauge(String(f.get("gauge") ?? ""));
+    const parsed = createDetectorFormSchema.safeParse({
+      label: f.get("label"),
+      catalogId: f.get("catalogId"),
+      area: f.get("area"),
+      room: f.get("room"),
+      cableM: f.get("cableM"),
+      gauge: gauge ?? undefined,
+      supervision: f.get("supervision"),
+    });
+    if (!parsed.success || !gauge) {
+      const errs: Record<string, string> = {};
+      for (const i of parsed.success ? [] : parsed.error.issues) errs[String(i.path[0])] ??= i.message;
+      if (!gauge) errs.gauge = 'write a gauge such as "22 AWG" or "0.5 mm2"';
+      setErrors(errs);
+      return;
+    }
+    setErrors({});
+    setBusy(true);
+    const err = await onSubmit(parsed.data);
+    setBusy(false);
+    setServerError(err);
+    if (!err && !initial) {
+      (e.target as HTMLFormElement).reset();
+      setArea("");
+    }
+  }
+
+  const field = "mt-1 block w-full rounded-md border bg-white px-2 py-1.5 text-sm";
+  const err = (k: string) =>
+    errors[k] ? (
+      <span className="mt-0.5 block text-xs text-fault" id={`${formId}-${k}-error`}>
+        {errors[k]}
+      </span>
+    ) : null;
+  return (
+    <form onSubmit={submit} className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4" aria-label={submitLabel} noValidate>
+      <label className="text-sm sm:col-span-2">
+        <span className="font-medium">Label</span>
+        <input name="label" defaultValue={start.label} className={`${field} ${errors.label ? "border-fault" : "border-line"}`} aria-invalid={!!errors.label} maxLength={200} />
+        {err("label")}
+      </label>
+      <label className="text-sm sm:col-span-2">
+        <span className="font-medium">Detector type</span>
+        <select name="catalogId" defaultValue={start.catalogId} className={`${field} border-line`}>
+          {types.map((t) => (
+            <option key={t.id} value={t.id}>
+              {t.name}
+              {t.lifeSafety ? " (fire, life-safety)" : ""}
+            </option>
+          ))}
+        </select>
+        {err("catalogId")}
+      </label>
+      <label className="text-sm">
+        <span className="font-medium">Area</span>
+        <input name="area" list={`${formId}-areas`} value={area} onChange={(e) => setArea(e.target.value)} className={`${field} border-line`} maxLength={120} />
+        <datalist id={`${formId}-areas`}>
+          {areas.map((a) => (
+            <option key={a.name} value={a.name} />
+          ))}
+        </datalist>
+      </label>
+      <label className="text-sm">
+        <span className="font-medium">Room</span>
+        <input name="room" list={`${formId}-rooms`} defaultValue={start.room} className={`${field} border-line`} maxLength={120} />
+        <datalist id={`${formId}-rooms`}>
+          {rooms.map((r) => (
+            <option key={r} value={r} />
+          ))}
+        </datalist>
+      </label>
+      <label className="text-sm">
+        <span className="font-medium">Cable run (m)</span>
+        <input name="cableM" type="number" step="any" min={0} defaultValue={start.cableM || ""} className={`${field} ${errors.cableM ? "border-fault" : "border-line"}`} aria-invalid={!!errors.cableM} />
+        {err("cableM")}
+      </label>
+      <label className="text-sm">
+        <span className="font-medium">Gauge</span>
+        <input name="gauge" defaultValue={formatGauge(start.gauge)} className={`${field} ${errors.gauge ? "border-fault" : "border-line"}`} aria-invalid={!!errors.gauge} placeholder="22 AWG or 0.5 mm2" />
+        {err("gauge")}
+      </label>
+      <label className="text-sm sm:col-span-2">
+        <span className="font-medium">Supervision wanted</span>
+        <select name="supervision" defaultValue={start.supervision} className={`${field} border-line`}>
+          {supervisionPreferenceSchema.options.map((s) => (
+            <option key={s} value={s}>
+              {supervisionLabels[s]}
+            </option>
+          ))}
+        </select>
+      </label>
+      <div className="flex items-end gap-2 sm:col-span-2">
+        <Button type="submit" disabled={busy}>
+          {submitLabel}
+        </Button>
+        {onCancel ? (
+          <Button type="button" variant="secondary" onClick={onCancel}>
+            Cancel
+          </Button>
+        ) : null}
+      </div>
+      {serverError ? (
+        <p role="alert" className="text-sm text-fault sm:col-span-4">
+          {serverError}
+        </p>
+      ) : null}
+    </form>
+  );
+}
