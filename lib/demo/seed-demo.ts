@@ -1,6 +1,8 @@
 import type { Transaction } from "sequelize";
 import { Area, AuditEntry, Membership, Organisation, Room, Site, User } from "@/models";
 import type { Role } from "@/lib/auth/permissions";
+import { shippedCatalog } from "@/lib/catalog/shipped";
+import { seedDemoDesign } from "@/lib/demo/seed-demo-design";
 
 // A scenario of our own: every name, address and address book entry here is invented.
 export const DEMO_PASSWORD = "loop-demo-2026";
@@ -46,6 +48,7 @@ export async function seedDemo(transaction: Transaction, hash: (password: string
     const area = await Area.create({ siteId: site.id, name: a.name, position }, { transaction });
     await Room.bulkCreate(a.rooms.map((name) => ({ areaId: area.id, name })), { transaction });
   }
+  await seedDemoDesign(transaction, { organisationId: org.id, siteId: site.id, userId: users.designer }, shippedCatalog().catalog);
   await AuditEntry.create({ organisationId: org.id, userId: users.admin, action: "demo.seed", entityType: "organisation", entityId: String(org.id), detail: null }, { transaction });
   return { organisationId: org.id, siteId: site.id, users };
 }
