@@ -201,6 +201,40 @@ test("a second browser saving the same layout meanwhile: the first gets the conf
   await other.close();
 });
 
+test("a designer takes a hardware suggestion as a new layout, changes it, and restores the suggestion from the history", async ({ page }) => {
+  test.setTimeout(120_000);
+  await signIn(page, "designer");
+  const siteId = await newSite(page, `Suggested shop ${Date.now()}`);
+  const csv = (await import("node:fs")).readFileSync(fixture("corner-shop.csv"), "utf8");
+  expect((await page.request.post(`/api/sites/${siteId}/schedule/import`, { data: { mode: "confirm", csv } })).status()).toBe(200);
+  await page.goto(`/sites/${siteId}/layouts`);
+  await page.getByRole("button", { name: "Suggest hardware" }).click();
+  const single = page.getByTestId("suggestion-single");
+  await expect(single).toContainText("One detector per input");
+  await expect(single).toContainText("Inputs used10 of");
+  await expect(single).toContainText("0 errors");
+  await expect(page.getByTestId("suggestion-shared")).toContainText("Shared inputs allowed");
+  await single.getByRole("button", { name: "Accept as a new layout" }).click();
+  await expect(page.getByTestId("layout-name")).toHaveText("Suggested: one detector per input");
+  await expect(page.getByRole("heading", { name: /Unplaced detectors/ })).toContainText("(0 of 10)");
+  await expect(page.getByTestId("finding-counts")).toContainText("0 errors");
+
+  // take one detector off, wait for the save, then restore revision 1 from the history
+  await page.getByRole("button", { name: "Take Shop door off its input" }).click();
+  await expect(page.getByRole("heading", { name: /Unplaced detectors/ })).toContainText("(1 of 10)");
+  await waitSaved(page);
+  await page.getByRole("button", { name: "History" }).click();
+  await expect(page.getByTestId("revision-2")).toContainText("1 unplaced");
+  await page.getByRole("button", { name: "Restore revision 1" }).click();
+  await expect(page.getByTestId("editor-message")).toHaveText("Revision 1 restored as revision 3.");
+  await expect(page.getByTestId("revision-3")).toContainText("Restored revision 1");
+  await page.getByTestId("history").getByRole("button", { name: "Close" }).click();
+  await expect(page.getByRole("heading", { name: /Unplaced detectors/ })).toContainText("(0 of 10)");
+  await page.reload();
+  await expect(page.getByRole("heading", { name: /Unplaced detectors/ })).toContainText("(0 of 10)");
+  await expect(page.getByText("· revision 3 ·")).toBeVisible();
+});
+
 test("an installer opens a layout read-only, and the API refuses the installer's save with 403", async ({ page }) => {
   await signIn(page, "installer");
   await page.getByTestId("site-list").getByText("Marrowbank Community Library").click();
