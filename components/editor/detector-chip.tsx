@@ -34,7 +34,7 @@ export function ChipFace({ detectorId }: { detectorId: string }) {
 }
 
 /** A detector: dragged with the mouse or the keyboard (Space), or selected (click, Enter) for an input's "place here". */
-export function DetectorChip({ detectorId, onInput }: { detectorId: string; onInput: boolean }) {
+export function DetectorChip({ detectorId, onInput, sharedAs }: { detectorId: string; onInput: boolean; sharedAs?: "A" | "B" }) {
   const { canWrite, selected, select, doc, ctx, apply, findingsAt, highlighted, detectorsById } = useEditor();
   const { attributes, listeners, setNodeRef, isDragging } = useDraggable({ id: detectorDragId(detectorId), data: { type: "detector" }, disabled: !canWrite });
   const domId = `detector-${detectorId}`;
@@ -70,6 +70,11 @@ export function DetectorChip({ detectorId, onInput }: { detectorId: string; onIn
       >
         <ChipFace detectorId={detectorId} />
       </div>
+      {sharedAs ? (
+        <span className="shrink-0 rounded border border-line px-1 text-[10px] font-semibold text-slate-600" title={`Detector ${sharedAs} of the shared input: the ${sharedAs} resistor goes across its contact`}>
+          {sharedAs}
+        </span>
+      ) : null}
       <FindingMarker domId={domId} findings={findingsAt.get(domId)} />
       {onInput && canWrite ? (
         <button type="button" className="rounded px-1 text-slate-400 hover:bg-slate-100 hover:text-ink" aria-label={`Take ${label} off its input`} title="Back to unplaced" onClick={() => apply(unassign(doc, ctx, detectorId))}>

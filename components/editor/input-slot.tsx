@@ -50,9 +50,9 @@ function WiringControls({ entry, type, where }: { entry: LayoutInput; type: Inpu
     <details className="mt-1 text-[11px]">
       <summary className="cursor-pointer text-signal">Wiring</summary>
       <div className="mt-1 flex flex-col gap-1 rounded bg-slate-50 p-1">
-        <label className="flex items-center justify-between gap-2">
+        <label className="flex flex-col gap-0.5">
           <span>Scheme</span>
-          <select aria-label={`Scheme of ${where}`} className="rounded border border-line px-1 py-0.5" value={entry.scheme} onChange={(e) => set({ scheme: e.target.value as WiringScheme })}>
+          <select aria-label={`Scheme of ${where}`} className="w-full rounded border border-line px-1 py-0.5" value={entry.scheme} onChange={(e) => set({ scheme: e.target.value as WiringScheme })}>
             {[...new Set([...schemes, entry.scheme])].map((s) => (
               <option key={s} value={s} disabled={!schemes.includes(s)}>
                 {schemeLabels[s] ?? s}
@@ -60,9 +60,9 @@ function WiringControls({ entry, type, where }: { entry: LayoutInput; type: Inpu
             ))}
           </select>
         </label>
-        <label className="flex items-center justify-between gap-2">
+        <label className="flex flex-col gap-0.5">
           <span>Placement</span>
-          <select aria-label={`Resistor placement of ${where}`} className="rounded border border-line px-1 py-0.5" value={entry.placement} onChange={(e) => set({ placement: e.target.value as LayoutInput["placement"] })}>
+          <select aria-label={`Resistor placement of ${where}`} className="w-full rounded border border-line px-1 py-0.5" value={entry.placement} onChange={(e) => set({ placement: e.target.value as LayoutInput["placement"] })}>
             {Object.entries(placementLabels).map(([v, l]) => (
               <option key={v} value={v}>
                 {l}
@@ -101,7 +101,8 @@ export function InputSlot({ boardKey, n, type }: { boardKey: string; n: number; 
   const domId = `input-${boardKey}-${n}`;
   const where = inputName(doc, { boardKey, input: n });
   const zoneList = entry?.detectorIds.map((d) => zones.get(d)).filter((z): z is number => z !== undefined) ?? [];
-  const canPlace = canWrite && selected && !entry?.detectorIds.includes(selected);
+  // "place here" on a free input; "share" only where sharing would be accepted (the drag path says why not)
+  const canPlace = !!(canWrite && selected && !entry?.detectorIds.includes(selected) && (!entry || dropEdit(doc, ctx, { type: "detector", detectorId: selected }, { type: "input", boardKey, input: n })?.ok));
   const findings = findingsAt.get(domId);
   const worst = findings?.some((f) => f.severity === "error") ? "border-fault" : findings?.some((f) => f.severity === "warning") ? "border-warn" : entry ? "border-line" : "border-dashed border-line";
   return (
@@ -128,8 +129,8 @@ export function InputSlot({ boardKey, n, type }: { boardKey: string; n: number; 
         </p>
       ) : null}
       <div className="flex flex-col gap-1">
-        {entry?.detectorIds.map((d) => (
-          <DetectorChip key={d} detectorId={d} onInput />
+        {entry?.detectorIds.map((d, i) => (
+          <DetectorChip key={d} detectorId={d} onInput sharedAs={entry.scheme === "shared" ? (i === 0 ? "A" : "B") : undefined} />
         ))}
       </div>
       {canPlace ? (

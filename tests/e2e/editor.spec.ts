@@ -235,6 +235,35 @@ test("a designer takes a hardware suggestion as a new layout, changes it, and re
   await expect(page.getByText("· revision 3 ·")).toBeVisible();
 });
 
+test("with the server out of reach the editor says so and retries, and a reload meanwhile loses nothing", async ({ page }) => {
+  test.setTimeout(120_000);
+  await signIn(page, "designer");
+  const siteId = await newSite(page, `Offline shop ${Date.now()}`);
+  const csv = (await import("node:fs")).readFileSync(fixture("corner-shop.csv"), "utf8");
+  expect((await page.request.post(`/api/sites/${siteId}/schedule/import`, { data: { mode: "confirm", csv } })).status()).toBe(200);
+  await createLayout(page, siteId, "Offline option", /^Compact 8 control panel/);
+
+  // every save fails as if the network were down
+  const offline = (route: import("@playwright/test").Route) => (route.request().method() === "PUT" ? route.abort("internetdisconnected") : route.continue());
+  await page.route("**/api/layouts/*", offline);
+  await placeWithButton(page, "Yard shutter", "panel", 3);
+  await expect(page.getByTestId("save-state")).toHaveText("Not saved — retrying", { timeout: 10_000 });
+  await expect(page.getByText("your changes are kept in this browser")).toBeVisible();
+
+  // a reload while still offline: the change comes back from the browser's copy
+  await page.reload();
+  await expect(page.getByTestId("notice")).toContainText("Your unsaved changes from");
+  await expect(slot(page, "panel", 3)).toContainText("Yard shutter");
+  await expect(page.getByTestId("save-state")).toHaveText("Not saved — retrying", { timeout: 10_000 });
+
+  // back online: the retry saves it, and the server has it
+  await page.unroute("**/api/layouts/*", offline);
+  await waitSaved(page);
+  await page.reload();
+  await expect(page.getByTestId("notice")).toHaveCount(0);
+  await expect(slot(page, "panel", 3)).toContainText("Yard shutter");
+});
+
 test("an installer opens a layout read-only, and the API refuses the installer's save with 403", async ({ page }) => {
   await signIn(page, "installer");
   await page.getByTestId("site-list").getByText("Marrowbank Community Library").click();
