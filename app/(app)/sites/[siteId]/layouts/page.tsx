@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { notFound } from "next/navigation";
 import { pageActor } from "@/lib/server/session";
 import { getSite } from "@/lib/server/sites";
@@ -27,7 +28,15 @@ export default async function LayoutsPage({ params }: { params: Promise<{ siteId
   const panels = catalog.panels.map((p) => ({ id: p.id, name: p.name, inputs: p.onboardInputs.count, maxZones: p.maxZones, listPrice: p.listPrice }));
   return (
     <>
-      <PageHeader title={`Layouts — ${site.name}`} subtitle="Each layout is one design of the system: hardware chosen and detectors assigned. Every save is kept as a revision." />
+      <PageHeader
+        title={`Layouts — ${site.name}`}
+        subtitle="Each layout is one design of the system: hardware chosen and detectors assigned. Every save is kept as a revision."
+        actions={
+          <Link href={`/sites/${site.id}/compare${layouts.length >= 2 ? `?ids=${layouts.slice(0, 2).map((l) => l.id).join(",")}` : ""}`} className="rounded-md border border-line bg-white px-3 py-2 text-sm font-medium hover:bg-slate-50" data-testid="compare-link">
+            Compare layouts
+          </Link>
+        }
+      />
       <LayoutsOverview siteId={site.id} initial={layouts} panels={panels} detectorCount={schedule.length} canWrite={can(actor.role, "layout:write")} />
     </>
   );

@@ -6,7 +6,8 @@ import { ApiError } from "@/lib/server/errors";
 import { idParam } from "@/lib/server/route";
 import { can, refusal } from "@/lib/auth/permissions";
 import { Refusal } from "@/components/ui/refusal";
-import { LayoutEditor } from "@/components/editor/layout-editor";
+import { ReviewedEditor } from "@/components/review/reviewed-editor";
+import { findLayoutForReview } from "@/lib/server/sheets";
 
 export const metadata: Metadata = { title: "Layout editor" };
 
@@ -23,5 +24,6 @@ export default async function LayoutEditorPage({ params }: { params: Promise<{ s
   });
   if (data.site.id !== sid.data) notFound();
   const canWrite = can(actor.role, "layout:write");
-  return <LayoutEditor key={data.layout.id} layout={data.layout} document={data.document} site={data.site} schedule={data.schedule} catalog={data.catalog} canWrite={canWrite} readOnlyReason={canWrite ? "" : refusal(actor.role, "layout:write")} />;
+  const { review } = await findLayoutForReview(actor, data.layout.id);
+  return <ReviewedEditor key={data.layout.id} review={review} editor={{ layout: data.layout, document: data.document, site: data.site, schedule: data.schedule, catalog: data.catalog, canWrite, readOnlyReason: canWrite ? "" : refusal(actor.role, "layout:write") }} />;
 }

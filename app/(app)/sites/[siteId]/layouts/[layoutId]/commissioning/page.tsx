@@ -1,0 +1,46 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { pageActor } from "@/lib/server/session";
+import { getCommissioning } from "@/lib/server/commissioning";
+import { findLayoutForReview, getTerminalSheet } from "@/lib/server/sheets";
+import { catalogFor } from "@/lib/server/schedules";
+import { ApiError } from "@/lib/server/errors";
+import { idParam } from "@/lib/server/route";
+import { can, refusal } from "@/lib/auth/permissions";
+import { usualValuesOf } from "@/lib/commissioning/diagnose";
+import { Refusal } from "@/components/ui/refusal";
+import { LayoutTabs } from "@/components/review/layout-tabs";
+import { CommissioningApp } from "@/components/commissioning/commissioning-app";
+
+export const metadata: Metadata = { title: "Commissioning" };
+
+export default async function CommissioningPage({ params }: { params: Promise<{ siteId: string; layoutId: string }> }) {
+  const { siteId, layoutId } = await params;
+  const { actor, allowed, reason } = await pageActor("sheet:read", `/sites/${siteId}/layouts/${layoutId}/commissioning`);
+  if (!allowed) return <Refusal reason={reason} />;
+  const sid = idParam.safeParse(siteId);
+  const lid = idParam.safeParse(layoutId);
+  if (!sid.success || !lid.success) notFound();
+  const ref = await findLayoutForReview(actor, lid.data).catch((e) => {
+    if (e instanceof ApiError && e.status === 404) notFound();
+    throw e;
+  });
+  if (ref.layout.siteId !== sid.data) notFound();
+  const view = await getCommissioning(actor, lid.data);
+  const [sheet, catalog] = await Promise.all([view.revision === null ? null : getTerminalSheet(actor, lid.data, { revision: view.revision }), catalogFor(actor.organisationId)]);
+  const canRecord = can(actor.role, "commissioning:record");
+  return (
+    <>
+      <LayoutTabs siteId={ref.site.id} siteName={ref.site.name} layoutId={ref.layout.id} layoutName={ref.layout.name} review={view.review} current="commissioning" />
+      <CommissioningApp
+        siteId={ref.site.id}
+        layoutId={ref.layout.id}
+        initial={view}
+        sheet={sheet?.sheet ?? null}
+        usualValues={usualValuesOf(catalog)}
+        canRecord={canRecord}
+        recordRefusal={canRecord ? "" : refusal(actor.role, "commissioning:record")}
+      />
+    </>
+  );
+}

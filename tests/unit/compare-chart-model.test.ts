@@ -1,0 +1,49 @@
+import { describe, expect, it } from "vitest";
+import { CHART, chartModel, nameLines } from "@/components/compare/chart-model";
+
+// The comparison chart: spare inputs and supervision coverage of each layout as bars on one 0–100 % scale.
+
+const plot = CHART.panelWidth - CHART.labelRoom;
+
+describe("the comparison chart", () => {
+  const m = chartModel([
+    { name: "One detector per input", inputs: { used: 41, total: 44, spare: 3 }, coverage: { used: 41, covered: 38, share: 38 / 41 } },
+    { name: "Large panel with shared inputs", inputs: { used: 36, total: 36, spare: 0 }, coverage: { used: 36, covered: 9, share: 0.25 } },
+    { name: "Blank", inputs: { used: 0, total: 0, spare: 0 }, coverage: { used: 0, covered: 0, share: null } },
+  ]);
+
+  it("scales each bar to its share of the plot width", () => {
+    expect(m.rows[0].spare.width).toBeCloseTo((3 / 44) * plot, 9);
+    expect(m.rows[0].coverage.width).toBeCloseTo((38 / 41) * plot, 9);
+    expect(m.rows[1].spare.width).toBe(0);
+    expect(m.rows[1].coverage.width).toBeCloseTo(0.25 * plot, 9);
+  });
+
+  it("labels each bar with the counts and the rounded percentage", () => {
+    expect(m.rows[0].spare.label).toBe("3 of 44 (7 %)");
+    expect(m.rows[0].coverage.label).toBe("38 of 41 (93 %)");
+    expect(m.rows[1].coverage.label).toBe("9 of 36 (25 %)");
+    expect(m.rows[2].spare.label).toBe("no inputs");
+    expect(m.rows[2].coverage.label).toBe("no inputs used");
+  });
+
+  it("stacks the rows and sizes the drawing to hold them", () => {
+    expect(m.rows.map((r) => r.y)).toEqual([CHART.top, CHART.top + CHART.rowHeight, CHART.top + 2 * CHART.rowHeight]);
+    expect(m.height).toBe(CHART.top + 3 * CHART.rowHeight + CHART.bottom);
+    expect(m.ticks.map((t) => t.label)).toEqual(["0 %", "25 %", "50 %", "75 %", "100 %"]);
+    expect(m.panels[1].x).toBeGreaterThanOrEqual(m.panels[0].x + m.panels[0].width);
+  });
+
+  it("keeps a bar inside the scale when figures are odd", () => {
+    const odd = chartModel([{ name: "x", inputs: { used: 1, total: 1, spare: 5 }, coverage: { used: 1, covered: 2, share: 2 } }]);
+    expect(odd.rows[0].spare.width).toBe(plot);
+    expect(odd.rows[0].coverage.width).toBe(plot);
+  });
+
+  it("puts a long name on two lines, cutting the rest short", () => {
+    expect(nameLines("One detector per input")).toEqual(["One detector per input"]);
+    expect(nameLines("Large panel with shared inputs")).toEqual(["Large panel with", "shared inputs"]);
+    expect(nameLines("A very long layout name that goes on and on")).toEqual(["A very long layout", "name that goes on and…"]);
+    expect(nameLines("Supercalifragilisticexpialidocious")).toEqual(["Supercalifragilistice…"]);
+  });
+});
