@@ -1,4 +1,4 @@
-import { closestCenter, pointerWithin, rectIntersection, type CollisionDetection, type KeyboardCoordinateGetter } from "@dnd-kit/core";
+import { closestCenter, pointerWithin, rectIntersection, type CollisionDetection, type DroppableContainer, type KeyboardCoordinateGetter, type UniqueIdentifier } from "@dnd-kit/core";
 import { sortableKeyboardCoordinates } from "@dnd-kit/sortable";
 
 // Drag-and-drop plumbing of the editor: what may be dropped where, and arrow keys that jump between drop targets.
@@ -37,7 +37,13 @@ export class DropTargetOrder {
 export function editorKeyboardCoordinates(order: DropTargetOrder): KeyboardCoordinateGetter {
   return (event, args) => {
     const { context } = args;
-    if (typeOf(context.active?.data) === "board") return sortableKeyboardCoordinates(event, args);
+    if (typeOf(context.active?.data) === "board") {
+      // the sortable helper looks at every drop target; a board only goes to another board's place
+      const all = context.droppableContainers;
+      const Same = all.constructor as new (entries: [UniqueIdentifier, DroppableContainer][]) => typeof all;
+      const boards = new Same([...all.entries()].filter(([, c]) => accepts(c.data).includes("board")));
+      return sortableKeyboardCoordinates(event, { ...args, context: { ...context, droppableContainers: boards } });
+    }
     const step = event.code === "ArrowDown" || event.code === "ArrowRight" ? 1 : event.code === "ArrowUp" || event.code === "ArrowLeft" ? -1 : 0;
     if (!step) return undefined;
     event.preventDefault();

@@ -66,7 +66,12 @@ async function keyboardDrag(page: Page, label: string, where: string) {
   await chip(page, label).focus();
   await page.keyboard.press("Space");
   await expect(live).toContainText(`Picked up ${label}`);
-  for (let i = 0; i < 30 && !(await live.textContent())?.includes(`over ${where},`); i++) await page.keyboard.press("ArrowDown");
+  for (let i = 0; i < 30 && !(await live.textContent())?.includes(`over ${where},`); i++) {
+    const before = await live.textContent();
+    await page.keyboard.press("ArrowDown");
+    // each step is announced: wait for the new sentence before deciding on the next key
+    await expect(live).not.toHaveText(before ?? "");
+  }
   await expect(live).toContainText(`${label} is over ${where}, free`);
   await page.keyboard.press("Space");
 }
@@ -262,6 +267,46 @@ test("with the server out of reach the editor says so and retries, and a reload 
   await page.reload();
   await expect(page.getByTestId("notice")).toHaveCount(0);
   await expect(slot(page, "panel", 3)).toContainText("Yard shutter");
+});
+
+test("boards are re-ordered by their handle, with the mouse and with the keyboard", async ({ page }) => {
+  test.setTimeout(120_000);
+  await signIn(page, "designer");
+  await page.setViewportSize({ width: 1280, height: 1400 }); // both boards in view for the mouse
+  const siteId = await newSite(page, `Board order ${Date.now()}`);
+  const document = {
+    panelId: "panel-compact-8",
+    boards: [
+      { key: "b1", kind: "expansion", catalogId: "board-compact-8", busAddress: 1 },
+      { key: "b2", kind: "keypad", catalogId: "keypad-compact-1", busAddress: 2 },
+    ],
+    inputs: [],
+    power: { standbyProfileId: "intruder-grade-2", safetyFactor: 1.2 },
+    busCableM: 40,
+  };
+  const created = await page.request.post(`/api/sites/${siteId}/layouts`, { data: { name: "Two boards", document } });
+  expect(created.status()).toBe(200);
+  await page.goto(`/sites/${siteId}/layouts/${(await created.json()).layout.id}`);
+  const order = () => page.getByTestId("boards").locator("section[aria-label]").evaluateAll((els) => els.map((e) => e.getAttribute("aria-label")));
+  expect(await order()).toEqual(["Control panel", "Expansion board 1", "Keypad 1"]);
+
+  await mouseDrag(page, page.getByRole("button", { name: /^Move Keypad 1 in the board order/ }), page.getByTestId("board-b1"));
+  await expect(page.getByTestId("editor-message")).toHaveText("Keypad 1 moved to position 1 of 2");
+  expect(await order()).toEqual(["Control panel", "Keypad 1", "Expansion board 1"]);
+
+  const live = page.locator("[id^=DndLiveRegion]");
+  await page.getByRole("button", { name: /^Move Keypad 1 in the board order/ }).focus();
+  await page.keyboard.press("Space");
+  await expect(live).toContainText("Picked up Keypad 1, position 1 of 2");
+  await page.keyboard.press("ArrowDown");
+  await expect(live).toHaveText("Keypad 1 is over position 2 of 2");
+  await page.keyboard.press("Space");
+  await expect(page.getByTestId("editor-message")).toHaveText("Keypad 1 moved to position 2 of 2");
+  await page.getByRole("button", { name: "Move Expansion board 1 down" }).click();
+  await expect(page.getByTestId("editor-message")).toHaveText("Expansion board 1 moved to position 2 of 2");
+  await waitSaved(page);
+  await page.reload();
+  expect(await order()).toEqual(["Control panel", "Keypad 1", "Expansion board 1"]);
 });
 
 test("an installer opens a layout read-only, and the API refuses the installer's save with 403", async ({ page }) => {
