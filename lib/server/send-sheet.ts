@@ -5,12 +5,36 @@ import { ApiError } from "./errors";
 import { env } from "./env";
 import { sendMail } from "./mail";
 import { ensureCan } from "./schedules";
-import { findLayoutForReview, getTerminalSheet, terminalSheetPdfFor } from "./sheets";
+import { createHash } from "node:crypto";
+import { fileStem, findLayoutForReview, getTerminalSheet, loadSheetContext, sheetMetaOf, type SheetOptions } from "./sheets";
 import type { Actor } from "./session";
 import { Membership, Site, User } from "@/models";
 import type { PageSize } from "@/lib/server/pdf/pdf-kit";
+import { terminalSheetPdf } from "@/lib/server/pdf/terminal-sheet-pdf";
+import { loopJsonReplacer } from "@/lib/loop/loop-json";
+import { buildTerminalSheet } from "@/lib/sheet/build-sheet";
 
-// The terminal sheet e-mailed to the site's installer as a PDF attachment.
+// The terminal sheet as a PDF, for download and e-mailed to the site's installer as an attachment.
+
+// Laying out a sheet of a few dozen loops takes pdfkit over a second of CPU, so the last few PDFs are kept, keyed by
+// everything they are made from (the sheet itself, its heading, the paper): the same sheet is not laid out twice.
+const PDF_CACHE_ENTRIES = 8;
+const pdfCache = new Map<string, Buffer>();
+
+/** The terminal sheet PDF of a revision (the approved one by default), from the cache when the same sheet was made before. */
+export async function terminalSheetPdfCached(actor: Actor, layoutId: number, opts: SheetOptions & { size?: PageSize } = {}): Promise<{ pdf: Buffer; fileName: string }> {
+  const ctx = await loadSheetContext(actor, layoutId, opts);
+  const sheet = buildTerminalSheet(ctx.document, ctx.schedule, ctx.catalog);
+  const meta = sheetMetaOf(ctx);
+  const size = opts.size ?? "A4";
+  const key = createHash("sha256").update(JSON.stringify({ sheet, meta, size }, loopJsonReplacer)).digest("hex");
+  let pdf = pdfCache.get(key);
+  if (pdf) pdfCache.delete(key);
+  else pdf = await terminalSheetPdf(sheet, meta, size);
+  pdfCache.set(key, pdf);
+  while (pdfCache.size > PDF_CACHE_ENTRIES) pdfCache.delete(pdfCache.keys().next().value!);
+  return { pdf, fileName: `${fileStem("terminal-sheet", ctx.site.name, ctx.layout.name, `rev-${ctx.revision}`)}.pdf` };
+}
 
 export interface SiteInstaller {
   userId: number;
@@ -47,7 +71,7 @@ export async function sendSheetToInstaller(actor: Actor, layoutId: number, opts:
   const installer = await layoutInstaller(actor, layoutId);
   if (!installer) throw new ApiError(409, "This site has no installer assigned: assign one on the site first, then send the sheet.");
   const view = await getTerminalSheet(actor, layoutId);
-  const { pdf, fileName } = await terminalSheetPdfFor(actor, layoutId, { size: opts.size ?? "A4" });
+  const { pdf, fileName } = await terminalSheetPdfCached(actor, layoutId, { size: opts.size ?? "A4" });
   const rev = view.meta.revision;
   const status = view.approved ? `approved revision ${rev}` : `revision ${rev}, NOT APPROVED — for review only`;
   const link = `${env().NEXTAUTH_URL}/sites/${view.siteId}/layouts/${layoutId}/sheet`;

@@ -212,7 +212,16 @@ export const routes: RouteEntry[] = [
     requiredKeys: ["body"],
   },
   { method: "GET", path: "/api/layouts/[layoutId]/sheet", access: "sheet:read", body: "none", success: 200, orgScoped: true, build: async (ctx) => ({ method: "GET", url: `/api/layouts/${ctx.demo.layoutId}/sheet` }) },
-  { method: "GET", path: "/api/layouts/[layoutId]/sheet/pdf", access: "sheet:read", body: "none", success: 200, orgScoped: true, build: async (ctx) => ({ method: "GET", url: `/api/layouts/${ctx.demo.layoutId}/sheet/pdf?size=LETTER` }) },
+  {
+    method: "GET",
+    path: "/api/layouts/[layoutId]/sheet/pdf",
+    access: "sheet:read",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "GET", url: `/api/layouts/${(await ctx.fixtures.approvedLayout()).layoutId}/sheet/pdf?size=LETTER` }),
+    note: "a small approved layout: the demo layout's 41 loops take pdfkit over a second to lay out",
+  },
   {
     method: "POST",
     path: "/api/layouts/[layoutId]/sheet/send",

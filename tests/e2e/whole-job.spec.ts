@@ -170,6 +170,7 @@ test("the installer opens the approved sheet and downloads it as a PDF and the z
   await expect(first.getByTestId("loop-schematic")).toBeVisible();
   await expect(page.getByTestId("send-sheet")).toBeDisabled(); // installers receive the sheet, they do not send it
   await page.screenshot({ path: `${shots}/sheet.png` });
+  await first.screenshot({ path: `${shots}/sheet-input.png` });
   await page.emulateMedia({ media: "print" });
   await page.screenshot({ path: `${shots}/sheet-print.png` });
   await expect(page.getByTestId("sheet-toolbar")).toBeHidden();
