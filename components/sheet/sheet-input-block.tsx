@@ -31,7 +31,7 @@ export function SheetInputBlock({ row }: { row: SheetInput }) {
           licensed people decide. These figures are an aid, not an approval.
         </p>
       ) : null}
-      <div className="mt-2 grid gap-3 xl:grid-cols-[minmax(0,1fr)_26rem] print:grid-cols-1">
+      <div className="mt-2 flex flex-col gap-3">
         <div className="min-w-0 space-y-2 text-xs">
           <table className="w-full border-collapse">
             <thead>
@@ -124,9 +124,10 @@ export function SheetInputBlock({ row }: { row: SheetInput }) {
             {row.cable.conductorOhms ? ` (loop conductors ${row.cable.conductorOhms.minOhms.toFixed(1)}–${row.cable.conductorOhms.maxOhms.toFixed(1)} Ω there and back, 10–40 °C)` : ""}.
           </p>
         </div>
-        <div className="min-w-0 overflow-x-auto print:mx-auto print:w-3/4">
+        <figure className="min-w-0 max-w-4xl overflow-x-auto print:mx-auto print:max-w-none">
           <LoopSchematic loop={sheetLoopSpec(row)} className="w-full" />
-        </div>
+          <figcaption className="text-xs text-slate-600">The loop as wired, everything at rest: resistors drawn where they are fitted.</figcaption>
+        </figure>
       </div>
 
       {row.expected.length ? (
