@@ -14,7 +14,6 @@ import { PANEL_KEY, type LayoutDocument } from "@/lib/layout/schema";
 import type { Schedule } from "@/lib/schedule/schema";
 import type { LayoutMeta, LayoutView } from "@/lib/server/layouts";
 import { createSolver } from "@/lib/solver";
-import { withCapacityCheck } from "@/lib/layout/capacity-check";
 import { describeError, FetchError, fetcher, sendJson } from "@/lib/client/fetcher";
 import { clearDraft, readDraft } from "@/lib/client/local-draft";
 import { useAutosave } from "@/lib/client/use-autosave";
@@ -79,7 +78,7 @@ export function LayoutEditor(props: LayoutEditorProps) {
 
   const autosave = useAutosave({ layoutId, initialVersion: props.layout.version, enabled: canWrite, onSaved: setMeta });
   const { change, reset } = autosave;
-  const result = useMemo(() => withCapacityCheck(solver.solve(doc)), [solver, doc]);
+  const result = useMemo(() => solver.solve(doc), [solver, doc]);
   const zones = useMemo(() => zoneNumbers(result), [result]);
   const findingsAt = useMemo(() => findingsByDomId(result.findings), [result]);
   const detectorsById = useMemo(() => new Map(schedule.map((d) => [d.id, d])), [schedule]);

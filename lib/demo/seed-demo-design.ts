@@ -3,7 +3,6 @@ import { AuditEntry, Layout, LayoutRevision, ScheduleDetectorRecord } from "@/mo
 import type { Catalog } from "@/lib/catalog/schema";
 import type { LayoutDocument } from "@/lib/layout/schema";
 import { summarizeSolve } from "@/lib/layout/layout-summary";
-import { withCapacityCheck } from "@/lib/layout/capacity-check";
 import type { Schedule, ScheduleRow, SupervisionPreference } from "@/lib/schedule/schema";
 import { solveLayout, suggestHardware } from "@/lib/solver";
 
@@ -81,7 +80,7 @@ export async function seedDemoDesign(transaction: Transaction, ids: { organisati
 }
 
 async function storeLayout(transaction: Transaction, ids: { organisationId: number; siteId: number; userId: number }, name: string, document: LayoutDocument, schedule: Schedule, catalog: Catalog) {
-  const summary = summarizeSolve(document, withCapacityCheck(solveLayout(document, schedule, catalog)));
+  const summary = summarizeSolve(document, solveLayout(document, schedule, catalog));
   const layout = await Layout.create({ siteId: ids.siteId, name, currentRevision: 1, version: 1, createdBy: ids.userId }, { transaction });
   await LayoutRevision.create({ layoutId: layout.id, revision: 1, document, summary, note: "Suggested hardware (demo data)", createdBy: ids.userId }, { transaction });
   await AuditEntry.create({ organisationId: ids.organisationId, userId: ids.userId, action: "layout.create", entityType: "layout", entityId: String(layout.id), detail: { siteId: ids.siteId, name, from: "demo" } }, { transaction });

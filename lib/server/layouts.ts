@@ -16,7 +16,6 @@ import type { Schedule } from "@/lib/schedule/schema";
 import { solveLayout, suggestHardware, type Suggestion } from "@/lib/solver";
 import type { Severity } from "@/lib/findings";
 import { summarizeSolve, type LayoutSolveSummary } from "@/lib/layout/layout-summary";
-import { withCapacityCheck } from "@/lib/layout/capacity-check";
 
 export type { LayoutSolveSummary };
 
@@ -49,7 +48,7 @@ export interface RevisionMeta {
 
 /** The server's solve of a document: the solver's findings plus the capacity rule the editor shows too. */
 export function solveForSave(doc: LayoutDocument, schedule: Schedule, catalog: Catalog): LayoutSolveSummary {
-  return summarizeSolve(doc, withCapacityCheck(solveLayout(doc, schedule, catalog)));
+  return summarizeSolve(doc, solveLayout(doc, schedule, catalog));
 }
 
 const nameSchema = z.string().trim().min(1, "a name is needed").max(200);

@@ -4,10 +4,12 @@ import type { LayoutDocument } from "@/lib/layout/schema";
 import type { Schedule } from "@/lib/schedule/schema";
 import { createSolverWith } from "@/lib/solver/create-solver";
 import type { SolveResult, Solver } from "@/lib/solver/types";
+import { withCapacityCheck } from "@/lib/solver/inputs-short-rule";
 
 /** An incremental solver for the editor: keep one per (schedule, catalog) and call `solve` after every edit. */
 export function createSolver(schedule: Schedule, catalog: Catalog): Solver {
-  return createSolverWith(analyzeLoop, schedule, catalog);
+  const solver = createSolverWith(analyzeLoop, schedule, catalog);
+  return { ...solver, solve: (layout) => withCapacityCheck(solver.solve(layout)) };
 }
 
 /** One full solve with empty caches (the server on save). Gives the same result as an incremental solver. */

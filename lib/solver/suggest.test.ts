@@ -40,7 +40,8 @@ function cheapestByBruteForce(schedule: Schedule, catalog: Catalog, power: Layou
     const visit = (j: number, cost: number) => {
       if (cost >= Math.min(below, best?.cost ?? Infinity)) return;
       if (j < items.length) {
-        for (let c = 0; c <= 2; c++) {
+        // up to one of each item per detector (schedules here have at most 4): more can never be needed
+        for (let c = 0; c <= 4; c++) {
           counts[j] = c;
           visit(j + 1, cost + c * items[j].price);
         }

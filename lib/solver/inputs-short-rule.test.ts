@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { createSolver } from "@/lib/solver";
 import { fixtureCatalog } from "@/lib/solver/testing/fixture-catalog";
 import { det, emptyLayout, inp } from "@/lib/solver/testing/fixture-schedule";
-import { inputsShortFinding, withCapacityCheck } from "@/lib/layout/capacity-check";
+import { inputsShortFinding, withCapacityCheck } from "@/lib/solver/inputs-short-rule";
 
 const panel = fixtureCatalog.panels[0];
 const n = panel.onboardInputs.count;

@@ -1,7 +1,7 @@
 import type { Finding } from "@/lib/findings";
-import type { SolveResult } from "@/lib/solver";
+import type { SolveResult } from "@/lib/solver/types";
 
-// A capacity rule the editor and the server add to the solver's findings: more detectors left to place
+// A capacity rule over the whole solve: more detectors left to place
 // than there are free inputs means the chosen hardware cannot carry the device schedule.
 
 export function inputsShortFinding(r: SolveResult): Finding | null {
