@@ -11,7 +11,7 @@ import { det } from "@/lib/solver/testing/fixture-schedule";
 import { tinyCatalog } from "@/lib/solver/testing/tiny-catalog";
 
 /**
- * Every layout on the tiny catalog cheaper than `below`: each panel with up to two of each compatible board,
+ * Every layout on the tiny catalog cheaper than `below`: each panel with up to four of each compatible board,
  * at least one keypad (the suggestion's default), every way of grouping detectors singly or in pairs (a pair only
  * when `share` allows both), every way of putting the groups on boards, every choice of supply for each board,
  * wired with the default schemes. Returns the cheapest such layout that solves without errors, or null.
