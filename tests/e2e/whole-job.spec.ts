@@ -138,6 +138,9 @@ test("a designer cannot approve: the review says who can", async ({ page }) => {
   expect(again.status()).toBe(403);
   expect((await again.json()).error).toMatch(/layout:approve/);
   expect((await page.request.post(`/api/layouts/${other.id}/review`, { data: { action: "withdraw" } })).status()).toBe(200);
+  // its sheet is only for review
+  await page.goto(`/sites/${siteId}/layouts/${other.id}/sheet`);
+  await expect(page.getByTestId("sheet-approval")).toHaveText("Not approved — for review only");
 });
 
 test("the engineer e-mails the sheet to the site's installer, and the outbox lists it with the PDF", async ({ page }) => {
@@ -158,8 +161,9 @@ test("the engineer e-mails the sheet to the site's installer, and the outbox lis
   expect(await pdfText(await res.body(), "mailed-sheet.pdf")).toContain("Terminal sheet");
 });
 
-test("the installer opens the approved sheet and downloads it as a PDF and the zone list as CSV", async ({ page }) => {
+test("the installer opens the approved sheet, prints it, and downloads it as a PDF and the zone list as CSV", async ({ page }) => {
   await signIn(page, "installer");
+  const row0Label = (await sheetJson(page.request, chosen.id)).sheet.boards[0].rows.find((r) => !r.spare)!.detectors[0].label;
   await page.goto(`/sites/${siteId}/layouts/${chosen.id}/sheet`);
   await expect(page.getByTestId("sheet-approval")).toContainText("Approved revision 1");
   await expect(page.getByTestId("life-safety-caution")).toContainText("authority having jurisdiction");
@@ -170,6 +174,29 @@ test("the installer opens the approved sheet and downloads it as a PDF and the z
   await expect(first.getByTestId("loop-schematic")).toBeVisible();
   await expect(page.getByTestId("send-sheet")).toBeDisabled(); // installers receive the sheet, they do not send it
   await page.screenshot({ path: `${shots}/sheet.png` });
+  // printed: the paper the toggle says (CSS @page), no navigation or buttons, a new page for each board
+  const boardCount = await page.locator("section.sheet-board").count();
+  const boardNames = (await sheetJson(page.request, chosen.id)).sheet.boards.map((b) => b.name);
+  expect(boardNames.length).toBe(boardCount);
+  // ISO 216 A4 is 210 × 297 mm = 595.3 × 841.9 pt, US Letter 8.5 × 11 in = 612 × 792 pt (72 pt per inch); Chromium rounds its page box to device pixels, so within a point
+  for (const [paper, w, h] of [["US Letter", 612, 792], ["A4", 595.3, 841.9]] as const) {
+    await page.getByText(paper, { exact: false }).first().click();
+    const file = join(tmp, `printed-${paper}.pdf`);
+    await page.pdf({ path: file, preferCSSPageSize: true, printBackground: true });
+    const info = execFileSync("/usr/bin/pdfinfo", [file], { encoding: "utf8" });
+    const [, pw, ph] = /Page size:\s+([\d.]+) x ([\d.]+) pts/.exec(info)!.map(Number);
+    expect(Math.abs(pw - w), `${paper} width ${pw} pt`).toBeLessThan(1);
+    expect(Math.abs(ph - h), `${paper} height ${ph} pt`).toBeLessThan(1);
+    const pages = Number(/Pages:\s+(\d+)/.exec(info)![1]);
+    expect(pages).toBeGreaterThanOrEqual(boardCount);
+    const printed = execFileSync("/usr/bin/pdftotext", [file, "-"], { encoding: "utf8" });
+    // every board after the first starts a page (pdftotext puts a form feed between pages)
+    const pageTexts = printed.split("\f").map((t) => t.trim());
+    for (const name of boardNames.slice(1)) expect(pageTexts.some((t) => t.startsWith(`${name} — `)), `${paper}: a page starts with ${name}`).toBe(true);
+    expect(printed).toContain(row0Label);
+    expect(printed).not.toContain("E-mail to the site's installer");
+    expect(printed).not.toContain("Sign out");
+  }
   await first.screenshot({ path: `${shots}/sheet-input.png` });
   await page.emulateMedia({ media: "print" });
   await page.screenshot({ path: `${shots}/sheet-print.png` });
