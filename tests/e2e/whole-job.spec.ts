@@ -227,7 +227,8 @@ async function typeReading(page: Page, test: string, text: string) {
   return page.getByTestId(`verdict-${test}`);
 }
 
-test("the installer commissions the loops: a resistor at the panel end is diagnosed, a photo kept, then the record", async ({ page, context }) => {
+test("the installer commissions the loops: a resistor at the panel end is diagnosed, a photo kept, then the record", async ({ page: first, context }) => {
+  let page = first;
   test.setTimeout(300_000);
   await page.setViewportSize({ width: 390, height: 844 }); // a phone in the plant room
   await signIn(page, "installer");
@@ -260,22 +261,39 @@ test("the installer commissions the loops: a resistor at the panel end is diagno
   await expect(page.getByTestId("latest-short")).toHaveAttribute("data-verdict", "fail");
   await expect(page.getByTestId(`queue`)).toHaveAttribute("data-count", "0");
 
-  // moved to the detector: the short now reads the cable alone. Sent while offline, it waits and goes when the connection is back.
+  // moved to the detector: the short now reads the cable alone. Saved with no signal, it waits on the device,
+  // and goes as soon as the browser is back online (its `online` event), without a reload.
   const short = row.expected.find((e) => e.test === "short")!;
   await context.setOffline(true);
   await expect(await typeReading(page, "short", meterText(num(short.nominalOhms)))).toHaveAttribute("data-verdict", "pass");
   await page.getByTestId("save-short").click();
-  await expect(page.getByTestId("queue")).toContainText("1 reading waiting to send");
-  await page.reload().catch(() => undefined); // offline: the page cannot load, the reading stays on the device
+  await expect(await typeReading(page, "rest", restText)).toHaveAttribute("data-verdict", "pass");
+  await page.getByTestId("save-rest").click();
+  await expect(page.getByTestId("queue")).toContainText("2 readings waiting to send");
+  await expect(page.getByTestId("latest-short")).toHaveAttribute("data-verdict", "fail"); // not sent yet
   await context.setOffline(false);
+  await expect(page.getByTestId("queue")).toHaveAttribute("data-count", "0", { timeout: 10_000 });
+  await expect(page.getByTestId("latest-short")).toHaveAttribute("data-verdict", "pass");
+
+  // a reading taken offline survives the tab being closed: the next visit sends it
+  const cut = row.expected.find((e) => e.test === "cut")!;
+  await context.setOffline(true);
+  await expect(await typeReading(page, "cut", meterText(num(cut.nominalOhms)))).toHaveAttribute("data-verdict", "pass");
+  await page.getByTestId("save-cut").click();
+  await expect(page.getByTestId("queue")).toContainText("1 reading waiting to send");
+  await page.close();
+  await context.setOffline(false);
+  page = await context.newPage();
+  await page.setViewportSize({ width: 390, height: 844 });
   await page.goto(`/sites/${siteId}/layouts/${chosen.id}/commissioning`);
   await expect(page.getByTestId("queue")).toHaveAttribute("data-count", "0");
   await page.getByTestId(`board-${row.boardKey}`).click();
   await page.getByTestId(`loop-${row.boardKey}-${row.input}`).click();
+  await expect(page.getByTestId("latest-cut")).toHaveAttribute("data-verdict", "pass");
   await expect(page.getByTestId("latest-short")).toHaveAttribute("data-verdict", "pass");
 
   // the other tests of this loop
-  for (const e of row.expected.filter((x) => x.test !== "rest" && x.test !== "short")) {
+  for (const e of row.expected.filter((x) => !["rest", "short", "cut"].includes(x.test))) {
     await expect(await typeReading(page, e.test, meterText(num(e.nominalOhms)))).toHaveAttribute("data-verdict", "pass");
     await page.getByTestId(`save-${e.test}`).click();
     await expect(page.getByTestId(`latest-${e.test}`)).toHaveAttribute("data-verdict", "pass");
