@@ -3,7 +3,6 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { pageActor } from "@/lib/server/session";
 import { effectiveCatalogInfo, findCatalogEntry } from "@/lib/server/catalogs";
-import { ApiError } from "@/lib/server/errors";
 import { idSchema, type Catalog, type InputType } from "@/lib/catalog/schema";
 import { kindLabel } from "@/lib/catalog/kinds";
 import { serializeCatalog } from "@/lib/catalog/loader";
@@ -14,6 +13,7 @@ import { FiguresTable, InputTypeBands, RelatedList, relatedEntries } from "@/com
 import { LifeSafetyCaution, MainsCaution } from "@/components/catalog/life-safety-caution";
 import { OriginBadge } from "@/components/catalog/origin-badge";
 import { isLifeSafety } from "@/components/catalog/catalog-words";
+import { orNotFound } from "@/lib/server/page-load";
 
 export const metadata: Metadata = { title: "Catalog entry" };
 
@@ -23,10 +23,7 @@ export default async function CatalogEntryPage({ params }: { params: Promise<{ e
   if (!allowed) return <Refusal reason={reason} />;
   const id = idSchema.safeParse(entryId);
   if (!id.success) notFound();
-  const found = await findCatalogEntry(actor.organisationId, id.data).catch((e) => {
-    if (e instanceof ApiError && e.status === 404) notFound();
-    throw e;
-  });
+  const found = await orNotFound(findCatalogEntry(actor.organisationId, id.data));
   const { catalog } = await effectiveCatalogInfo(actor.organisationId);
   const { kind, entry } = found;
   const related = relatedEntries(catalog, kind, entry);

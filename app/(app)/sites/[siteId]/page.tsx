@@ -2,11 +2,11 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { pageActor } from "@/lib/server/session";
 import { getSite } from "@/lib/server/sites";
-import { ApiError } from "@/lib/server/errors";
 import { idParam } from "@/lib/server/route";
 import { PageHeader } from "@/components/ui/page-header";
 import { Refusal } from "@/components/ui/refusal";
 import { Card } from "@/components/ui/card";
+import { orNotFound } from "@/lib/server/page-load";
 
 export default async function SitePage({ params }: { params: Promise<{ siteId: string }> }) {
   const { siteId } = await params;
@@ -14,10 +14,7 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
   if (!allowed) return <Refusal reason={reason} />;
   const id = idParam.safeParse(siteId);
   if (!id.success) notFound();
-  const site = await getSite(actor, id.data).catch((e) => {
-    if (e instanceof ApiError && e.status === 404) notFound();
-    throw e;
-  });
+  const site = await orNotFound(getSite(actor, id.data));
   return (
     <>
       <PageHeader

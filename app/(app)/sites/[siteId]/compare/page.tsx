@@ -17,6 +17,7 @@ import { severityRank } from "@/lib/findings";
 import { PageHeader } from "@/components/ui/page-header";
 import { Refusal } from "@/components/ui/refusal";
 import { CompareView } from "@/components/compare/compare-view";
+import { orNotFound } from "@/lib/server/page-load";
 
 export const metadata: Metadata = { title: "Compare layouts" };
 
@@ -27,10 +28,7 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
   if (!allowed) return <Refusal reason={reason} />;
   const sid = idParam.safeParse(siteId);
   if (!sid.success) notFound();
-  const site = await getSite(actor, sid.data).catch((e) => {
-    if (e instanceof ApiError && e.status === 404) notFound();
-    throw e;
-  });
+  const site = await orNotFound(getSite(actor, sid.data));
   const layouts = await listLayouts(actor, site.id);
   const raw = (typeof ids === "string" ? ids : "").split(",").map((s) => s.trim()).filter(Boolean).map(Number);
   let comparison: ComparisonView | null = null;

@@ -5,12 +5,12 @@ import { pageActor } from "@/lib/server/session";
 import { getSite } from "@/lib/server/sites";
 import { listLayouts } from "@/lib/server/layouts";
 import { catalogFor, loadSchedule } from "@/lib/server/schedules";
-import { ApiError } from "@/lib/server/errors";
 import { idParam } from "@/lib/server/route";
 import { can } from "@/lib/auth/permissions";
 import { PageHeader } from "@/components/ui/page-header";
 import { Refusal } from "@/components/ui/refusal";
 import { LayoutsOverview } from "@/components/editor/layouts-overview";
+import { orNotFound } from "@/lib/server/page-load";
 
 export const metadata: Metadata = { title: "Layouts" };
 
@@ -20,10 +20,7 @@ export default async function LayoutsPage({ params }: { params: Promise<{ siteId
   if (!allowed) return <Refusal reason={reason} />;
   const id = idParam.safeParse(siteId);
   if (!id.success) notFound();
-  const site = await getSite(actor, id.data).catch((e) => {
-    if (e instanceof ApiError && e.status === 404) notFound();
-    throw e;
-  });
+  const site = await orNotFound(getSite(actor, id.data));
   const [layouts, catalog, schedule] = await Promise.all([listLayouts(actor, site.id), catalogFor(actor.organisationId), loadSchedule(site.id)]);
   const panels = catalog.panels.map((p) => ({ id: p.id, name: p.name, inputs: p.onboardInputs.count, maxZones: p.maxZones, listPrice: p.listPrice }));
   return (

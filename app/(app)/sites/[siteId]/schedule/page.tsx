@@ -4,13 +4,13 @@ import { notFound } from "next/navigation";
 import { pageActor } from "@/lib/server/session";
 import { getSite } from "@/lib/server/sites";
 import { catalogFor, loadSchedule } from "@/lib/server/schedules";
-import { ApiError } from "@/lib/server/errors";
 import { idParam } from "@/lib/server/route";
 import { can } from "@/lib/auth/permissions";
 import { PageHeader } from "@/components/ui/page-header";
 import { Refusal } from "@/components/ui/refusal";
 import { ScheduleManager } from "@/components/schedule/schedule-manager";
 import { FireCaution } from "@/components/editor/fire-caution";
+import { orNotFound } from "@/lib/server/page-load";
 
 export const metadata: Metadata = { title: "Device schedule" };
 
@@ -20,10 +20,7 @@ export default async function SchedulePage({ params }: { params: Promise<{ siteI
   if (!allowed) return <Refusal reason={reason} />;
   const id = idParam.safeParse(siteId);
   if (!id.success) notFound();
-  const site = await getSite(actor, id.data).catch((e) => {
-    if (e instanceof ApiError && e.status === 404) notFound();
-    throw e;
-  });
+  const site = await orNotFound(getSite(actor, id.data));
   const [schedule, catalog] = await Promise.all([loadSchedule(site.id), catalogFor(actor.organisationId)]);
   const types = catalog.detectors.map((d) => ({ id: d.id, name: d.name, category: d.category, lifeSafety: d.lifeSafety || d.category === "smoke" || d.category === "heat" }));
   const fireIds = new Set(types.filter((t) => t.lifeSafety).map((t) => t.id));

@@ -2,12 +2,12 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { pageActor } from "@/lib/server/session";
 import { loadLayoutForEditor } from "@/lib/server/layouts";
-import { ApiError } from "@/lib/server/errors";
 import { idParam } from "@/lib/server/route";
 import { can, refusal } from "@/lib/auth/permissions";
 import { Refusal } from "@/components/ui/refusal";
 import { ReviewedEditor } from "@/components/review/reviewed-editor";
 import { findLayoutForReview } from "@/lib/server/sheets";
+import { orNotFound } from "@/lib/server/page-load";
 
 export const metadata: Metadata = { title: "Layout editor" };
 
@@ -18,10 +18,7 @@ export default async function LayoutEditorPage({ params }: { params: Promise<{ s
   const sid = idParam.safeParse(siteId);
   const lid = idParam.safeParse(layoutId);
   if (!sid.success || !lid.success) notFound();
-  const data = await loadLayoutForEditor(actor, lid.data).catch((e) => {
-    if (e instanceof ApiError && e.status === 404) notFound();
-    throw e;
-  });
+  const data = await orNotFound(loadLayoutForEditor(actor, lid.data));
   if (data.site.id !== sid.data) notFound();
   const canWrite = can(actor.role, "layout:write");
   const { review } = await findLayoutForReview(actor, data.layout.id);

@@ -4,13 +4,13 @@ import { pageActor } from "@/lib/server/session";
 import { getCommissioning } from "@/lib/server/commissioning";
 import { findLayoutForReview, getTerminalSheet } from "@/lib/server/sheets";
 import { catalogFor } from "@/lib/server/schedules";
-import { ApiError } from "@/lib/server/errors";
 import { idParam } from "@/lib/server/route";
 import { can, refusal } from "@/lib/auth/permissions";
 import { usualValuesOf } from "@/lib/commissioning/diagnose";
 import { Refusal } from "@/components/ui/refusal";
 import { LayoutTabs } from "@/components/review/layout-tabs";
 import { CommissioningApp } from "@/components/commissioning/commissioning-app";
+import { orNotFound } from "@/lib/server/page-load";
 
 export const metadata: Metadata = { title: "Commissioning" };
 
@@ -21,10 +21,7 @@ export default async function CommissioningPage({ params }: { params: Promise<{ 
   const sid = idParam.safeParse(siteId);
   const lid = idParam.safeParse(layoutId);
   if (!sid.success || !lid.success) notFound();
-  const ref = await findLayoutForReview(actor, lid.data).catch((e) => {
-    if (e instanceof ApiError && e.status === 404) notFound();
-    throw e;
-  });
+  const ref = await orNotFound(findLayoutForReview(actor, lid.data));
   if (ref.layout.siteId !== sid.data) notFound();
   const view = await getCommissioning(actor, lid.data);
   const [sheet, catalog] = await Promise.all([view.revision === null ? null : getTerminalSheet(actor, lid.data, { revision: view.revision }), catalogFor(actor.organisationId)]);

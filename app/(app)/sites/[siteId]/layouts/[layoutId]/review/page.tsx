@@ -5,7 +5,7 @@ import { getReview } from "@/lib/server/review";
 import { getLayout } from "@/lib/server/layouts";
 import { getTerminalSheet } from "@/lib/server/sheets";
 import { getSite } from "@/lib/server/sites";
-import { ApiError } from "@/lib/server/errors";
+import { orNotFound } from "@/lib/server/page-load";
 import { idParam } from "@/lib/server/route";
 import { can } from "@/lib/auth/permissions";
 import { Refusal } from "@/components/ui/refusal";
@@ -14,11 +14,6 @@ import { ReviewPanel } from "@/components/review/review-panel";
 
 export const metadata: Metadata = { title: "Review" };
 
-const missing = (e: unknown) => {
-  if (e instanceof ApiError && e.status === 404) notFound();
-  throw e;
-};
-
 export default async function ReviewPage({ params }: { params: Promise<{ siteId: string; layoutId: string }> }) {
   const { siteId, layoutId } = await params;
   const { actor, allowed, reason } = await pageActor("layout:read", `/sites/${siteId}/layouts/${layoutId}/review`);
@@ -26,7 +21,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ siteId:
   const sid = idParam.safeParse(siteId);
   const lid = idParam.safeParse(layoutId);
   if (!sid.success || !lid.success) notFound();
-  const view = await getReview(actor, lid.data).catch(missing);
+  const view = await orNotFound(getReview(actor, lid.data));
   if (view.siteId !== sid.data) notFound();
   const [site, current, sheet] = await Promise.all([getSite(actor, view.siteId), getLayout(actor, view.layoutId), getTerminalSheet(actor, view.layoutId, { revision: view.review.currentRevision })]);
   const s = current.layout.summary;

@@ -3,12 +3,12 @@ import { notFound } from "next/navigation";
 import { pageActor } from "@/lib/server/session";
 import { getTerminalSheet } from "@/lib/server/sheets";
 import { layoutInstaller } from "@/lib/server/send-sheet";
-import { ApiError } from "@/lib/server/errors";
 import { idParam } from "@/lib/server/route";
 import { can, refusal } from "@/lib/auth/permissions";
 import { Refusal } from "@/components/ui/refusal";
 import { LayoutTabs } from "@/components/review/layout-tabs";
 import { TerminalSheetView } from "@/components/sheet/terminal-sheet-view";
+import { orNotFound } from "@/lib/server/page-load";
 
 export const metadata: Metadata = { title: "Terminal sheet" };
 
@@ -21,10 +21,7 @@ export default async function SheetPage({ params, searchParams }: { params: Prom
   const lid = idParam.safeParse(layoutId);
   const rev = revision === undefined ? undefined : idParam.safeParse(revision);
   if (!sid.success || !lid.success || (rev && !rev.success)) notFound();
-  const view = await getTerminalSheet(actor, lid.data, { revision: rev?.data }).catch((e) => {
-    if (e instanceof ApiError && e.status === 404) notFound();
-    throw e;
-  });
+  const view = await orNotFound(getTerminalSheet(actor, lid.data, { revision: rev?.data }));
   if (view.siteId !== sid.data) notFound();
   const installer = await layoutInstaller(actor, view.layoutId);
   const canSend = can(actor.role, "sheet:send");
