@@ -44,7 +44,7 @@ beforeAll(async () => {
 afterAll(() => {
   server?.stop();
   try {
-    db("up"); // leave the private instance running for the next run (it is started once per machine)
+    db("down"); // the private instance belongs to this test alone; its data folder is kept for the next run
   } catch {
     // reported by the test itself
   }
