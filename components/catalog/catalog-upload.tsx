@@ -36,26 +36,8 @@ export function DiffView({ diff }: { diff: CatalogDiff }) {
   if (empty) return <p className="text-sm">No change against the catalog in use.</p>;
   return (
     <div className="grid gap-4 text-sm sm:grid-cols-3" data-testid="catalog-diff">
-      <div>
-        <h4 className="font-semibold text-signal">Added ({diff.added.length})</h4>
-        <ul className="mt-1 space-y-1" data-testid="diff-added">
-          {diff.added.map((e) => (
-            <li key={`${e.kind}:${e.id}`}>
-              <span className="text-slate-500">{kindLabel[e.kind]}</span> <code className="font-mono">{e.id}</code>
-            </li>
-          ))}
-        </ul>
-      </div>
-      <div>
-        <h4 className="font-semibold text-fault">Removed ({diff.removed.length})</h4>
-        <ul className="mt-1 space-y-1" data-testid="diff-removed">
-          {diff.removed.map((e) => (
-            <li key={`${e.kind}:${e.id}`}>
-              <span className="text-slate-500">{kindLabel[e.kind]}</span> <code className="font-mono">{e.id}</code>
-            </li>
-          ))}
-        </ul>
-      </div>
+      <DiffColumn title="Added" tone="text-signal" testId="diff-added" entries={diff.added} />
+      <DiffColumn title="Removed" tone="text-fault" testId="diff-removed" entries={diff.removed} />
       <div>
         <h4 className="font-semibold text-warn">Changed ({diff.changed.length})</h4>
         <ul className="mt-1 space-y-1" data-testid="diff-changed">
@@ -213,6 +195,23 @@ export function CatalogUploadForm({ maxBytes }: { maxBytes: number }) {
           </div>
         ) : null}
       </div>
+    </div>
+  );
+}
+
+function DiffColumn({ title, tone, testId, entries }: { title: string; tone: string; testId: string; entries: { kind: keyof typeof kindLabel; id: string }[] }) {
+  return (
+    <div>
+      <h4 className={`font-semibold ${tone}`}>
+        {title} ({entries.length})
+      </h4>
+      <ul className="mt-1 space-y-1" data-testid={testId}>
+        {entries.map((e) => (
+          <li key={`${e.kind}:${e.id}`}>
+            <span className="text-slate-500">{kindLabel[e.kind]}</span> <code className="font-mono">{e.id}</code>
+          </li>
+        ))}
+      </ul>
     </div>
   );
 }
