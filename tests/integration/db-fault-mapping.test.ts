@@ -32,18 +32,23 @@ async function mapped(e: unknown) {
 
 describe("database errors through the route helper", () => {
   it("a connection killed in the middle of a query (as at a server shutdown) answers 503", async () => {
-    const error = await sequelize
-      .transaction(async (transaction) => {
-        const [[row]] = (await sequelize.query("SELECT CONNECTION_ID() AS id", { transaction })) as [{ id: number }[], unknown];
-        const sleeping = sequelize.query("SELECT SLEEP(5)", { transaction });
-        await new Promise((r) => setTimeout(r, 200));
-        await killer.query(`KILL CONNECTION ${Number(row.id)}`);
-        await sleeping;
-      })
-      .then(
+    // An unmanaged transaction: its rollback on the dead connection fails too, and is caught here.
+    const transaction = await sequelize.transaction();
+    let error: unknown = null;
+    try {
+      const [[row]] = (await sequelize.query("SELECT CONNECTION_ID() AS id", { transaction })) as [{ id: number }[], unknown];
+      // the handler is attached at once: the query fails while the KILL is still being sent
+      const sleeping = sequelize.query("SELECT SLEEP(5)", { transaction }).then(
         () => null,
         (e: unknown) => e,
       );
+      await new Promise((r) => setTimeout(r, 200));
+      await killer.query(`KILL CONNECTION ${Number(row.id)}`);
+      error = await sleeping;
+    } catch (e) {
+      error = e;
+    }
+    await transaction.rollback().catch(() => undefined);
     expect(error, "the killed query failed").not.toBeNull();
     console.log(`killed mid-query: ${(error as { name?: string }).name} ${(error as { original?: { code?: string } }).original?.code ?? ""}`);
     const r = await mapped(error);
