@@ -6,6 +6,7 @@ import "./globals.css";
 export const metadata: Metadata = {
   title: { default: "Loopwright", template: "%s · Loopwright" },
   description: "Design, check and commission supervised alarm loops.",
+  icons: { icon: "/loopwright-mark.svg" },
 };
 
 export default function RootLayout({ children }: { children: ReactNode }) {

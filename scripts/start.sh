@@ -22,7 +22,7 @@ export_s3_env "$S3_PORT"
 bash scripts/s3-sink.sh start "$S3_PORT"
 
 # Rebuild only when a source file is newer than the last build.
-if [ ! -f .next/BUILD_ID ] || [ -n "$(git ls-files -z 2>/dev/null | xargs -0 -r find 2>/dev/null -newer .next/BUILD_ID -print -quit)" ]; then
+if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib catalog models fonts public instrumentation.ts next.config.mjs postcss.config.mjs package-lock.json -newer .next/BUILD_ID -type f -print -quit 2>/dev/null)" ]; then
   npx next build
 fi
 
