@@ -286,6 +286,17 @@ test("the installer commissions the loops: a resistor at the panel end is diagno
   page = await context.newPage();
   await page.setViewportSize({ width: 390, height: 844 });
   await page.goto(`/sites/${siteId}/layouts/${chosen.id}/commissioning`);
+  // the kept reading reaches the server from this visit; the page then shows it (a reload gives the server's view)
+  await expect
+    .poll(
+      async () => {
+        const body = (await (await page.request.get(`/api/layouts/${chosen.id}/commissioning`)).json()) as { readings: { boardKey: string; input: number; test: string; verdict: string }[] };
+        return body.readings.some((r) => r.boardKey === row.boardKey && r.input === row.input && r.test === "cut" && r.verdict === "pass");
+      },
+      { timeout: 15_000 },
+    )
+    .toBe(true);
+  await page.reload();
   await expect(page.getByTestId("queue")).toHaveAttribute("data-count", "0");
   await page.getByTestId(`board-${row.boardKey}`).click();
   await page.getByTestId(`loop-${row.boardKey}-${row.input}`).click();
