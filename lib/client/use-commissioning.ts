@@ -1,0 +1,17 @@
+import useSWR from "swr";
+import type { CommissioningView } from "@/lib/server/commissioning";
+import { fetcher } from "@/lib/client/fetcher";
+import { reviveLoopJson } from "@/lib/client/revive-loop-json";
+
+export const commissioningKey = (layoutId: number) => `/api/layouts/${layoutId}/commissioning`;
+
+const fetchView = async (url: string) => reviveLoopJson<CommissioningView>(await fetcher<unknown>(url));
+
+/**
+ * A layout's commissioning: progress, readings and photos of the approved revision. `initial` is what the server
+ * page loaded; the screen updates the copy itself after each write, so it is not fetched again on mount or focus.
+ */
+export function useCommissioning(layoutId: number | null, initial?: CommissioningView) {
+  const swr = useSWR<CommissioningView>(layoutId == null ? null : commissioningKey(layoutId), fetchView, { fallbackData: initial, revalidateOnFocus: false, revalidateIfStale: false });
+  return { ...swr, view: swr.data ?? initial ?? null };
+}
