@@ -9,9 +9,10 @@ const fetchView = async (url: string) => reviveLoopJson<CommissioningView>(await
 
 /**
  * A layout's commissioning: progress, readings and photos of the approved revision. `initial` is what the server
- * page loaded; the screen updates the copy itself after each write, so it is not fetched again on mount or focus.
+ * page loaded, shown at once; the copy is fetched again on mount (a cached copy may be older than the page) and
+ * updated by the screen itself after each write, not on focus.
  */
 export function useCommissioning(layoutId: number | null, initial?: CommissioningView) {
-  const swr = useSWR<CommissioningView>(layoutId == null ? null : commissioningKey(layoutId), fetchView, { fallbackData: initial, revalidateOnFocus: false, revalidateIfStale: false });
+  const swr = useSWR<CommissioningView>(layoutId == null ? null : commissioningKey(layoutId), fetchView, { fallbackData: initial, revalidateOnFocus: false });
   return { ...swr, view: swr.data ?? initial ?? null };
 }
