@@ -4,12 +4,12 @@ import { z } from "zod";
 import { catalogFileSchema, idSchema, inputTypeSchema, reportSchema } from "@/lib/catalog/schema";
 import { analyzeRequestSchema, inputTypeRefSchema, loopSpecSchema } from "@/lib/loop";
 import { siteInputSchema, siteUpdateSchema } from "@/lib/sites/site-schema";
-import { acceptSchema, inviteSchema, roleChangeSchema } from "@/lib/server/members";
+import { acceptSchema, inviteSchema, roleChangeSchema } from "@/lib/members/member-schema";
 import { roles } from "@/lib/auth/permissions";
 import { layoutDocumentSchema } from "@/lib/layout/schema";
 import { bulkEditPatchSchema, createDetectorFormSchema, updateDetectorFormSchema } from "@/lib/schedule/schema";
-import { createLayoutSchema, restoreSchema, saveLayoutSchema, suggestRequestSchema } from "@/lib/server/layouts";
-import { deleteDetectorsSchema, importRequestSchema } from "@/lib/server/schedules";
+import { createLayoutSchema, restoreSchema, saveLayoutSchema, suggestRequestSchema } from "@/lib/layout/layout-request-schema";
+import { deleteDetectorsSchema, importRequestSchema } from "@/lib/schedule/schedule-request-schema";
 import { findingSchema, loopAnalysisJsonSchema, readingJsonSchema, resistorUseSchema } from "./loop-analysis-schema";
 
 export type JsonSchema = Record<string, unknown>;
