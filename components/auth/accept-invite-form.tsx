@@ -1,8 +1,19 @@
 "use client";
 
 import { useState } from "react";
+import { acceptSchema } from "@/lib/members/member-schema";
+import { describeError, FetchError, sendJson } from "@/lib/client/fetcher";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
+
+const FIELDS = ["name", "password"];
+
+/** The issues about the form's fields, keyed by field (several joined), for the line under each field. */
+function byField(issues: { path: string; message: string }[]): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const i of issues.filter((i) => FIELDS.includes(i.path))) out[i.path] = out[i.path] ? `${out[i.path]}; ${i.message}` : i.message;
+  return out;
+}
 
 export function AcceptInviteForm({ token }: { token: string }) {
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -12,13 +23,22 @@ export function AcceptInviteForm({ token }: { token: string }) {
   async function onSubmit(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
-    const res = await fetch("/api/invitations/accept", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ token, name: form.get("name"), password: form.get("password") }) });
-    const json = await res.json();
-    if (res.ok) return setDone(true);
-    setError(json.error);
-    const byField: Record<string, string> = {};
-    for (const i of (json.issues ?? []) as { path: string; message: string }[]) byField[i.path] = byField[i.path] ? `${byField[i.path]}; ${i.message}` : i.message;
-    setErrors(byField);
+    const parsed = acceptSchema.safeParse({ token, name: form.get("name"), password: form.get("password") });
+    if (!parsed.success) {
+      const fields = byField(parsed.error.issues.map((i) => ({ path: i.path.map(String).join("."), message: i.message })));
+      setErrors(fields);
+      // the token is not a field: a mangled link is said in words
+      setError(Object.keys(fields).length ? null : "This invitation link is not valid. Open the link from the e-mail again.");
+      return;
+    }
+    try {
+      await sendJson("/api/invitations/accept", "POST", parsed.data);
+      setDone(true);
+    } catch (err) {
+      const fields = byField(err instanceof FetchError ? err.issues : []);
+      setErrors(fields);
+      setError(Object.keys(fields).length ? null : describeError(err));
+    }
   }
 
   if (done)
@@ -31,7 +51,7 @@ export function AcceptInviteForm({ token }: { token: string }) {
     <form onSubmit={onSubmit} className="space-y-3">
       <Field label="Your name" name="name" required error={errors.name} />
       <Field label="Password" name="password" type="password" autoComplete="new-password" required error={errors.password} hint="At least 10 characters, letters mixed with digits or symbols." />
-      {error && !Object.keys(errors).length ? <p role="alert" className="text-sm text-fault">{error}</p> : null}
+      {error ? <p role="alert" className="text-sm text-fault">{error}</p> : null}
       <Button type="submit">Set password and join</Button>
     </form>
   );

@@ -3,12 +3,13 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import type { ReviewStep } from "@/lib/review/review-schema";
+import { commentSchema, reviewActionSchema, type ReviewStep } from "@/lib/review/review-schema";
 import { REVIEW_STATES, REVIEW_STATE_WORDS } from "@/lib/review/state-machine";
 import type { CommentView, ReviewView } from "@/lib/server/review";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
-import { HttpError, sendJson } from "@/components/review/http";
+import { describeError, FetchError, sendJson } from "@/lib/client/fetcher";
+import { useReview } from "@/lib/client/use-review";
 import { DECISION_WORDS, STEP_HINTS, STEP_LABELS, targetText, when } from "@/components/review/review-words";
 
 export interface ReviewSummary {
@@ -33,7 +34,8 @@ const SEVERITY_STYLE = { error: "text-fault", warning: "text-warn", note: "text-
 
 export function ReviewPanel({ initial, summary, boards, canComment, lifeSafety }: ReviewPanelProps) {
   const router = useRouter();
-  const [view, setView] = useState(initial);
+  const { data, mutate } = useReview(initial.layoutId, initial);
+  const view = data ?? initial;
   const [reason, setReason] = useState("");
   const [busy, setBusy] = useState<ReviewStep | null>(null);
   const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
@@ -46,19 +48,24 @@ export function ReviewPanel({ initial, summary, boards, canComment, lifeSafety }
       setMessage({ kind: "error", text: "Say why it goes back to draft (in the box below), so its author knows what to change." });
       return;
     }
+    const body = reviewActionSchema.safeParse({ action, revision: view.review.currentRevision, ...(reason.trim() ? { reason: reason.trim() } : {}) });
+    if (!body.success) {
+      setMessage({ kind: "error", text: body.error.issues.map((i) => i.message).join("; ") });
+      return;
+    }
     setBusy(action);
     setMessage(null);
     try {
       const next =
         action === "commission"
           ? await sendJson<ReviewView>(`/api/layouts/${view.layoutId}/commissioning/complete`, "POST")
-          : await sendJson<ReviewView>(`/api/layouts/${view.layoutId}/review`, "POST", { action, revision: view.review.currentRevision, ...(reason.trim() ? { reason: reason.trim() } : {}) });
-      setView(next);
+          : await sendJson<ReviewView>(`/api/layouts/${view.layoutId}/review`, "POST", body.data);
+      await mutate(next, { revalidate: false });
       setReason("");
       setMessage({ kind: "ok", text: `Revision ${next.review.currentRevision} is now ${REVIEW_STATE_WORDS[next.review.state]}.` });
       router.refresh();
     } catch (e) {
-      setMessage({ kind: "error", text: e instanceof HttpError ? e.message : "The server could not be reached; nothing was changed. Try again." });
+      setMessage({ kind: "error", text: e instanceof FetchError && e.unreachable ? "The server could not be reached; nothing was changed. Try again." : describeError(e) });
     } finally {
       setBusy(null);
     }
@@ -177,7 +184,7 @@ export function ReviewPanel({ initial, summary, boards, canComment, lifeSafety }
       </div>
 
       <div className="flex flex-col gap-4">
-        <Comments layoutId={view.layoutId} comments={view.comments} boards={boards} boardName={boardName} canComment={canComment} onAdded={(c) => setView((v) => ({ ...v, comments: [...v.comments, c] }))} />
+        <Comments layoutId={view.layoutId} comments={view.comments} boards={boards} boardName={boardName} canComment={canComment} onAdded={(c) => mutate((v) => (v ? { ...v, comments: [...v.comments, c] } : v), { revalidate: false })} />
         <Card>
           <h2 className="text-lg font-semibold">Decisions</h2>
           {view.decisions.length === 0 ? <p className="mt-2 text-sm text-slate-600">No review steps yet.</p> : null}
@@ -218,6 +225,7 @@ function Comments({
   const [boardKey, setBoardKey] = useState("");
   const [input, setInput] = useState("");
   const [error, setError] = useState<string | null>(null);
+  const [bodyError, setBodyError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const board = boards.find((b) => b.key === boardKey);
 
@@ -226,12 +234,20 @@ function Comments({
     setBusy(true);
     setError(null);
     const target = !boardKey ? undefined : input ? { kind: "input", boardKey, input: Number(input) } : { kind: "board", boardKey };
+    const parsed = commentSchema.safeParse({ body, ...(target ? { target } : {}) });
+    setBodyError(parsed.success ? null : parsed.error.issues.filter((i) => i.path[0] === "body").map((i) => i.message).join("; ") || null);
+    if (!parsed.success) {
+      const other = parsed.error.issues.filter((i) => i.path[0] !== "body");
+      if (other.length) setError(other.map((i) => i.message).join("; "));
+      setBusy(false);
+      return;
+    }
     try {
-      const r = await sendJson<{ comment: CommentView }>(`/api/layouts/${layoutId}/comments`, "POST", { body, ...(target ? { target } : {}) });
+      const r = await sendJson<{ comment: CommentView }>(`/api/layouts/${layoutId}/comments`, "POST", parsed.data);
       onAdded(r.comment);
       setBody("");
     } catch (err) {
-      setError(err instanceof HttpError ? err.message : "The server could not be reached; the comment was not saved.");
+      setError(err instanceof FetchError && err.unreachable ? "The server could not be reached; the comment was not saved." : describeError(err));
     } finally {
       setBusy(false);
     }
@@ -259,7 +275,16 @@ function Comments({
         <form onSubmit={add} className="mt-3 flex flex-col gap-2 text-sm">
           <label className="block">
             <span className="font-medium">Add a comment</span>
-            <textarea required maxLength={4000} rows={3} className="mt-1 block w-full rounded-md border border-line bg-white px-3 py-2" value={body} onChange={(e) => setBody(e.target.value)} />
+            <textarea
+              required
+              maxLength={4000}
+              rows={3}
+              aria-invalid={!!bodyError}
+              className={`mt-1 block w-full rounded-md border bg-white px-3 py-2 ${bodyError ? "border-fault" : "border-line"}`}
+              value={body}
+              onChange={(e) => setBody(e.target.value)}
+            />
+            {bodyError ? <span className="mt-1 block text-xs text-fault">{bodyError}</span> : null}
           </label>
           <div className="flex flex-wrap items-end gap-2">
             <label className="block">

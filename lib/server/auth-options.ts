@@ -2,14 +2,12 @@ import "server-only";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import bcrypt from "bcryptjs";
-import { z } from "zod";
 import { db } from "./db";
 import { env } from "./env";
 import { Membership, User } from "@/models";
 import { clearFailures, recordFailure, waitSeconds } from "./throttle";
 import type { Role } from "@/lib/auth/permissions";
-
-const credentialsSchema = z.object({ email: z.email().max(254), password: z.string().min(1).max(200) });
+import { signInSchema } from "@/lib/auth/sign-in-schema";
 
 // Shown to the user as is (next-auth passes a thrown message through as the error).
 export const WRONG_CREDENTIALS = "That e-mail and password do not match an account.";
@@ -25,7 +23,7 @@ export function authOptions(): NextAuthOptions {
         credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
         async authorize(raw) {
           db();
-          const parsed = credentialsSchema.safeParse(raw);
+          const parsed = signInSchema.safeParse(raw);
           if (!parsed.success) throw new Error("Enter your e-mail address and password.");
           const email = parsed.data.email.toLowerCase();
           const key = `email:${email}`;

@@ -2,23 +2,18 @@ import "server-only";
 import { createHash, randomBytes } from "node:crypto";
 import bcrypt from "bcryptjs";
 import { Op } from "sequelize";
-import { z } from "zod";
 import { db } from "./db";
 import { audit } from "./audit";
 import { ApiError } from "./errors";
 import { sendMail } from "./mail";
 import { env } from "./env";
 import { Invitation, Membership, Organisation, User } from "@/models";
-import { roles, roleLabels, type Role } from "@/lib/auth/permissions";
-import { passwordSchema } from "@/lib/auth/password";
+import { roleLabels, type Role } from "@/lib/auth/permissions";
+import type { AcceptInput, InviteInput } from "@/lib/members/member-schema";
 import type { Actor } from "./session";
 
 const INVITE_DAYS = 7;
 const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
-
-export const inviteSchema = z.strictObject({ email: z.email("Enter a valid e-mail address").max(254), role: z.enum(roles) });
-export const acceptSchema = z.strictObject({ token: z.string().min(20).max(200), name: z.string().trim().min(1, "Enter your name").max(200), password: passwordSchema });
-export const roleChangeSchema = z.strictObject({ role: z.enum(roles) });
 
 export async function listMembers(organisationId: number) {
   db();
@@ -33,7 +28,7 @@ export async function listMembers(organisationId: number) {
   };
 }
 
-export async function inviteMember(actor: Actor, input: z.infer<typeof inviteSchema>) {
+export async function inviteMember(actor: Actor, input: InviteInput) {
   const sequelize = db();
   const email = input.email.toLowerCase();
   const existing = await User.findOne({ where: { email }, include: [{ model: Membership, where: { organisationId: actor.organisationId }, required: true }] });
@@ -64,7 +59,7 @@ export async function findInvitation(token: string) {
   return { email: inv.email, role: inv.role as Role, organisationName: org?.name ?? "" };
 }
 
-export async function acceptInvitation(input: z.infer<typeof acceptSchema>) {
+export async function acceptInvitation(input: AcceptInput) {
   const sequelize = db();
   return sequelize.transaction(async (transaction) => {
     const inv = await Invitation.findOne({ where: { tokenHash: hashToken(input.token) }, transaction, lock: transaction.LOCK.UPDATE });

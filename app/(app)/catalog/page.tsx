@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { pageActor } from "@/lib/server/session";
-import { effectiveCatalogInfo, entryOrigin, listUploads, MAX_UPLOAD_BYTES } from "@/lib/server/catalogs";
+import { effectiveCatalogInfo, entryOrigin, listUploads } from "@/lib/server/catalogs";
+import { MAX_UPLOAD_BYTES } from "@/lib/catalog/upload-schema";
 import { can, refusal } from "@/lib/auth/permissions";
 import { catalogSummary } from "@/lib/catalog/figures";
 import { findEntry } from "@/lib/catalog/loader";
