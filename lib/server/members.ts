@@ -3,7 +3,7 @@ import { createHash, randomBytes } from "node:crypto";
 import bcrypt from "bcryptjs";
 import { Op } from "sequelize";
 import { z } from "zod";
-import { db } from "./db";
+import { bindModels, db } from "./db";
 import { audit } from "./audit";
 import { ApiError } from "./errors";
 import { sendMail } from "./mail";
@@ -21,7 +21,7 @@ export const acceptSchema = z.strictObject({ token: z.string().min(20).max(200),
 export const roleChangeSchema = z.strictObject({ role: z.enum(roles) });
 
 export async function listMembers(organisationId: number) {
-  db();
+  bindModels();
   const rows = await Membership.findAll({ where: { organisationId }, include: [{ model: User, attributes: ["id", "name", "email"] }], order: [["id", "ASC"]] });
   const invitations = await Invitation.findAll({ where: { organisationId, acceptedAt: null, expiresAt: { [Op.gt]: new Date() } }, order: [["id", "DESC"]] });
   return {
@@ -57,7 +57,7 @@ export async function inviteMember(actor: Actor, input: z.infer<typeof inviteSch
 }
 
 export async function findInvitation(token: string) {
-  db();
+  bindModels();
   const inv = await Invitation.findOne({ where: { tokenHash: hashToken(token) } });
   if (!inv || inv.acceptedAt || inv.expiresAt < new Date()) return null;
   const org = await Organisation.findByPk(inv.organisationId);
