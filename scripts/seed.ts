@@ -3,8 +3,8 @@ import { Sequelize } from "sequelize";
 import * as mariadb from "mariadb";
 import bcrypt from "bcryptjs";
 import { initModels, Organisation } from "../models";
-import { seedDemo } from "../lib/demo/seed-demo";
-import { seedRivalOrganisation } from "../lib/demo/seed-rival";
+import { seedDemo } from "./demo/seed-demo";
+import { seedRivalOrganisation } from "./demo/seed-rival";
 
 const url = process.env.DATABASE_URL;
 if (!url) throw new Error("DATABASE_URL is not set");

@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { Simulation } from "eecircuit-engine";
 import { analyzeLoop } from "./analyze-loop";
-import { buildLoopNetlist, ohmsFromResult, type SpiceCase } from "./spice-netlist";
+import { buildLoopNetlist, ohmsFromResult, refereeConductorOhms, type SpiceCase } from "./spice-netlist";
 import { loopArb } from "./test-support/loop-arbitraries";
 import { testInputType } from "./test-support/input-types";
 import type { LoopSpec } from "./types";
@@ -31,6 +31,16 @@ function agree(engine: number, spice: number): boolean {
   if (engine === Infinity) return spice > 1e9; // an open loop: only the 1e12 Ω stand-ins carry current
   return Math.abs(engine - spice) <= 1e-4 * Math.abs(engine); // 0.01 %
 }
+
+describe("the referee's own conductor resistance", () => {
+  it("matches copper wire tables, not the engine", () => {
+    // from memory: copper wire tables give 18 AWG solid annealed copper as 6.385 Ω per 1000 ft at 20 °C
+    expect(refereeConductorOhms({ awg: 18 }, 304.8, 20)).toBeCloseTo(6.385, 3);
+    // IEC 60028: 1/58 Ω·mm²/m, so 58 m of 1 mm² is 1 Ω at 20 °C and 1 + 0.00393 × 30 at 50 °C
+    expect(refereeConductorOhms({ mm2: 1 }, 58, 20)).toBeCloseTo(1, 12);
+    expect(refereeConductorOhms({ mm2: 1 }, 58, 50)).toBeCloseTo(1.1179, 12);
+  });
+});
 
 describe("loop readings against ngspice", () => {
   it("a 5.6 kΩ end-of-line loop: hand-built check of the netlist and reader", async () => {

@@ -2,10 +2,11 @@
 // is its own component on named nodes, wired as an installer would. A DC operating point with 1 A driven
 // into the input terminals gives the reading as the terminal voltage (read directly, so no cancellation
 // when tiny conductors sit next to an open). Pure string building; the simulator is run elsewhere.
+// The conductor resistance is worked out here from the published figures, not taken from ./cable, so a wrong
+// coefficient in the engine shows up as a disagreement instead of being copied into both sides.
 import type { InputType } from "@/lib/catalog/schema";
-import { conductorOhms } from "./cable";
 import { fittedValues } from "./loop-problems";
-import type { DetectorState, Fault, LoopSpec } from "./types";
+import type { CableGauge, DetectorState, Fault, LoopSpec } from "./types";
 
 /** An open contact or cut conductor; large enough to vanish beside any loop, small enough to keep the matrix sane. */
 export const SPICE_OPEN_OHMS = 1e12;
@@ -17,6 +18,23 @@ export interface SpiceCase {
   tempC: number;
   /** Multiplier on every resistor's marked value (1 − tol for the low end, 1 + tol for the high end). */
   partFactor: number;
+}
+
+/** IEC 60028 annealed copper at 20 °C: 1/58 Ω·mm²/m, i.e. 1.7241e-8 Ω·m. */
+const ANNEALED_COPPER_OHM_M = 1e-6 / 58;
+/** IEC 60028: temperature coefficient of annealed copper's resistance at 20 °C, per kelvin. */
+const ANNEALED_COPPER_ALPHA_PER_K = 0.00393;
+
+/** Cross-section in m²: ASTM B258 gives the AWG diameter d = 0.127 mm × 92^((36 − n)/39). */
+function crossSectionM2(gauge: CableGauge): number {
+  if ("mm2" in gauge) return gauge.mm2 * 1e-6;
+  const dM = 0.127e-3 * Math.pow(92, (36 - gauge.awg) / 39);
+  return (Math.PI * dM * dM) / 4;
+}
+
+/** One conductor: R = ρ L / A at 20 °C, scaled by 1 + α (T − 20 °C). */
+export function refereeConductorOhms(gauge: CableGauge, lengthM: number, tempC: number): number {
+  return ((ANNEALED_COPPER_OHM_M * lengthM) / crossSectionM2(gauge)) * (1 + ANNEALED_COPPER_ALPHA_PER_K * (tempC - 20));
 }
 
 class Net {
@@ -37,7 +55,7 @@ class Net {
 /** Appends one case's network, driven by its own 1 A source into `<prefix>pp` (returned) from ground. */
 function addCase(net: Net, p: string, loop: LoopSpec, inputType: InputType | undefined, c: SpiceCase): string {
   const f = fittedValues(loop, inputType);
-  const rc = conductorOhms(loop.cable.gauge, loop.cable.lengthM, c.tempC);
+  const rc = refereeConductorOhms(loop.cable.gauge, loop.cable.lengthM, c.tempC);
   const rk = loop.contactOhms;
   const rsh = loop.shortOhms ?? 0;
   const R = (f.eolOhms ?? 0) * c.partFactor;

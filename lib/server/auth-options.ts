@@ -2,7 +2,7 @@ import "server-only";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import bcrypt from "bcryptjs";
-import { db } from "./db";
+import { bindModels } from "./db";
 import { env } from "./env";
 import { Membership, User } from "@/models";
 import { clearFailures, recordFailure, waitSeconds } from "./throttle";
@@ -22,7 +22,7 @@ export function authOptions(): NextAuthOptions {
         name: "E-mail and password",
         credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
         async authorize(raw) {
-          db();
+          bindModels();
           const parsed = signInSchema.safeParse(raw);
           if (!parsed.success) throw new Error("Enter your e-mail address and password.");
           const email = parsed.data.email.toLowerCase();

@@ -1,7 +1,7 @@
 import "server-only";
 import { createHash } from "node:crypto";
 import type { Transaction } from "sequelize";
-import { db } from "./db";
+import { bindModels, db } from "./db";
 import { audit } from "./audit";
 import { ApiError, conflict, notFound } from "./errors";
 import type { Actor } from "./session";
@@ -183,14 +183,14 @@ const summaryAttributes = ["id", "organisationId", "version", "fileName", "sizeB
 
 /** Every stored version of the organisation's catalog file, newest first (without the text). */
 export async function listUploads(organisationId: number): Promise<CatalogUpload[]> {
-  db();
+  bindModels();
   const rows = await OrganisationCatalog.findAll({ where: { organisationId }, attributes: summaryAttributes, order: [["version", "DESC"]] });
   return describeUploads(rows);
 }
 
 /** The text of one stored version; 404 for another organisation's version, indistinguishable from a missing one. */
 export async function uploadText(organisationId: number, uploadId: number): Promise<{ fileName: string; version: number; text: string; sha256: string }> {
-  db();
+  bindModels();
   const row = await OrganisationCatalog.findOne({ where: { id: uploadId, organisationId } });
   if (!row) throw notFound("That catalog version");
   return { fileName: row.fileName, version: row.version, text: row.yamlText, sha256: row.sha256 };
@@ -245,7 +245,7 @@ const shippedInfo = (shipped: LoadedCatalog, problem: EffectiveCatalogInfo["prob
  * shared between callers through the cache: treat them as read-only.
  */
 export async function effectiveCatalogInfo(organisationId: number): Promise<EffectiveCatalogInfo> {
-  db();
+  bindModels();
   const shipped = shippedCatalog();
   const latest = await OrganisationCatalog.findOne({ where: { organisationId }, attributes: summaryAttributes, order: [["version", "DESC"]] });
   const key = latest ? `${latest.id}:${latest.sha256}` : "shipped";

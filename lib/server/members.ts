@@ -2,7 +2,7 @@ import "server-only";
 import { createHash, randomBytes } from "node:crypto";
 import bcrypt from "bcryptjs";
 import { Op } from "sequelize";
-import { db } from "./db";
+import { bindModels, db } from "./db";
 import { audit } from "./audit";
 import { ApiError } from "./errors";
 import { sendMail } from "./mail";
@@ -16,7 +16,7 @@ const INVITE_DAYS = 7;
 const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
 
 export async function listMembers(organisationId: number) {
-  db();
+  bindModels();
   const rows = await Membership.findAll({ where: { organisationId }, include: [{ model: User, attributes: ["id", "name", "email"] }], order: [["id", "ASC"]] });
   const invitations = await Invitation.findAll({ where: { organisationId, acceptedAt: null, expiresAt: { [Op.gt]: new Date() } }, order: [["id", "DESC"]] });
   return {
@@ -52,7 +52,7 @@ export async function inviteMember(actor: Actor, input: InviteInput) {
 }
 
 export async function findInvitation(token: string) {
-  db();
+  bindModels();
   const inv = await Invitation.findOne({ where: { tokenHash: hashToken(token) } });
   if (!inv || inv.acceptedAt || inv.expiresAt < new Date()) return null;
   const org = await Organisation.findByPk(inv.organisationId);

@@ -1,9 +1,9 @@
 import "server-only";
-import { db } from "./db";
+import { bindModels } from "./db";
 import { MailMessage } from "@/models";
 
 export async function listOutbox(limit = 100) {
-  db();
+  bindModels();
   const rows = await MailMessage.findAll({ order: [["id", "DESC"]], limit });
   return rows.map((m) => ({
     id: m.id,
@@ -17,7 +17,7 @@ export async function listOutbox(limit = 100) {
 
 export async function outboxAttachment(mailId: number, index: number) {
   if (!Number.isInteger(mailId) || !Number.isInteger(index)) return null;
-  db();
+  bindModels();
   const m = await MailMessage.findByPk(mailId);
   return m?.attachments[index] ?? null;
 }

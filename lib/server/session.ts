@@ -2,7 +2,7 @@ import "server-only";
 import { getServerSession } from "next-auth";
 import { redirect } from "next/navigation";
 import { authOptions } from "./auth-options";
-import { db } from "./db";
+import { bindModels } from "./db";
 import { Membership, Organisation, User } from "@/models";
 import { can, refusal, type Permission, type Role } from "@/lib/auth/permissions";
 import { ApiError } from "./errors";
@@ -23,7 +23,7 @@ export interface Actor {
 export async function currentActor(): Promise<Actor | null> {
   const session = (await getServerSession(authOptions())) as { userId?: number; organisationId?: number } | null;
   if (!session?.userId || !session.organisationId) return null;
-  db();
+  bindModels();
   const membership = await Membership.findOne({
     where: { userId: session.userId, organisationId: session.organisationId },
     include: [{ model: User, attributes: ["name", "email"] }, { model: Organisation, attributes: ["name"] }],

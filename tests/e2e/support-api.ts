@@ -4,7 +4,7 @@ import { expect, request, type APIRequestContext, type APIResponse, type Playwri
 import { randomUUID } from "node:crypto";
 import * as mariadb from "mariadb";
 import { roles, type Role } from "@/lib/auth/permissions";
-import { RIVAL_PASSWORD, rivalOrganisationName, rivalSiteName, rivalUsers } from "@/lib/demo/seed-rival";
+import { RIVAL_PASSWORD, rivalOrganisationName, rivalSiteName, rivalUsers } from "@/scripts/demo/seed-rival";
 import { scheduleCsv } from "@/tests/api-registry/routes";
 import type { Caller, DemoObjects, FilePart, Fixtures, RequestSpec } from "@/tests/api-registry/types";
 import { DEMO_PASSWORD, demo } from "./support";

@@ -2,7 +2,7 @@ import type { Transaction } from "sequelize";
 import { Area, AuditEntry, Membership, Organisation, Room, Site, User } from "@/models";
 import type { Role } from "@/lib/auth/permissions";
 import { shippedCatalog } from "@/lib/catalog/shipped";
-import { seedDemoDesign } from "@/lib/demo/seed-demo-design";
+import { seedDemoDesign } from "./seed-demo-design";
 
 // A scenario of our own: every name, address and address book entry here is invented.
 export const DEMO_PASSWORD = "loop-demo-2026";
