@@ -14,6 +14,8 @@ const PURE_FOLDERS = [
   "lib/compare",
   "lib/layout",
   "lib/loop",
+  "lib/members",
+  "lib/openapi",
   "lib/resistors",
   "lib/review",
   "lib/schedule",
