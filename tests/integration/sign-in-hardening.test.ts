@@ -34,7 +34,7 @@ describe("client address for the slow-down", () => {
 });
 
 describe("sign-in slow-down by account and by client address", () => {
-  it("slows one client that tries many accounts, without slowing anyone else", async () => {
+  it("slows one client that tries many accounts, without slowing anyone else", { timeout: 120_000 }, async () => {
     testDb();
     const { actors } = await makeOrganisation("Hardening");
     const address = freshAddress();
