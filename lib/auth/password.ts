@@ -7,6 +7,10 @@ export const MAX_PASSWORD_BYTES = 72;
 // zxcvbn scores 0–4; 3 means an estimated 10^8 to 10^10 guesses (zxcvbn-ts TimeEstimates thresholds).
 export const MIN_STRENGTH_SCORE = 3;
 
+// bcrypt cost of every stored password (2^12 rounds). Demo users use it too: sign-in compares an unknown
+// e-mail against a dummy hash of this cost, and a cheaper real hash would tell known e-mails apart by time.
+export const PASSWORD_HASH_COST = 12;
+
 export const utf8Length = (p: string) => new TextEncoder().encode(p).length;
 
 // Minimum shape: length first (it matters most), plus a mix, and not one repeated character.

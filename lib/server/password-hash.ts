@@ -1,12 +1,12 @@
 import "server-only";
 import bcrypt from "bcryptjs";
+import { PASSWORD_HASH_COST } from "@/lib/auth/password";
 
-/** bcrypt cost for every stored password (2^12 rounds). */
-export const PASSWORD_HASH_COST = 12;
+export { PASSWORD_HASH_COST };
 
 // A hash of a random password nobody knows, at the same cost: an unknown e-mail costs the same bcrypt
 // work as a known one, so the response time does not tell which e-mails have accounts.
-const DUMMY_HASH = "$2b$12$OYLnk5W7cinlMv5JAHI7ne45chtUe/ozBa5HcS9prxBHJ.bEyXofW";
+export const DUMMY_HASH = "$2b$12$OYLnk5W7cinlMv5JAHI7ne45chtUe/ozBa5HcS9prxBHJ.bEyXofW";
 
 export function hashPassword(password: string): Promise<string> {
   return bcrypt.hash(password, PASSWORD_HASH_COST);

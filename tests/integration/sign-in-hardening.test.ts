@@ -5,7 +5,8 @@ import { makeOrganisation, testDb } from "./support";
 import { Browser, installTestRequestScope, signIn } from "./auth-flow";
 import { Membership, SignInThrottle, User } from "@/models";
 import { clearFailures, clientAddress, MAX_DELAY_S, recordFailure, signInKeys, waitSeconds } from "@/lib/server/throttle";
-import { hashPassword } from "@/lib/server/password-hash";
+import bcrypt from "bcryptjs";
+import { DUMMY_HASH, hashPassword, PASSWORD_HASH_COST } from "@/lib/server/password-hash";
 import * as auth from "@/app/api/auth/[...nextauth]/route";
 
 installTestRequestScope();
@@ -92,6 +93,11 @@ describe("sign-in slow-down by account and by client address", () => {
 
 describe("the same work for unknown e-mails", () => {
   const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+
+  it("compares unknown e-mails against a dummy hash of the cost real passwords are stored with", async () => {
+    expect(bcrypt.getRounds(DUMMY_HASH)).toBe(PASSWORD_HASH_COST);
+    expect(bcrypt.getRounds(await hashPassword("gravel lantern otter 19"))).toBe(PASSWORD_HASH_COST);
+  });
 
   it("answers a wrong password for a known e-mail as fast as for an unknown one", { timeout: 180_000 }, async () => {
     testDb();
