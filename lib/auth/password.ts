@@ -26,10 +26,13 @@ export const passwordSchema = z
 /** The words of a person's name and e-mail address, which a password must not be built from. */
 export function personalWords(person: { name?: string | null; email?: string | null }): string[] {
   const words = new Set<string>();
-  const add = (text: string | null | undefined) => {
-    for (const w of (text ?? "").toLowerCase().split(/[^\p{L}\p{N}]+/u)) if (w.length >= 3) words.add(w);
-  };
+  const split = (text: string | null | undefined) => (text ?? "").toLowerCase().split(/[^\p{L}\p{N}]+/u).filter((w) => w.length >= 3);
+  const add = (text: string | null | undefined) => split(text).forEach((w) => words.add(w));
   add(person.name);
+  // The whole name as one word, in either order and with the usual separators, so "Ada-Quill-1" counts as known.
+  const nameWords = split(person.name);
+  if (nameWords.length > 1)
+    for (const order of [nameWords, [...nameWords].reverse()]) for (const sep of ["", "-", ".", "_", " "]) words.add(order.join(sep));
   if (person.email) {
     const [local, domain] = person.email.toLowerCase().split("@");
     words.add(local);

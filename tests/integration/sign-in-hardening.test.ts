@@ -3,7 +3,9 @@ import { randomUUID } from "node:crypto";
 import { Op } from "sequelize";
 import { makeOrganisation, testDb } from "./support";
 import { Browser, installTestRequestScope, signIn } from "./auth-flow";
-import { Membership, SignInThrottle, User } from "@/models";
+import { createHash } from "node:crypto";
+import { Invitation, Membership, SignInThrottle, User } from "@/models";
+import { acceptInvitation } from "@/lib/server/members";
 import { clearFailures, clientAddress, MAX_DELAY_S, recordFailure, signInKeys, waitSeconds } from "@/lib/server/throttle";
 import bcrypt from "bcryptjs";
 import { DUMMY_HASH, hashPassword, PASSWORD_HASH_COST } from "@/lib/server/password-hash";
@@ -124,5 +126,34 @@ describe("the same work for unknown e-mails", () => {
     }
     // A behaviour check, not a speed target: before, unknown e-mails answered without any bcrypt work.
     expect(Math.abs(median(times.known) - median(times.unknown))).toBeLessThan(50);
+  });
+});
+
+describe("the password rule where a password is set", () => {
+  async function invite(email: string) {
+    const { org, actors } = await makeOrganisation("Hardening");
+    const token = randomUUID() + randomUUID();
+    await Invitation.create({ organisationId: org.id, email, role: "designer", tokenHash: createHash("sha256").update(token).digest("hex"), invitedByUserId: actors.admin.userId, expiresAt: new Date(Date.now() + 864e5), acceptedAt: null });
+    return token;
+  }
+
+  it("refuses common passwords and ones built from the invitee's name or e-mail, with the reason on the password field", async () => {
+    testDb();
+    const email = `orla.fenwright.${randomUUID().slice(0, 6)}@test.example`;
+    const token = await invite(email);
+    for (const password of ["password12", "qwerty1234", "fenwright2026", "Orla-Fenwright-1"]) {
+      const e = await acceptInvitation({ token, name: "Orla Fenwright", password }).catch((x) => x);
+      expect(e).toMatchObject({ status: 422, issues: [{ path: "password", message: expect.stringMatching(/too easy to guess/) }] });
+    }
+    expect(await User.findOne({ where: { email } })).toBeNull();
+    await acceptInvitation({ token, name: "Orla Fenwright", password: "gravel lantern otter 19" });
+    expect(await User.findOne({ where: { email } })).not.toBeNull();
+  });
+
+  it("existing users keep signing in with a password the rule would now refuse (the rule applies when a password is set)", async () => {
+    testDb();
+    const { actors } = await makeOrganisation("Hardening");
+    await User.update({ passwordHash: await bcrypt.hash("password12", 4) }, { where: { id: actors.installer.userId } });
+    expect((await signIn(from(freshAddress()), auth.POST, actors.installer.email, "password12")).ok).toBe(true);
   });
 });
