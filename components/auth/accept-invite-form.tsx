@@ -15,10 +15,17 @@ function byField(issues: { path: string; message: string }[]): Record<string, st
   return out;
 }
 
-export function AcceptInviteForm({ token }: { token: string }) {
+/** The strength rule the server applies too, loaded only when the form is sent (its dictionaries are large). */
+async function strengthProblem(password: string, person: { name: string; email: string }): Promise<string | null> {
+  const rule = await import("@/lib/auth/password");
+  return rule.passwordStrengthProblem(password, person);
+}
+
+export function AcceptInviteForm({ token, email }: { token: string; email: string }) {
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState(false);
+  const [busy, setBusy] = useState(false);
 
   async function onSubmit(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
@@ -31,13 +38,22 @@ export function AcceptInviteForm({ token }: { token: string }) {
       setError(Object.keys(fields).length ? null : "This invitation link is not valid. Open the link from the e-mail again.");
       return;
     }
+    setBusy(true);
     try {
+      const problem = await strengthProblem(parsed.data.password, { name: parsed.data.name, email }).catch(() => null); // the server checks again
+      if (problem) {
+        setError(null);
+        setErrors({ password: problem });
+        return;
+      }
       await sendJson("/api/invitations/accept", "POST", parsed.data);
       setDone(true);
     } catch (err) {
       const fields = byField(err instanceof FetchError ? err.issues : []);
       setErrors(fields);
       setError(Object.keys(fields).length ? null : describeError(err));
+    } finally {
+      setBusy(false);
     }
   }
 
@@ -50,9 +66,19 @@ export function AcceptInviteForm({ token }: { token: string }) {
   return (
     <form onSubmit={onSubmit} className="space-y-3">
       <Field label="Your name" name="name" required error={errors.name} />
-      <Field label="Password" name="password" type="password" autoComplete="new-password" required error={errors.password} hint="At least 10 characters, letters mixed with digits or symbols." />
-      {error ? <p role="alert" className="text-sm text-fault">{error}</p> : null}
-      <Button type="submit">Set password and join</Button>
+      <Field
+        label="Password"
+        name="password"
+        type="password"
+        autoComplete="new-password"
+        required
+        error={errors.password}
+        hint="At least 10 characters with letters and digits or symbols, hard to guess and not built from your name or e-mail; a few unrelated words work well. At most 72 bytes."
+      />
+      {error && !Object.keys(errors).length ? <p role="alert" className="text-sm text-fault">{error}</p> : null}
+      <Button type="submit" disabled={busy}>
+        {busy ? "Checking…" : "Set password and join"}
+      </Button>
     </form>
   );
 }
