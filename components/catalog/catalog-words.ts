@@ -1,5 +1,4 @@
-import type { Catalog, CatalogKind, Report, WiringScheme } from "@/lib/catalog/schema";
-import type { CatalogEntry } from "@/lib/catalog/loader";
+import type { Report, WiringScheme } from "@/lib/catalog/schema";
 import type { EntryOrigin } from "@/lib/server/catalogs";
 
 // Words the catalog screens use for scheme and report values (GLOSSARY.md terms).
@@ -35,15 +34,3 @@ export const originLabel: Record<EntryOrigin, string> = {
   added: "Your upload",
   overridden: "Your upload (replaces shipped)",
 };
-
-/**
- * Whether an entry touches life safety: a fire device, a fire input type, or hardware whose inputs are
- * of a fire input type. Those screens carry the caution.
- */
-export function isLifeSafety(catalog: Catalog, kind: CatalogKind, entry: CatalogEntry): boolean {
-  const fireInput = (id: string | undefined) => !!id && catalog.inputTypes.some((t) => t.id === id && t.lifeSafety);
-  if (kind === "detectors" || kind === "inputTypes") return "lifeSafety" in entry && entry.lifeSafety === true;
-  if (kind === "panels" && "onboardInputs" in entry) return fireInput(entry.onboardInputs.inputType);
-  if ((kind === "expansionBoards" || kind === "keypads") && "inputs" in entry) return fireInput(entry.inputs?.inputType);
-  return false;
-}

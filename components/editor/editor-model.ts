@@ -1,3 +1,4 @@
+import { isLifeSafety } from "@/lib/catalog/life-safety";
 import type { InputType } from "@/lib/catalog/schema";
 import type { Finding, FindingTarget } from "@/lib/findings";
 import { formatOhms } from "@/lib/resistors/format-ohms";
@@ -184,7 +185,7 @@ export function hasLifeSafety(ctx: LayoutContext): boolean {
   const ix = indexCatalog(ctx.catalog);
   return ctx.schedule.some((d) => {
     const c = ix.detectors.get(d.catalogId);
-    return !!c && (c.lifeSafety || c.category === "smoke" || c.category === "heat");
+    return !!c && isLifeSafety(c);
   });
 }
 
