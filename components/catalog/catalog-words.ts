@@ -1,25 +1,11 @@
 import type { Report, WiringScheme } from "@/lib/catalog/schema";
 import type { EntryOrigin } from "@/lib/server/catalogs";
+import { REPORT_WORDS, SCHEME_WORDS, sentenceWords } from "@/lib/vocabulary/words";
 
-// Words the catalog screens use for scheme and report values (GLOSSARY.md terms).
+// Words the catalog screens use for scheme and report values: the vocabulary's, capitalised to stand alone.
 
-export const schemeLabel: Record<WiringScheme, string> = {
-  none: "No resistor",
-  "single-eol": "Single end-of-line",
-  "double-eol": "Double end-of-line",
-  shared: "Shared input",
-};
-
-export const reportLabel: Record<Report, string> = {
-  short: "Short",
-  normal: "Normal",
-  active: "Active",
-  "active-a": "Detector A active",
-  "active-b": "Detector B active",
-  "active-both": "Both active",
-  open: "Open / cut",
-  trouble: "Trouble",
-};
+export const schemeLabel: Record<WiringScheme, string> = sentenceWords(SCHEME_WORDS);
+export const reportLabel: Record<Report, string> = sentenceWords(REPORT_WORDS);
 
 export const stateLabel = {
   rest: "at rest",

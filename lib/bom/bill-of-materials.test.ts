@@ -62,7 +62,7 @@ describe("CSV exports", () => {
     const { records, error } = readCsv(csv);
     expect(error).toBeNull();
     expect(records[0]).toEqual(["zone", "label", "area", "room", "device_type", "board", "input", "report_types"]);
-    expect(records[1]).toEqual(["1", 'Front door, "main"', "Ground floor", "Lobby", "Surface door contact", "Control panel", "1", "normal; active (alarm); open; short"]);
+    expect(records[1]).toEqual(["1", 'Front door, "main"', "Ground floor", "Lobby", "Surface door contact", "Control panel", "1", "normal; active (alarm); open / cut; short"]);
     expect(records.map((r) => r[0])).toEqual(["zone", "1", "2", "3", "4", "5"]);
   });
   it("exports the bill of materials with a total record", () => {

@@ -1,8 +1,8 @@
 import type { Report } from "@/lib/catalog/schema";
 import { writeCsv, type CsvCell } from "@/lib/csv/csv";
-import { REPORT_WORDS } from "@/lib/loop/row-labels";
 import type { BillOfMaterials } from "@/lib/bom/bill-of-materials";
 import type { SheetInput, TerminalSheet } from "@/lib/sheet/sheet-types";
+import { REPORT_WORDS } from "@/lib/vocabulary/words";
 
 // The layout's CSV exports, written through lib/csv (quoting and the formula guard live there).
 
