@@ -150,7 +150,7 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
         <g>
           <rect x={TERM_X + 8} y={yA - 60} width={PX - TERM_X - 16} height={bottom - yA + 50} rx={8} fill="none" stroke={atPanelWarning ? WARN : "#b9b4a6"} strokeDasharray="5 4" />
           <text x={TERM_X + 16} y={yA - 42} fontSize={12.5} fontWeight={600} fill={atPanelWarning ? WARN : MUTED}>
-            {atPanelWarning ? "resistor at the panel" : "at the panel"}
+            {atPanelWarning ? PLACEMENT_WORDS["at-panel"] : "at the panel"}
           </text>
         </g>
       ) : null}

@@ -39,17 +39,22 @@ export interface CsvRecords {
  * quoted fields are kept as written.
  */
 function unifyLineBreaks(text: string): string {
-  let out = "";
+  if (!text.includes("\r")) return text;
+  const parts: string[] = [];
+  let from = 0;
   let inQuotes = false;
   for (let i = 0; i < text.length; i++) {
-    const c = text[i];
-    if (c === '"') inQuotes = !inQuotes;
-    if (!inQuotes && c === "\r") {
-      out += "\n";
-      if (text[i + 1] === "\n") i++;
-    } else out += c;
+    const c = text.charCodeAt(i);
+    if (c === 34) inQuotes = !inQuotes; // "
+    else if (c === 13 && !inQuotes) {
+      // \r, or \r\n, ends a record
+      parts.push(text.slice(from, i), "\n");
+      if (text.charCodeAt(i + 1) === 10) i++;
+      from = i + 1;
+    }
   }
-  return out;
+  parts.push(text.slice(from));
+  return parts.join("");
 }
 
 const QUOTE_ERRORS: Record<string, string> = {
