@@ -44,11 +44,11 @@ export {
   loopSpecSchema,
   loopDetectorSchema,
   cableSpecSchema,
-  cableGaugeSchema,
   placementSchema,
   findingTargetSchema,
   inputTypeRefSchema,
   type AnalyzeRequest,
 } from "./loop-schema";
+export { cableGaugeSchema } from "./cable-gauge";
 export { analyzeRequest, analyzeRequestAsync, type AnalyzeRequestResult, type RequestIssue, type InputTypeLookup } from "./analyze-request";
 export { buildLoopNetlist, ohmsFromResult, SPICE_OPEN_OHMS, type SpiceCase } from "./spice-netlist";

@@ -4,6 +4,7 @@
 import { z } from "zod";
 import { contactTypeSchema, idSchema, inputTypeSchema, wiringSchemeSchema, type InputType } from "@/lib/catalog/schema";
 import type { FindingTarget } from "@/lib/findings";
+import { cableGaugeSchema } from "./cable-gauge";
 import { inputTypeProblems, loopShapeProblems } from "./loop-problems";
 import type { LoopSpec } from "./types";
 
@@ -12,10 +13,6 @@ export const placementSchema = z.enum(["at-detector", "at-panel", "loop-back"], 
 });
 
 const num = (what: string) => z.number({ error: `${what} must be a number` });
-
-export const cableGaugeSchema = z.union([z.strictObject({ awg: num("AWG") }), z.strictObject({ mm2: num("mm²") })], {
-  error: "gauge is { awg: <gauge number> } or { mm2: <cross-section> }",
-});
 
 export const cableSpecSchema = z.strictObject({
   gauge: cableGaugeSchema,

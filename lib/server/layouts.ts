@@ -7,6 +7,7 @@ import { findSite } from "./sites";
 import { catalogFor, ensureCan, loadSchedule } from "./schedules";
 import type { Actor } from "./session";
 import { Layout, LayoutRevision, Site, User } from "@/models";
+import { isLifeSafety } from "@/lib/catalog/life-safety";
 import type { Catalog } from "@/lib/catalog/schema";
 import { boardEntry, indexCatalog } from "@/lib/layout/catalog-index";
 import { boardName } from "@/lib/layout/names";
@@ -141,7 +142,7 @@ export function blankDocument(panelId: string, schedule: Schedule, catalog: Cata
   const ix = indexCatalog(catalog);
   const fire = schedule.some((d) => {
     const c = ix.detectors.get(d.catalogId);
-    return !!c && (c.lifeSafety || c.category === "smoke" || c.category === "heat");
+    return !!c && isLifeSafety(c);
   });
   return { panelId, boards: [], inputs: [], power: fire ? { standbyProfileId: "nfpa72-fire", safetyFactor: 1.25 } : { standbyProfileId: "intruder-grade-2", safetyFactor: 1.2 }, busCableM: 0 };
 }

@@ -3,43 +3,10 @@ import fc from "fast-check";
 import { analyzeLoop, type Fault, type LoopSpec } from "@/lib/loop";
 import { shippedCatalog } from "@/lib/catalog/shipped";
 import { currentReading, expectedReport, readingInterval, rowStatus, settingsFor, toLoopSpec, withScheme } from "@/components/loop-bench/bench-state";
-import { ohmsText, parseOhms } from "@/components/loop-bench/parse-ohms";
 import { gaugeIn, nearestAwg, resistorAtPanelShort, withRow, withSharedOhms, withState, withTamper } from "@/components/loop-bench/bench-actions";
 
 const inputTypes = shippedCatalog().catalog.inputTypes;
 const byId = (id: string) => inputTypes.find((t) => t.id === id)!;
-
-describe("parseOhms", () => {
-  it("reads plain figures, SI prefixes and the IEC 60062 letter code", () => {
-    // IEC 60062 letter and digit code: R, K, M stand for the decimal point and the multiplier
-    const cases: [string, number][] = [
-      ["4700", 4700],
-      ["4700 Ω", 4700],
-      ["4.7k", 4700],
-      ["4.7 kΩ", 4700],
-      ["4,7k", 4700],
-      ["4k7", 4700],
-      ["4K7", 4700],
-      ["470R", 470],
-      ["0R47", 0.47],
-      ["1M2", 1_200_000],
-      ["2.2M", 2_200_000],
-      ["5k6 ohms", 5600],
-      [".5k", 500],
-    ];
-    for (const [text, ohms] of cases) expect(parseOhms(text), text).toBe(ohms);
-  });
-  it("refuses what is not a positive resistance", () => {
-    for (const text of ["", "  ", "0", "-5", "abc", "4k7k", "1e3", "5 V", "k"]) expect(parseOhms(text), text).toBeNull();
-  });
-  it("writes values back so they read the same", () => {
-    fc.assert(
-      fc.property(fc.integer({ min: 1, max: 9_999_999 }), (ohms) => {
-        expect(parseOhms(ohmsText(ohms))).toBeCloseTo(ohms, 6);
-      }),
-    );
-  });
-});
 
 describe("bench settings", () => {
   it("start from what the input type expects: its scheme, values and tolerance, a contact that reads normal at rest", () => {

@@ -13,7 +13,7 @@ import { CatalogBrowser } from "@/components/catalog/catalog-browser";
 import { CatalogUploadForm } from "@/components/catalog/catalog-upload";
 import { UploadVersions } from "@/components/catalog/upload-versions";
 import { LifeSafetyCaution } from "@/components/catalog/life-safety-caution";
-import { isLifeSafety } from "@/components/catalog/catalog-words";
+import { isLifeSafetyEntry } from "@/lib/catalog/life-safety";
 import { tableStateFrom, type CatalogRow } from "@/components/catalog/catalog-table-model";
 
 export const metadata: Metadata = { title: "Catalog" };
@@ -25,7 +25,7 @@ export default async function CatalogPage({ searchParams }: { searchParams: Prom
   const rows: CatalogRow[] = catalogSummary(info.catalog).map((r) => ({
     ...r,
     origin: entryOrigin(info, { kind: r.kind, id: r.id }),
-    lifeSafety: isLifeSafety(info.catalog, r.kind, findEntry(info.catalog, r.id)!.entry),
+    lifeSafety: isLifeSafetyEntry(info.catalog, r.kind, findEntry(info.catalog, r.id)!.entry),
   }));
   const canUpload = can(actor.role, "catalog:upload");
 
