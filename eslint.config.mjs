@@ -11,6 +11,7 @@ const PURE_FOLDERS = [
   "lib/bom",
   "lib/catalog",
   "lib/commissioning",
+  "lib/csv",
   "lib/compare",
   "lib/layout",
   "lib/loop",
@@ -22,6 +23,7 @@ const PURE_FOLDERS = [
   "lib/sheet",
   "lib/sites",
   "lib/solver",
+  "lib/vocabulary",
 ];
 const pureFiles = [...PURE_FOLDERS.map((d) => `${d}/**/*.{ts,tsx}`), "lib/findings.ts"];
 /** Tests and their helpers beside the engine may read fixture files and the shipped catalog. */
