@@ -8,6 +8,7 @@ import { env } from "./env";
 import { Membership, User } from "@/models";
 import { clearFailures, recordFailure, waitSeconds } from "./throttle";
 import type { Role } from "@/lib/auth/permissions";
+import { safeCallbackUrl } from "@/lib/http/same-origin";
 
 const credentialsSchema = z.object({ email: z.email().max(254), password: z.string().min(1).max(200) });
 
@@ -45,6 +46,11 @@ export function authOptions(): NextAuthOptions {
       }),
     ],
     callbacks: {
+      // Only the app's own origin after sign-in or sign-out ("/\host" and "//host" name another host).
+      async redirect({ url, baseUrl }) {
+        const origin = new URL(baseUrl).origin;
+        return `${origin}${safeCallbackUrl(url, origin)}`;
+      },
       async jwt({ token, user }) {
         if (user) {
           const u = user as unknown as { id: string; organisationId: number; role: Role };
