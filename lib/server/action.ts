@@ -11,8 +11,9 @@ export type ActionResult<T> = { ok: true; data: T } | { ok: false; status: numbe
 
 /**
  * Server actions are public endpoints: every one checks where the call came from, the session and its input
- * here. Next refuses an action whose Origin host differs from Host / X-Forwarded-Host itself; this check
- * compares against the configured public origin (NEXTAUTH_URL) as route handlers do.
+ * here. Next itself aborts an action whose Origin host differs from X-Forwarded-Host / Host (its
+ * action-handler), but a page on a rebound name sends that name as Host too; this check compares the scheme,
+ * host and port with the configured public origin (NEXTAUTH_URL), as route handlers do.
  */
 export function action<S extends z.ZodType, T>(permission: Permission, schema: S, fn: (input: z.infer<S>, actor: Actor) => Promise<T>) {
   return async (input: unknown): Promise<ActionResult<T>> => {
