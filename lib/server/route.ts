@@ -80,21 +80,30 @@ const strictUtf8 = new TextDecoder("utf-8", { fatal: true, ignoreBOM: true });
 // In a /u regex a surrogate range matches only unpaired halves: a pair is one code point.
 const loneSurrogate = /[\uD800-\uDFFF]/u;
 
-/** The path of the first string (value or key) holding a lone UTF-16 surrogate, which no database column can store. */
-export function findInvalidUnicode(value: unknown, path: (string | number)[] = []): string | null {
-  if (typeof value === "string") return loneSurrogate.test(value) ? path.join(".") || "(body)" : null;
-  if (Array.isArray(value)) {
-    for (let i = 0; i < value.length; i++) {
-      const found = findInvalidUnicode(value[i], [...path, i]);
-      if (found !== null) return found;
-    }
-    return null;
-  }
-  if (value && typeof value === "object") {
-    for (const [k, v] of Object.entries(value)) {
-      if (loneSurrogate.test(k)) return [...path, k].join(".");
-      const found = findInvalidUnicode(v, [...path, k]);
-      if (found !== null) return found;
+/**
+ * The path of the first string (value or key) holding a lone UTF-16 surrogate, which no database column can
+ * store; null when there is none. Iterative, with parent links instead of copied paths: a body may nest
+ * 200,000 levels deep (the schemas refuse it later; this walk must not overflow the stack first).
+ */
+export function findInvalidUnicode(root: unknown): string | null {
+  type Step = { value: unknown; key: string | number | null; parent: Step | null };
+  const pathOf = (step: Step, lastKey?: string) => {
+    const keys: (string | number)[] = lastKey === undefined ? [] : [lastKey];
+    for (let s: Step | null = step; s && s.key !== null; s = s.parent) keys.push(s.key);
+    return keys.reverse().join(".") || "(body)";
+  };
+  const stack: Step[] = [{ value: root, key: null, parent: null }];
+  while (stack.length) {
+    const step = stack.pop()!;
+    const v = step.value;
+    if (typeof v === "string") {
+      if (loneSurrogate.test(v)) return pathOf(step);
+    } else if (Array.isArray(v)) {
+      for (let i = v.length - 1; i >= 0; i--) stack.push({ value: v[i], key: i, parent: step });
+    } else if (v && typeof v === "object") {
+      const entries = Object.entries(v);
+      for (const [k] of entries) if (loneSurrogate.test(k)) return pathOf(step, k);
+      for (let i = entries.length - 1; i >= 0; i--) stack.push({ value: entries[i][1], key: entries[i][0], parent: step });
     }
   }
   return null;
