@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # Started by Playwright: a fresh e2e database with demo data, a fake SMTP server, and the built app on
-# E2E_PORT (default 3100; the SMTP sink listens 1000 above it, the fake S3 server 1500 above).
+# E2E_PORT (default 3100; the SMTP sink listens 1000 above it and its mail page 1001 above, the fake S3 server 1500 above).
 set -euo pipefail
 source "$(dirname "$0")/env.sh"
 cd "$ROOT"
@@ -12,7 +12,6 @@ export DATABASE_URL="$(db_url "loopwright_e2e_$PORT")"
 export NEXTAUTH_URL="http://localhost:$PORT"
 export NEXTAUTH_SECRET="$(cat "$DATA_DIR/session-secret")"
 export SMTP_PORT="$SMTP"
-export LOOPWRIGHT_DEV_OUTBOX=1
 # a second organisation, for the cross-organisation checks of tests/e2e/api-*.spec.ts
 export LOOPWRIGHT_SEED_RIVAL=1
 npx tsx scripts/migrate.ts

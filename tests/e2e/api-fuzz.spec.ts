@@ -10,7 +10,8 @@ import { expectErrorBody, findDemoObjects, makeFixtures, openCallers, openDb, re
 // Every JSON API of the registry sent bodies that are wrong by construction (a wrong type, a missing required
 // key, an unknown key, strings and arrays past any limit, negative and non-finite numbers, 10,000 levels of
 // nesting, text that is not JSON, the wrong content type): each answer must be a 4xx with a readable `error`,
-// never a 5xx, and no table may change. Then the upload routes get wrong files behind right names.
+// never a 5xx, and no table may change. Then every string field gets a lone surrogate (422 naming the field),
+// and the upload routes get wrong files behind right names.
 
 const RUNS = 25;
 
@@ -186,6 +187,39 @@ test.describe("JSON APIs refuse malformed bodies with a 4xx and store nothing", 
       const ok = await send(playwright, api, valid);
       expect(ok.status(), await ok.text()).toBe(entry.success);
       console.log(`${routeKey(entry)}: ${seen.length} bodies refused (${[...new Set(seen.map((s) => s.slice(0, 3)))].join(", ")})`);
+    });
+  }
+});
+
+// ---------------------------------------------------------------------------------------------
+// Text that is not Unicode: half a surrogate pair (legal in JSON text as an escape, storable in no column)
+// in each string of a valid body, and in a key. One place answers it: the route wrapper's JSON reading.
+
+const surrogates = ["\ud800", "\udfff", "tail \ud83d", "\udd25 head"];
+
+test.describe("JSON APIs answer a lone surrogate in any text with a 422 naming the field, and store nothing", () => {
+  for (const entry of routes.filter((e) => e.body === "json")) {
+    test(routeKey(entry), async () => {
+      test.setTimeout(180_000);
+      const api = callerFor(entry);
+      const valid = await entry.build({ caller: { kind: "demo", role: null, email: null, password: null }, demo: demoIds, fixtures });
+      const body = valid.json as Record<string, unknown>;
+      const before = await snapshotTables(conn);
+      const cases = nodesOf(body)
+        .filter((n) => n.kind === "string")
+        .map((n, i) => ({ field: dotted(n.path), text: JSON.stringify(setAt(body, n.path, `${n.value as string}${surrogates[i % surrogates.length]}`)) }));
+      const rest = JSON.stringify(body).slice(1);
+      cases.push({ field: "odd\udc00key", text: `{${JSON.stringify("odd\udc00key")}:1${rest === "}" ? "" : ","}${rest}` });
+      for (const c of cases) {
+        expect(c.text, "JSON.stringify escapes a lone surrogate as \\uXXXX").toMatch(/\\ud[89a-f][0-9a-f]{2}/i);
+        const res = await api.fetch(valid.url, { method: valid.method, data: c.text, headers: { "content-type": "application/json" }, maxRedirects: 0 });
+        const text = await res.text();
+        expect(res.status(), `${c.field}: ${text.slice(0, 300)}`).toBe(422);
+        await expectErrorBody(res, c.field);
+        expect(JSON.parse(text).issues?.[0]?.path, text.slice(0, 300)).toBe(c.field);
+      }
+      expect(await snapshotTables(conn), "a refused body changed the database").toEqual(before);
+      console.log(`${routeKey(entry)}: ${cases.length} fields with a lone surrogate refused`);
     });
   }
 });

@@ -1,5 +1,5 @@
 import { test, expect } from "@playwright/test";
-import { demo, signIn, type DemoRole } from "./support";
+import { demo, mailPage, signIn, type DemoRole } from "./support";
 
 test("signed-out visitors are sent to the sign-in page, the API answers 401", async ({ page, request }) => {
   await page.goto("/members");
@@ -41,7 +41,7 @@ for (const role of Object.keys(expectations) as DemoRole[]) {
   });
 }
 
-test("an admin invites a member by e-mail; the invitee sets a password from the outbox link and signs in", async ({ page, browser }) => {
+test("an admin invites a member by e-mail; the invitee sets a password from the mailed link and signs in", async ({ page, browser }) => {
   await signIn(page, "admin");
   await page.goto("/members");
   const email = `new.installer.${Date.now()}@quillfen.example`;
@@ -52,8 +52,8 @@ test("an admin invites a member by e-mail; the invitee sets a password from the 
 
   const other = await browser.newContext();
   const invitee = await other.newPage();
-  await invitee.goto("/dev/outbox");
-  const mail = invitee.getByTestId("outbox").locator("li").filter({ hasText: email }).first();
+  await invitee.goto(mailPage);
+  const mail = invitee.locator("#messages > li").filter({ hasText: email }).first();
   await expect(mail).toBeVisible();
   await mail.getByRole("link", { name: /\/invite\// }).click();
   await invitee.getByLabel("Your name").fill("New Installer");

@@ -6,7 +6,7 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { randomUUID } from "node:crypto";
 import type * as mariadb from "mariadb";
-import { signIn, demo } from "./support";
+import { signIn, demo, mailPage } from "./support";
 import { demoSiteName, openDb } from "./support-api";
 
 // The whole job on the demo library: an engineer compares two layouts, records the choice and approves one; the
@@ -143,20 +143,20 @@ test("a designer cannot approve: the review says who can", async ({ page }) => {
   await expect(page.getByTestId("sheet-approval")).toHaveText("Not approved — for review only");
 });
 
-test("the engineer e-mails the sheet to the site's installer, and the outbox lists it with the PDF", async ({ page }) => {
+test("the engineer e-mails the sheet to the site's installer, and the mail sink received it with the PDF", async ({ page }) => {
   await signIn(page, "engineer");
   await page.goto(`/sites/${siteId}/layouts/${chosen.id}/sheet`);
   await expect(page.getByTestId("sheet-approval")).toContainText("Approved revision 1");
   await page.getByTestId("send-sheet").click();
   await expect(page.getByTestId("send-message")).toContainText(`Sent to Demo Installer <${demo.installer}>`, { timeout: 30_000 }); // a PDF of 41 loops is made first
 
-  await page.goto("/dev/outbox");
-  const mail = page.getByTestId("outbox").locator("li").filter({ hasText: `to ${demo.installer}` }).filter({ hasText: "Terminal sheet:" }).first();
+  await page.goto(mailPage);
+  const mail = page.locator("#messages > li").filter({ hasText: `to ${demo.installer}` }).filter({ hasText: "Terminal sheet:" }).first();
   await expect(mail).toContainText("revision 1");
   const attachment = mail.getByRole("link", { name: /^terminal-sheet-.*\.pdf$/ });
   await expect(attachment).toBeVisible();
   await expect(mail).toContainText("application/pdf");
-  const res = await page.request.get((await attachment.getAttribute("href"))!);
+  const res = await page.request.get(new URL((await attachment.getAttribute("href"))!, mailPage).href);
   expect(res.status()).toBe(200);
   expect(await pdfText(await res.body(), "mailed-sheet.pdf")).toContain("Terminal sheet");
 });
