@@ -1,13 +1,11 @@
 import { test, expect, type APIRequestContext, type Page } from "@playwright/test";
-import { execFileSync } from "node:child_process";
-import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
+import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { randomUUID } from "node:crypto";
 import type * as mariadb from "mariadb";
 import { signIn, demo } from "./support";
 import { demoSiteName, openDb } from "./support-api";
+import { readPdf } from "../support/pdf-text";
 
 // The whole job on the demo library: an engineer compares two layouts, records the choice and approves one; the
 // sheet goes by e-mail to the site's installer; the installer opens the sheet, downloads its PDF and commissions
@@ -20,7 +18,6 @@ test.describe.configure({ mode: "serial" });
 
 const shots = "test-results/whole-job";
 const photo = fileURLToPath(new URL("../fixtures/photos/terminations.jpg", import.meta.url));
-const tmp = mkdtempSync(join(tmpdir(), "lw-whole-job-"));
 
 type Expected = { test: string; instruction: string; minOhms: number | "Infinity"; maxOhms: number | "Infinity"; nominalOhms: number | "Infinity"; rangeText: string };
 type Row = { spare: boolean; boardKey: string; input: number; scheme: string; placement: string; zones: number[]; detectors: { label: string; lifeSafety: boolean }[]; resistors: { role: string; valueText: string; ohms: number }[]; expected: Expected[] };
@@ -35,11 +32,9 @@ const num = (v: number | "Infinity") => (v === "Infinity" ? Infinity : v);
 /** What a meter would show for a value: "OL" for open, kilohms with two decimals, else ohms with one. */
 const meterText = (ohms: number) => (ohms === Infinity ? "OL" : ohms >= 1000 ? `${(ohms / 1000).toFixed(2)}k` : ohms.toFixed(1));
 
-async function pdfText(bytes: Buffer, name: string): Promise<string> {
+async function pdfText(bytes: Buffer): Promise<string> {
   expect(bytes.subarray(0, 5).toString("latin1")).toBe("%PDF-"); // ISO 32000-1, 7.5.2: the file header
-  const file = join(tmp, name);
-  writeFileSync(file, bytes);
-  return execFileSync("/usr/bin/pdftotext", ["-layout", file, "-"], { encoding: "utf8" });
+  return (await readPdf(bytes)).text;
 }
 
 async function sheetJson(api: APIRequestContext, layoutId: number): Promise<SheetJson> {
@@ -158,7 +153,7 @@ test("the engineer e-mails the sheet to the site's installer, and the outbox lis
   await expect(mail).toContainText("application/pdf");
   const res = await page.request.get((await attachment.getAttribute("href"))!);
   expect(res.status()).toBe(200);
-  expect(await pdfText(await res.body(), "mailed-sheet.pdf")).toContain("Terminal sheet");
+  expect(await pdfText(await res.body())).toContain("Terminal sheet");
 });
 
 test("the installer opens the approved sheet, prints it, and downloads it as a PDF and the zone list as CSV", async ({ page }) => {
@@ -181,17 +176,14 @@ test("the installer opens the approved sheet, prints it, and downloads it as a P
   // ISO 216 A4 is 210 × 297 mm = 595.3 × 841.9 pt, US Letter 8.5 × 11 in = 612 × 792 pt (72 pt per inch); Chromium rounds its page box to device pixels, so within a point
   for (const [paper, w, h] of [["US Letter", 612, 792], ["A4", 595.3, 841.9]] as const) {
     await page.getByText(paper, { exact: false }).first().click();
-    const file = join(tmp, `printed-${paper}.pdf`);
-    await page.pdf({ path: file, preferCSSPageSize: true, printBackground: true });
-    const info = execFileSync("/usr/bin/pdfinfo", [file], { encoding: "utf8" });
-    const [, pw, ph] = /Page size:\s+([\d.]+) x ([\d.]+) pts/.exec(info)!.map(Number);
+    const pdf = await readPdf(await page.pdf({ preferCSSPageSize: true, printBackground: true }));
+    const { width: pw, height: ph } = pdf.pages[0];
     expect(Math.abs(pw - w), `${paper} width ${pw} pt`).toBeLessThan(1);
     expect(Math.abs(ph - h), `${paper} height ${ph} pt`).toBeLessThan(1);
-    const pages = Number(/Pages:\s+(\d+)/.exec(info)![1]);
-    expect(pages).toBeGreaterThanOrEqual(boardCount);
-    const printed = execFileSync("/usr/bin/pdftotext", [file, "-"], { encoding: "utf8" });
-    // every board after the first starts a page (pdftotext puts a form feed between pages)
-    const pageTexts = printed.split("\f").map((t) => t.trim());
+    expect(pdf.pageCount).toBeGreaterThanOrEqual(boardCount);
+    const printed = pdf.text;
+    // every board after the first starts a page
+    const pageTexts = pdf.pages.map((p) => p.text.trim());
     for (const name of boardNames.slice(1)) expect(pageTexts.some((t) => t.startsWith(`${name} — `)), `${paper}: a page starts with ${name}`).toBe(true);
     expect(printed).toContain(row0Label);
     expect(printed).not.toContain("E-mail to the site's installer");
@@ -207,7 +199,7 @@ test("the installer opens the approved sheet, prints it, and downloads it as a P
   const row = s.sheet.boards[0].rows.find((r) => !r.spare)!;
   const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("download-pdf").click()]);
   expect(download.suggestedFilename()).toMatch(/^terminal-sheet-.*-rev-1\.pdf$/);
-  const text = await pdfText(readFileSync((await download.path())!), "sheet.pdf");
+  const text = await pdfText(readFileSync((await download.path())!));
   expect(text).toContain(row.detectors[0].label);
   expect(text).toContain(row.resistors[0].valueText);
 
@@ -331,7 +323,7 @@ test("the installer commissions the loops: a resistor at the panel end is diagno
   await expect(page.getByTestId("site-progress")).toHaveText(`${loops.length} of ${loops.length} loops passed`);
   await expect(page.getByTestId("completion")).toBeVisible();
   const [report] = await Promise.all([page.waitForEvent("download"), page.getByTestId("report-pdf").click()]);
-  const text = await pdfText(readFileSync((await report.path())!), "report.pdf");
+  const text = await pdfText(readFileSync((await report.path())!));
   expect(text).toContain(row.detectors[0].label);
   expect(text).toContain("terminations.jpg");
   await page.getByTestId("mark-commissioned").click();
