@@ -93,7 +93,11 @@ if [ "$packages_only" = 1 ]; then
 fi
 
 if [ "$quiet" = 0 ] || [ "$missing" = 1 ]; then
-  if [ "$purpose" = all ]; then echo "System programs Loopwright needs:"; else echo "System programs 'npm $purpose' needs:"; fi
+  case "$purpose" in
+    all) echo "System programs Loopwright needs:" ;;
+    backup) echo "System programs 'npm run backup' and 'npm run restore' need:" ;;
+    *) echo "System programs 'npm $purpose' needs:" ;;
+  esac
   printf '  %-16s %-19s %-36s %s\n' "state" "program" "installed by" "used for"
   printf '%s\n' "${lines[@]}"
   if [ ${#missing_packages[@]} -gt 0 ]; then echo "To install what is missing: $apt ${missing_packages[*]}"; fi
