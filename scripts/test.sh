@@ -87,17 +87,24 @@ trap stop_everything EXIT
 trap 'exit 130' INT
 trap 'exit 143' TERM
 
+# A stage runs in the background and is waited for: bash runs a trap only after the foreground command has ended,
+# so a signal to this script (Ctrl-C, a CI timeout) goes straight to the cleanup, which ends the stage.
+run() {
+  "$@" &
+  wait "$!"
+}
+
 ensure_system test # lists what is missing (scripts/doctor.sh), installs mariadb-server and chromium if needed
 ensure_node_modules
 
 export NEXTAUTH_SECRET="$(cat "$DATA_DIR/session-secret")"
 
-if wants lint; then echo "== lint"; npx eslint . --max-warnings=0; fi
-if wants types; then echo "== types"; npx tsc --noEmit -p .; fi
-if wants unit; then echo "== unit and property tests"; npx vitest run --project unit "${passthrough[@]}"; fi
+if wants lint; then echo "== lint"; run npx eslint . --max-warnings=0; fi
+if wants types; then echo "== types"; run npx tsc --noEmit -p .; fi
+if wants unit; then echo "== unit and property tests"; run npx vitest run --project unit "${passthrough[@]}"; fi
 
 # built before the integration tests: the database fault test runs the production server (next start)
-if wants build; then echo "== production build"; npx next build; fi
+if wants build; then echo "== production build"; run npx next build; fi
 
 if wants integration || wants e2e; then bash scripts/db.sh up; fi
 
@@ -105,10 +112,10 @@ if wants integration; then
   test_db="${LOOPWRIGHT_TEST_DB:-loopwright_test}"
   echo "== integration tests (MariaDB database $test_db, created fresh; a private MariaDB on 3326 for the fault test)"
   bash scripts/db.sh create "$test_db"
-  DATABASE_URL="$(db_url "$test_db")" NEXTAUTH_URL="http://localhost:3100" npx vitest run --project integration "${passthrough[@]}"
+  run env DATABASE_URL="$(db_url "$test_db")" NEXTAUTH_URL="http://localhost:3100" npx vitest run --project integration "${passthrough[@]}"
 fi
 
 if wants e2e; then
   echo "== browser tests (Chromium, database loopwright_e2e_${E2E_PORT:-3100}, created fresh)"
-  npx playwright test "${passthrough[@]}"
+  run npx playwright test "${passthrough[@]}"
 fi
