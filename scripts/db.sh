@@ -43,7 +43,7 @@ up() {
 }
 
 down() {
-  if running; then admin shutdown && echo "MariaDB stopped"; else echo "MariaDB is not running"; fi
+  if running; then admin shutdown && echo "MariaDB on 127.0.0.1:$DB_PORT stopped"; else echo "MariaDB is not running"; fi
 }
 
 create() {
