@@ -5,6 +5,7 @@ set -euo pipefail
 source "$(dirname "$0")/env.sh"
 cd "$ROOT"
 
+ensure_system start  # lists what is missing (scripts/doctor.sh), installs mariadb-server if needed
 ensure_node_modules
 bash scripts/db.sh up
 

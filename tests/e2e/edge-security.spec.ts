@@ -1,6 +1,6 @@
 import { test, expect } from "@playwright/test";
 import { baseURL } from "./support-api";
-import { DEMO_PASSWORD, demo, signIn } from "./support";
+import { DEMO_PASSWORD, demo, signIn, signedInAs } from "./support";
 
 // The production build seen from Chromium: the development outbox does not exist, a hostile callbackUrl
 // cannot take the browser to another host after sign-in, pages carry a nonce-based CSP and still hydrate,
@@ -8,13 +8,18 @@ import { DEMO_PASSWORD, demo, signIn } from "./support";
 
 const origin = new URL(baseURL).origin;
 
-test("the development outbox is a 404 in the production build, signed out and as an admin", async ({ page, request }) => {
+test("the development outbox is a 404 in the production build, signed out", async ({ request }) => {
   for (const path of ["/dev/outbox", "/dev/outbox/1/attachments/0"]) expect((await request.get(path)).status(), `${path} signed out`).toBe(404);
-  await signIn(page, "admin");
-  const res = await page.goto("/dev/outbox");
-  expect(res?.status()).toBe(404);
-  await expect(page.getByText("Development outbox")).toHaveCount(0);
-  expect((await page.request.get("/dev/outbox/1/attachments/0")).status(), "attachment as admin").toBe(404);
+});
+
+test.describe("as an admin", () => {
+  test.use(signedInAs("admin"));
+  test("the development outbox is a 404 in the production build", async ({ page }) => {
+    const res = await page.goto("/dev/outbox");
+    expect(res?.status()).toBe(404);
+    await expect(page.getByText("Development outbox")).toHaveCount(0);
+    expect((await page.request.get("/dev/outbox/1/attachments/0")).status(), "attachment as admin").toBe(404);
+  });
 });
 
 for (const callbackUrl of ["/\\evil.example", "//evil.example", "https://evil.example/sites"]) {
@@ -63,9 +68,11 @@ test("pages carry a fresh script nonce and no 'unsafe-inline' scripts, and still
   expect(violations, "scripts blocked by the CSP").toEqual([]);
 });
 
-test("authenticated API answers are private and not stored", async ({ page }) => {
-  await signIn(page, "designer");
-  const res = await page.request.get("/api/sites");
-  expect(res.status()).toBe(200);
-  expect(res.headers()["cache-control"]).toBe("private, no-store");
+test.describe("as a designer", () => {
+  test.use(signedInAs("designer"));
+  test("authenticated API answers are private and not stored", async ({ page }) => {
+    const res = await page.request.get("/api/sites");
+    expect(res.status()).toBe(200);
+    expect(res.headers()["cache-control"]).toBe("private, no-store");
+  });
 });
