@@ -57,7 +57,7 @@ test.describe(() => {
     const mail = invitee.locator("#messages > li").filter({ hasText: email }).first();
     await expect(mail).toBeVisible();
     await mail.getByRole("link", { name: /\/invite\// }).click();
-    await invitee.getByLabel("Your name").fill("New Installer");
+    await invitee.getByLabel("Your name", { exact: true }).fill("New Installer");
     await invitee.getByLabel("Password").fill("short");
     await invitee.getByRole("button", { name: "Set password and join" }).click();
     await expect(invitee.getByText("Use at least 10 characters")).toBeVisible();
