@@ -10,13 +10,13 @@ import { fileStem, findLayoutForReview, getTerminalSheet, loadSheetContext, shee
 import type { Actor } from "./session";
 import { Membership, Site, User } from "@/models";
 import type { PageSize } from "@/lib/server/pdf/pdf-kit";
-import { terminalSheetPdf } from "@/lib/server/pdf/terminal-sheet-pdf";
+import { terminalSheetPdfOffLoop } from "@/lib/server/workers/off-loop";
 import { loopJsonReplacer } from "@/lib/loop/loop-json";
 import { buildTerminalSheet } from "@/lib/sheet/build-sheet";
 
 // The terminal sheet as a PDF, for download and e-mailed to the site's installer as an attachment.
 
-// Laying out a sheet of a few dozen loops takes pdfkit over a second of CPU, so the last few PDFs are kept, keyed by
+// Laying out a sheet of a few dozen loops takes pdfkit over a second of CPU (on a worker thread), so the last few PDFs are kept, keyed by
 // everything they are made from (the sheet itself, its heading, the paper): the same sheet is not laid out twice.
 const PDF_CACHE_ENTRIES = 8;
 const pdfCache = new Map<string, Buffer>();
@@ -30,7 +30,7 @@ export async function terminalSheetPdfCached(actor: Actor, layoutId: number, opt
   const key = createHash("sha256").update(JSON.stringify({ sheet, meta, size }, loopJsonReplacer)).digest("hex");
   let pdf = pdfCache.get(key);
   if (pdf) pdfCache.delete(key);
-  else pdf = await terminalSheetPdf(sheet, meta, size);
+  else pdf = await terminalSheetPdfOffLoop(sheet, meta, size);
   pdfCache.set(key, pdf);
   while (pdfCache.size > PDF_CACHE_ENTRIES) pdfCache.delete(pdfCache.keys().next().value!);
   return { pdf, fileName: `${fileStem("terminal-sheet", ctx.site.name, ctx.layout.name, `rev-${ctx.revision}`)}.pdf` };
