@@ -106,7 +106,7 @@ export function fileStem(...parts: (string | number)[]): string {
 
 export async function terminalSheetPdfFor(actor: Actor, layoutId: number, opts: SheetOptions & { size?: PageSize } = {}): Promise<{ pdf: Buffer; fileName: string }> {
   const ctx = await loadSheetContext(actor, layoutId, opts);
-  const pdf = await terminalSheetPdfOffLoop(buildTerminalSheet(ctx.document, ctx.schedule, ctx.catalog), sheetMetaOf(ctx), opts.size ?? "A4");
+  const pdf = await terminalSheetPdfOffLoop(ctx.document, ctx.schedule, ctx.catalog, sheetMetaOf(ctx), opts.size ?? "A4");
   return { pdf, fileName: `${fileStem("terminal-sheet", ctx.site.name, ctx.layout.name, `rev-${ctx.revision}`)}.pdf` };
 }
 

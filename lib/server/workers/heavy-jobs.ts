@@ -1,7 +1,8 @@
 import type { Catalog } from "@/lib/catalog/schema";
 import type { CommissioningProgressReport } from "@/lib/commissioning/progress";
+import type { LayoutDocument } from "@/lib/layout/schema";
 import type { Schedule } from "@/lib/schedule/schema";
-import type { TerminalSheet } from "@/lib/sheet/sheet-types";
+import { buildTerminalSheet } from "@/lib/sheet/build-sheet";
 import { suggestHardware, type SuggestOptions, type Suggestion } from "@/lib/solver";
 import { commissioningReportPdf, type ReportMeta, type ReportPhoto } from "@/lib/server/pdf/commissioning-report-pdf";
 import type { PageSize } from "@/lib/server/pdf/pdf-kit";
@@ -12,7 +13,8 @@ import { terminalSheetPdf, type SheetMeta } from "@/lib/server/pdf/terminal-shee
 
 export interface HeavyJobs {
   suggest: { input: { schedule: Schedule; catalog: Catalog; opts: SuggestOptions }; output: Suggestion };
-  terminalSheetPdf: { input: { sheet: TerminalSheet; meta: SheetMeta; size: PageSize }; output: Uint8Array };
+  /** The sheet is built here too: for a few dozen loops that is tens of milliseconds of loop analysis. */
+  terminalSheetPdf: { input: { document: LayoutDocument; schedule: Schedule; catalog: Catalog; meta: SheetMeta; size: PageSize }; output: Uint8Array };
   commissioningReportPdf: { input: { report: CommissioningProgressReport; meta: ReportMeta; photos: ReportPhoto[]; size: PageSize }; output: Uint8Array };
 }
 
@@ -20,7 +22,7 @@ export type HeavyJobName = keyof HeavyJobs;
 
 const jobs: { [K in HeavyJobName]: (input: HeavyJobs[K]["input"]) => HeavyJobs[K]["output"] | Promise<HeavyJobs[K]["output"]> } = {
   suggest: ({ schedule, catalog, opts }) => suggestHardware(schedule, catalog, opts),
-  terminalSheetPdf: ({ sheet, meta, size }) => terminalSheetPdf(sheet, meta, size),
+  terminalSheetPdf: ({ document, schedule, catalog, meta, size }) => terminalSheetPdf(buildTerminalSheet(document, schedule, catalog), meta, size),
   commissioningReportPdf: ({ report, meta, photos, size }) => commissioningReportPdf(report, meta, photos, size),
 };
 

@@ -66,9 +66,9 @@ describe("heavy.worker.ts on a worker thread", { timeout: 120_000 }, () => {
     }
   });
 
-  it("lays out the same terminal sheet PDF, byte for byte apart from its creation date and file id", async () => {
+  it("builds and lays out the same terminal sheet PDF, byte for byte apart from its creation date and file id", async () => {
     const here = await terminalSheetPdf(sheet, meta, "LETTER");
-    const there = await pool.run<Uint8Array>("terminalSheetPdf", { sheet, meta, size: "LETTER" });
+    const there = await pool.run<Uint8Array>("terminalSheetPdf", { document: midLayout, schedule: midSchedule, catalog, meta, size: "LETTER" });
     expect(there.byteLength).toBe(here.byteLength);
     expect(pdfWithoutVolatile(there)).toBe(pdfWithoutVolatile(here));
   });
@@ -92,7 +92,7 @@ describe("off-loop jobs outside the Next server", { timeout: 120_000 }, () => {
   it("run in place with the same results, as a Buffer for PDFs", async () => {
     expect(process.env.NEXT_RUNTIME).toBeUndefined();
     expect(await suggestOffLoop(schedule, catalog, { allowShared: true })).toEqual(suggestHardware(schedule, catalog, { allowShared: true }));
-    const pdf = await terminalSheetPdfOffLoop(sheet, meta, "A4");
+    const pdf = await terminalSheetPdfOffLoop(midLayout, midSchedule, catalog, meta, "A4");
     expect(Buffer.isBuffer(pdf)).toBe(true);
     expect(pdfWithoutVolatile(pdf)).toBe(pdfWithoutVolatile(await terminalSheetPdf(sheet, meta, "A4")));
   });

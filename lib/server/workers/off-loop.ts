@@ -3,14 +3,14 @@ import { availableParallelism } from "node:os";
 import { Worker } from "node:worker_threads";
 import type { Catalog } from "@/lib/catalog/schema";
 import type { CommissioningProgressReport } from "@/lib/commissioning/progress";
+import type { LayoutDocument } from "@/lib/layout/schema";
 import type { Schedule } from "@/lib/schedule/schema";
-import type { TerminalSheet } from "@/lib/sheet/sheet-types";
 import type { SuggestOptions, Suggestion } from "@/lib/solver";
 import { ApiError } from "@/lib/server/errors";
 import type { ReportMeta, ReportPhoto } from "@/lib/server/pdf/commissioning-report-pdf";
 import type { PageSize } from "@/lib/server/pdf/pdf-kit";
 import type { SheetMeta } from "@/lib/server/pdf/terminal-sheet-pdf";
-import { runHeavyJob, type HeavyJobName, type HeavyJobs } from "@/lib/server/workers/heavy-jobs";
+import type { HeavyJobName, HeavyJobs } from "@/lib/server/workers/heavy-jobs";
 import { WorkerPool, WorkerPoolBusy } from "@/lib/server/workers/worker-pool";
 
 // Hardware suggestions and PDF layouts take up to seconds of CPU: in the server they run on worker threads, so
@@ -22,7 +22,8 @@ import { WorkerPool, WorkerPoolBusy } from "@/lib/server/workers/worker-pool";
 // worker runs compiled JavaScript, needs no TypeScript loader at run time, and reads pdfkit and its fonts from
 // the same places the server does. The call must stay literally in that form for the build to see it.
 // Outside Next (vitest, tsx scripts) there is no bundle and Node 20 cannot start a .ts worker, so the same jobs
-// run in place, their inputs and outputs still passed through structuredClone like a worker's messages.
+// run in place, their inputs and outputs still passed through structuredClone like a worker's messages; the
+// jobs' code (pdfkit and its fonts among it) is imported only then, so the server's own thread never loads it.
 
 const POOL_KEY = Symbol.for("loopwright.heavyWorkPool");
 /** The build may give each route its own copy of this module; the pool is one per process. */
@@ -46,7 +47,10 @@ const BUSY = "The server is busy with other hardware suggestions and PDFs right 
 const TOO_LONG = "This took too long and was stopped; try again in a moment.";
 
 async function offLoop<K extends HeavyJobName>(name: K, input: HeavyJobs[K]["input"]): Promise<HeavyJobs[K]["output"]> {
-  if (!bundled()) return structuredClone(await runHeavyJob(name, structuredClone(input)));
+  if (!bundled()) {
+    const { runHeavyJob } = await import("@/lib/server/workers/heavy-jobs");
+    return structuredClone(await runHeavyJob(name, structuredClone(input)));
+  }
   try {
     return await pool().run<HeavyJobs[K]["output"]>(name, input);
   } catch (e) {
@@ -63,9 +67,9 @@ export function suggestOffLoop(schedule: Schedule, catalog: Catalog, opts: Sugge
   return offLoop("suggest", { schedule, catalog, opts });
 }
 
-/** terminalSheetPdf (lib/server/pdf), off the request loop. */
-export async function terminalSheetPdfOffLoop(sheet: TerminalSheet, meta: SheetMeta, size: PageSize = "A4"): Promise<Buffer> {
-  return asBuffer(await offLoop("terminalSheetPdf", { sheet, meta, size }));
+/** buildTerminalSheet (lib/sheet) then terminalSheetPdf (lib/server/pdf), off the request loop. */
+export async function terminalSheetPdfOffLoop(document: LayoutDocument, schedule: Schedule, catalog: Catalog, meta: SheetMeta, size: PageSize = "A4"): Promise<Buffer> {
+  return asBuffer(await offLoop("terminalSheetPdf", { document, schedule, catalog, meta, size }));
 }
 
 /** commissioningReportPdf (lib/server/pdf), off the request loop. */
