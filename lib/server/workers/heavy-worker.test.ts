@@ -1,4 +1,4 @@
-import { mkdirSync } from "node:fs";
+import { existsSync, mkdirSync, readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { Worker } from "node:worker_threads";
 import { build } from "esbuild";
@@ -80,6 +80,14 @@ describe("heavy.worker.ts on a worker thread", { timeout: 120_000 }, () => {
     const here = await commissioningReportPdf(report, rmeta, photos, "A4");
     const there = await pool.run<Uint8Array>("commissioningReportPdf", { report, meta: rmeta, photos, size: "A4" });
     expect(pdfWithoutVolatile(there)).toBe(pdfWithoutVolatile(here));
+  });
+
+  it.skipIf(!existsSync("/proc/self/task"))("runs at a lower priority than the thread that made it (Linux nice per thread)", async () => {
+    await pool.run("suggest", { schedule: schedule.slice(0, 2), catalog, opts: { allowShared: false } });
+    // proc(5): field 19 of /proc/[pid]/task/[tid]/stat is the nice value; the text after ") " starts at field 3
+    const nice = (tid: string) => Number(readFileSync(`/proc/self/task/${tid}/stat`, "utf8").split(") ")[1].split(" ")[16]);
+    const mine = nice(String(process.pid));
+    expect(readdirSync("/proc/self/task").map(nice)).toContain(Math.min(19, mine + 10));
   });
 
   it("answers an unknown job with an error, and the thread goes on", async () => {
