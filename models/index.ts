@@ -21,6 +21,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare email: string;
   declare name: string;
   declare passwordHash: string | null;
+  /** Raised to end the user's sessions; the session token carries the value it was signed in with. */
+  declare sessionVersion: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -108,7 +110,7 @@ const stamps = { createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE } as const
 export function initModels(sequelize: Sequelize) {
   Organisation.init({ id, name: { type: DataTypes.STRING(200), allowNull: false }, ...stamps }, { sequelize, modelName: "Organisation", tableName: "organisations" });
   User.init(
-    { id, email: { type: DataTypes.STRING(254), allowNull: false, unique: true }, name: { type: DataTypes.STRING(200), allowNull: false }, passwordHash: { type: DataTypes.STRING(100), allowNull: true }, ...stamps },
+    { id, email: { type: DataTypes.STRING(254), allowNull: false, unique: true }, name: { type: DataTypes.STRING(200), allowNull: false }, passwordHash: { type: DataTypes.STRING(100), allowNull: true }, sessionVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 }, ...stamps },
     { sequelize, modelName: "User", tableName: "users" },
   );
   Membership.init(

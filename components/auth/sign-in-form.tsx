@@ -6,18 +6,28 @@ import { useRouter } from "next/navigation";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Card } from "@/components/ui/card";
+import { signInSchema } from "@/lib/auth/sign-in-schema";
 
 export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
+  const [fieldErrors, setFieldErrors] = useState<Record<string, string>>({});
   const [busy, setBusy] = useState(false);
 
   async function onSubmit(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
-    setBusy(true);
     setError(null);
-    const res = await signIn("credentials", { email: String(form.get("email") ?? ""), password: String(form.get("password") ?? ""), redirect: false });
+    const parsed = signInSchema.safeParse({ email: String(form.get("email") ?? ""), password: String(form.get("password") ?? "") });
+    if (!parsed.success) {
+      const byField: Record<string, string> = {};
+      for (const i of parsed.error.issues) byField[String(i.path[0])] ??= i.message;
+      setFieldErrors(byField);
+      return;
+    }
+    setFieldErrors({});
+    setBusy(true);
+    const res = await signIn("credentials", { ...parsed.data, redirect: false });
     setBusy(false);
     if (!res || res.error) {
       setError(res?.error && res.error !== "CredentialsSignin" ? res.error : "That e-mail and password do not match an account.");
@@ -30,8 +40,8 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
   return (
     <Card>
       <form onSubmit={onSubmit} className="space-y-4" aria-label="Sign in">
-        <Field label="E-mail" name="email" type="email" autoComplete="username" required />
-        <Field label="Password" name="password" type="password" autoComplete="current-password" required />
+        <Field label="E-mail" name="email" type="email" autoComplete="username" required error={fieldErrors.email} />
+        <Field label="Password" name="password" type="password" autoComplete="current-password" required error={fieldErrors.password} />
         {error ? (
           <p role="alert" className="rounded-md bg-fault-soft px-3 py-2 text-sm text-fault">
             {error}

@@ -7,6 +7,8 @@ import type { CatalogError } from "@/lib/catalog/errors";
 import { kindLabel } from "@/lib/catalog/kinds";
 import type { CatalogDiff } from "@/lib/catalog/diff";
 import type { CatalogUpload, UploadPreview } from "@/lib/server/catalogs";
+import { catalogUploadFormSchema, type CatalogUploadFields } from "@/lib/catalog/upload-schema";
+import { describeError, FetchError, sendForm } from "@/lib/client/fetcher";
 import { Button } from "@/components/ui/button";
 
 type Phase =
@@ -17,13 +19,25 @@ type Phase =
   | { kind: "failed"; message: string }
   | { kind: "stored"; upload: CatalogUpload; diff: CatalogDiff };
 
-async function post(file: File, fields: Record<string, string>) {
+type PreviewAnswer = { mode: "preview"; preview: UploadPreview };
+type StoreAnswer = { mode: "store"; upload: CatalogUpload; diff: CatalogDiff };
+
+/** The form checked with the server's own schema, then sent as multipart. */
+function post<T>(fields: CatalogUploadFields): Promise<T> {
+  const checked = catalogUploadFormSchema.safeParse(fields);
+  if (!checked.success) return Promise.reject(new Error(checked.error.issues.map((i) => i.message).join("; ")));
   const form = new FormData();
-  for (const [k, v] of Object.entries(fields)) form.append(k, v);
-  form.append("file", file);
-  const res = await fetch("/api/catalog/uploads", { method: "POST", body: form });
-  const json = await res.json().catch(() => ({ error: `The server answered ${res.status} without a readable message.` }));
-  return { status: res.status, ok: res.ok, json };
+  form.append("mode", checked.data.mode);
+  if (checked.data.baseVersion !== undefined) form.append("baseVersion", String(checked.data.baseVersion));
+  form.append("file", checked.data.file);
+  return sendForm<T>("/api/catalog/uploads", form);
+}
+
+/** A refusal as the phase that shows it: a file that does not validate lists its located errors. */
+function refusal(e: unknown): Phase {
+  if (e instanceof FetchError && e.status === 422 && Array.isArray(e.body.errors)) return { kind: "refused", message: e.message, errors: e.body.errors as CatalogError[] };
+  if (e instanceof FetchError && e.unreachable) return { kind: "failed", message: "The server could not be reached; nothing was stored." };
+  return { kind: "failed", message: describeError(e) };
 }
 
 const countText = (d: CatalogDiff) => {
@@ -95,12 +109,10 @@ export function CatalogUploadForm({ maxBytes }: { maxBytes: number }) {
     }
     setPhase({ kind: "busy", what: "Checking the file…" });
     try {
-      const r = await post(file, { mode: "preview" });
-      if (r.ok) setPhase({ kind: "preview", preview: r.json.preview });
-      else if (r.status === 422 && Array.isArray(r.json.errors)) setPhase({ kind: "refused", message: r.json.error, errors: r.json.errors });
-      else setPhase({ kind: "failed", message: r.json.error ?? `The server answered ${r.status}.` });
-    } catch {
-      setPhase({ kind: "failed", message: "The server could not be reached; nothing was stored." });
+      const r = await post<PreviewAnswer>({ mode: "preview", file });
+      setPhase({ kind: "preview", preview: r.preview });
+    } catch (e) {
+      setPhase(refusal(e));
     }
   }
 
@@ -108,16 +120,13 @@ export function CatalogUploadForm({ maxBytes }: { maxBytes: number }) {
     if (!file) return;
     setPhase({ kind: "busy", what: "Storing…" });
     try {
-      const r = await post(file, { mode: "store", baseVersion: String(preview.baseVersion) });
-      if (r.ok) {
-        setPhase({ kind: "stored", upload: r.json.upload, diff: r.json.diff });
-        setFile(null);
-        if (input.current) input.current.value = "";
-        router.refresh();
-      } else if (r.status === 422 && Array.isArray(r.json.errors)) setPhase({ kind: "refused", message: r.json.error, errors: r.json.errors });
-      else setPhase({ kind: "failed", message: r.json.error ?? `The server answered ${r.status}.` });
-    } catch {
-      setPhase({ kind: "failed", message: "The server could not be reached; nothing was stored." });
+      const r = await post<StoreAnswer>({ mode: "store", baseVersion: preview.baseVersion, file });
+      setPhase({ kind: "stored", upload: r.upload, diff: r.diff });
+      setFile(null);
+      if (input.current) input.current.value = "";
+      router.refresh();
+    } catch (e) {
+      setPhase(refusal(e));
     }
   }
 

@@ -5,9 +5,8 @@ import type { KeyboardEvent } from "react";
 import { useEditor } from "@/components/editor/editor-context";
 import { detectorDragId } from "@/components/editor/editor-model";
 import { FindingMarker } from "@/components/editor/finding-marker";
+import { isLifeSafety } from "@/lib/catalog/life-safety";
 import { unassign } from "@/lib/layout/operations";
-
-const isFire = (category: string | undefined, lifeSafety: boolean | undefined) => !!lifeSafety || category === "smoke" || category === "heat";
 
 /** What a chip shows; also drawn in the drag overlay. */
 export function ChipFace({ detectorId }: { detectorId: string }) {
@@ -24,7 +23,7 @@ export function ChipFace({ detectorId }: { detectorId: string }) {
           </span>
         ) : null}
         <span className="line-clamp-2 break-words">{d?.label ?? `Unknown detector ${detectorId}`}</span>
-        {isFire(c?.category, c?.lifeSafety) ? <span className="mt-px shrink-0 rounded bg-fault px-1 text-[10px] font-semibold text-white">FIRE</span> : null}
+        {c && isLifeSafety(c) ? <span className="mt-px shrink-0 rounded bg-fault px-1 text-[10px] font-semibold text-white">FIRE</span> : null}
       </span>
       <span className="truncate text-[11px] text-slate-500">
         {c?.name ?? d?.catalogId} · {d ? `${d.cableM} m` : ""}

@@ -1,3 +1,4 @@
+import { isLifeSafety } from "@/lib/catalog/life-safety";
 import type { InputType } from "@/lib/catalog/schema";
 import type { Finding, FindingTarget } from "@/lib/findings";
 import { formatOhms } from "@/lib/resistors/format-ohms";
@@ -6,6 +7,7 @@ import { assign, defaultScheme, findDetector, inputBlockOf, makeShared, reorderB
 import { boardName, inputName } from "@/lib/layout/names";
 import type { LayoutDocument, LayoutInput } from "@/lib/layout/schema";
 import type { SolveResult } from "@/lib/solver";
+import { PLACEMENT_WORDS, SCHEME_WORDS } from "@/lib/vocabulary/words";
 
 // Pure helpers of the editor: drag items and drop targets, zone numbers, finding anchors, resistor text.
 
@@ -142,18 +144,9 @@ export function resistorText(lines: ResistorLine[]): string {
   return lines.length ? lines.map((l) => `${l.label} ${formatOhms(l.ohms)}`).join(" · ") : "no resistors";
 }
 
-export const schemeLabels: Record<string, string> = {
-  none: "no resistor",
-  "single-eol": "single end-of-line",
-  "double-eol": "double end-of-line",
-  shared: "shared input",
-};
+export const schemeLabels: Record<string, string> = SCHEME_WORDS;
 
-export const placementLabels: Record<string, string> = {
-  "at-detector": "resistors at the detector",
-  "at-panel": "resistor at the panel",
-  "loop-back": "loop-back resistor",
-};
+export const placementLabels: Record<string, string> = PLACEMENT_WORDS;
 
 /**
  * Detectors deleted from the schedule since the layout was saved cannot stay on inputs (the server refuses
@@ -184,7 +177,7 @@ export function hasLifeSafety(ctx: LayoutContext): boolean {
   const ix = indexCatalog(ctx.catalog);
   return ctx.schedule.some((d) => {
     const c = ix.detectors.get(d.catalogId);
-    return !!c && (c.lifeSafety || c.category === "smoke" || c.category === "heat");
+    return !!c && isLifeSafety(c);
   });
 }
 

@@ -28,18 +28,7 @@ export interface BenchSettings {
   fault: Fault;
 }
 
-export const SCHEME_WORDS: Record<WiringScheme, string> = {
-  none: "no resistor",
-  "single-eol": "single end-of-line",
-  "double-eol": "double end-of-line",
-  shared: "shared input",
-};
-
-export const PLACEMENT_WORDS: Record<Placement, string> = {
-  "at-detector": "resistor at the detector",
-  "at-panel": "resistor at the panel",
-  "loop-back": "loop-back resistor",
-};
+export { SCHEME_WORDS, PLACEMENT_WORDS } from "@/lib/vocabulary/words";
 
 export const PLACEMENT_HINTS: Record<Placement, string> = {
   "at-detector": "fitted at the far end, as intended",

@@ -2,7 +2,7 @@
 // A resistor value: typed freely (4k7, 4.7 kΩ, 4700) or picked from the E24 series, with what the input type expects.
 import { useId, useState } from "react";
 import { formatOhms, seriesValues } from "@/lib/loop";
-import { ohmsText, parseOhms } from "./parse-ohms";
+import { ohmsText, parseOhms } from "@/lib/resistors/parse-ohms";
 
 const E24_CHOICES = seriesValues("E24", 10, 1_000_000); // IEC 60063 E24, 10 Ω to 1 MΩ
 const DECADES = [10, 100, 1e3, 1e4, 1e5, 1e6].map((lo) => ({ lo, values: E24_CHOICES.filter((v) => v >= lo && v < lo * 10) })).filter((d) => d.values.length);

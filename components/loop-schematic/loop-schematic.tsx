@@ -5,6 +5,7 @@ import { useId } from "react";
 import type { InputType } from "@/lib/catalog/schema";
 import type { DetectorState, Fault, LoopSpec } from "@/lib/loop";
 import { FAULT_WORDS, statesLabel } from "@/lib/loop";
+import { PLACEMENT_WORDS, SCHEME_WORDS } from "@/lib/vocabulary/words";
 import { schematicModel, type ContactEl, type ParallelEl, type ResistorEl, type Rung, type SeriesEl } from "./schematic-model";
 import { ContactH, ContactV, Dot, FAULT, INK, MUTED, ResistorH, ResistorV, WARN } from "./symbols";
 
@@ -75,9 +76,9 @@ function Parallel({ p, x, yA, tol }: { p: ParallelEl; x: number; yA: number; tol
 }
 
 function describe(loop: LoopSpec, states: readonly DetectorState[], fault: Fault): string {
-  const where = loop.scheme === "none" ? "no resistor" : loop.placement === "at-panel" ? "resistor at the panel" : loop.placement === "loop-back" ? "loop-back resistor" : "resistor at the detector";
+  const where = loop.scheme === "none" ? SCHEME_WORDS.none : PLACEMENT_WORDS[loop.placement];
   const f = fault === "none" ? "no fault" : FAULT_WORDS[fault];
-  return `${loop.scheme} loop, ${where}, ${loop.detectors.length} detector${loop.detectors.length > 1 ? "s" : ""} (${statesLabel(loop.detectors, states)}), ${f}; cable ${loop.cable.lengthM} m of ${gaugeText(loop)}.`;
+  return `${SCHEME_WORDS[loop.scheme]} loop, ${where}, ${loop.detectors.length} detector${loop.detectors.length > 1 ? "s" : ""} (${statesLabel(loop.detectors, states)}), ${f}; cable ${loop.cable.lengthM} m of ${gaugeText(loop)}.`;
 }
 
 export function LoopSchematic({ loop, states: given, fault = "none", inputType, readingText, className }: LoopSchematicProps) {
@@ -149,7 +150,7 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
         <g>
           <rect x={TERM_X + 8} y={yA - 60} width={PX - TERM_X - 16} height={bottom - yA + 50} rx={8} fill="none" stroke={atPanelWarning ? WARN : "#b9b4a6"} strokeDasharray="5 4" />
           <text x={TERM_X + 16} y={yA - 42} fontSize={12.5} fontWeight={600} fill={atPanelWarning ? WARN : MUTED}>
-            {atPanelWarning ? "resistor at the panel" : "at the panel"}
+            {atPanelWarning ? PLACEMENT_WORDS["at-panel"] : "at the panel"}
           </text>
         </g>
       ) : null}

@@ -2,57 +2,68 @@
 
 import { useState } from "react";
 import { roles, roleLabels, type Role } from "@/lib/auth/permissions";
+import { inviteSchema, roleChangeSchema } from "@/lib/members/member-schema";
+import { describeError, sendJson } from "@/lib/client/fetcher";
+import { useMembers, type MemberList } from "@/lib/client/use-members";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { Field } from "@/components/ui/field";
 
-interface Data {
-  members: { membershipId: number; userId: number; name: string; email: string; role: Role }[];
-  invitations: { id: number; email: string; role: Role; expiresAt: string }[];
-}
-
-async function send(url: string, method: string, body: unknown) {
-  const res = await fetch(url, { method, headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-  const json = await res.json().catch(() => ({ error: "The server sent an unreadable answer." }));
-  if (!res.ok) throw new Error(json.issues?.length ? `${json.error} ${json.issues.map((i: { message: string }) => i.message).join("; ")}` : json.error);
-  return json;
-}
-
-export function MemberAdmin({ initial, selfUserId }: { initial: Data; selfUserId: number }) {
-  const [data, setData] = useState(initial);
-  const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
-
-  async function refresh() {
-    setData(await (await fetch("/api/members")).json());
+/** zod issues keyed by their first path segment, for the line under each field. */
+function fieldErrors(issues: { path: PropertyKey[]; message: string }[]): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const i of issues) {
+    const key = String(i.path[0] ?? "");
+    out[key] = out[key] ? `${out[key]}; ${i.message}` : i.message;
   }
+  return out;
+}
+
+export function MemberAdmin({ initial, selfUserId }: { initial: MemberList; selfUserId: number }) {
+  const { members, invitations, error: loadError, mutate } = useMembers(initial);
+  const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
+  const [inviteErrors, setInviteErrors] = useState<Record<string, string>>({});
 
   async function invite(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const target = e.currentTarget;
+    setMessage(null);
+    const parsed = inviteSchema.safeParse({ email: form.get("email"), role: form.get("role") });
+    if (!parsed.success) {
+      setInviteErrors(fieldErrors(parsed.error.issues));
+      return;
+    }
+    setInviteErrors({});
     try {
-      const r = await send("/api/members", "POST", { email: form.get("email"), role: form.get("role") });
+      const r = await sendJson<{ email: string; role: Role }>("/api/members", "POST", parsed.data);
       setMessage({ kind: "ok", text: `Invitation sent to ${r.email}.` });
       target.reset();
-      await refresh();
+      await mutate();
     } catch (err) {
-      setMessage({ kind: "error", text: (err as Error).message });
+      setMessage({ kind: "error", text: describeError(err) });
     }
   }
 
   async function setRole(membershipId: number, role: Role) {
+    setMessage(null);
     try {
-      await send(`/api/members/${membershipId}`, "PATCH", { role });
+      await sendJson(`/api/members/${membershipId}`, "PATCH", roleChangeSchema.parse({ role }));
       setMessage({ kind: "ok", text: "Role changed." });
-      await refresh();
+      await mutate();
     } catch (err) {
-      setMessage({ kind: "error", text: (err as Error).message });
+      setMessage({ kind: "error", text: describeError(err) });
     }
   }
 
   return (
     <div className="grid gap-6 lg:grid-cols-3">
       <Card className="lg:col-span-2">
+        {loadError ? (
+          <p role="alert" className="mb-3 text-sm text-fault">
+            The list could not be refreshed: {describeError(loadError)}
+          </p>
+        ) : null}
         <table className="w-full text-sm">
           <thead className="text-left text-slate-500">
             <tr>
@@ -62,7 +73,7 @@ export function MemberAdmin({ initial, selfUserId }: { initial: Data; selfUserId
             </tr>
           </thead>
           <tbody>
-            {data.members.map((m) => (
+            {members.map((m) => (
               <tr key={m.membershipId} className="border-t border-line">
                 <td className="py-2">{m.name}</td>
                 <td>{m.email}</td>
@@ -79,11 +90,11 @@ export function MemberAdmin({ initial, selfUserId }: { initial: Data; selfUserId
             ))}
           </tbody>
         </table>
-        {data.invitations.length ? (
+        {invitations.length ? (
           <>
             <h2 className="mt-6 font-semibold">Open invitations</h2>
             <ul className="mt-2 text-sm">
-              {data.invitations.map((i) => (
+              {invitations.map((i) => (
                 <li key={i.id}>
                   {i.email} — {roleLabels[i.role]} (until {new Date(i.expiresAt).toLocaleDateString()})
                 </li>
@@ -95,7 +106,7 @@ export function MemberAdmin({ initial, selfUserId }: { initial: Data; selfUserId
       <Card>
         <h2 className="mb-3 font-semibold">Invite by e-mail</h2>
         <form onSubmit={invite} className="space-y-3">
-          <Field label="E-mail" name="email" type="email" required />
+          <Field label="E-mail" name="email" type="email" required error={inviteErrors.email} />
           <label className="block text-sm" htmlFor="invite-role">
             <span className="font-medium">Invite as</span>
             <select id="invite-role" name="role" className="mt-1 block w-full rounded-md border border-line bg-white px-3 py-2" defaultValue="designer">
@@ -105,6 +116,7 @@ export function MemberAdmin({ initial, selfUserId }: { initial: Data; selfUserId
                 </option>
               ))}
             </select>
+            {inviteErrors.role ? <span className="mt-1 block text-xs text-fault">{inviteErrors.role}</span> : null}
           </label>
           <Button type="submit">Send invitation</Button>
         </form>

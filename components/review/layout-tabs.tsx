@@ -4,7 +4,7 @@ import { StateBadge } from "@/components/review/state-badge";
 
 export type LayoutTab = "editor" | "review" | "sheet" | "commissioning";
 
-const TABS: { tab: LayoutTab; label: string; path: string }[] = [
+export const TABS: { tab: LayoutTab; label: string; path: string }[] = [
   { tab: "editor", label: "Editor", path: "" },
   { tab: "review", label: "Review", path: "/review" },
   { tab: "sheet", label: "Terminal sheet", path: "/sheet" },

@@ -3,13 +3,15 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import type { ReviewStep } from "@/lib/review/review-schema";
+import { reviewActionSchema, type ReviewStep } from "@/lib/review/review-schema";
 import { REVIEW_STATES, REVIEW_STATE_WORDS } from "@/lib/review/state-machine";
-import type { CommentView, ReviewView } from "@/lib/server/review";
+import type { ReviewView } from "@/lib/server/review";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
-import { HttpError, sendJson } from "@/components/review/http";
-import { DECISION_WORDS, STEP_HINTS, STEP_LABELS, targetText, when } from "@/components/review/review-words";
+import { describeError, FetchError, sendJson } from "@/lib/client/fetcher";
+import { useReview } from "@/lib/client/use-review";
+import { DECISION_WORDS, STEP_HINTS, STEP_LABELS, when } from "@/components/review/review-words";
+import { Comments } from "@/components/review/review-comments";
 
 export interface ReviewSummary {
   counts: { error: number; warning: number; note: number };
@@ -33,7 +35,8 @@ const SEVERITY_STYLE = { error: "text-fault", warning: "text-warn", note: "text-
 
 export function ReviewPanel({ initial, summary, boards, canComment, lifeSafety }: ReviewPanelProps) {
   const router = useRouter();
-  const [view, setView] = useState(initial);
+  const { data, mutate } = useReview(initial.layoutId, initial);
+  const view = data ?? initial;
   const [reason, setReason] = useState("");
   const [busy, setBusy] = useState<ReviewStep | null>(null);
   const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
@@ -46,19 +49,24 @@ export function ReviewPanel({ initial, summary, boards, canComment, lifeSafety }
       setMessage({ kind: "error", text: "Say why it goes back to draft (in the box below), so its author knows what to change." });
       return;
     }
+    const body = reviewActionSchema.safeParse({ action, revision: view.review.currentRevision, ...(reason.trim() ? { reason: reason.trim() } : {}) });
+    if (!body.success) {
+      setMessage({ kind: "error", text: body.error.issues.map((i) => i.message).join("; ") });
+      return;
+    }
     setBusy(action);
     setMessage(null);
     try {
       const next =
         action === "commission"
           ? await sendJson<ReviewView>(`/api/layouts/${view.layoutId}/commissioning/complete`, "POST")
-          : await sendJson<ReviewView>(`/api/layouts/${view.layoutId}/review`, "POST", { action, revision: view.review.currentRevision, ...(reason.trim() ? { reason: reason.trim() } : {}) });
-      setView(next);
+          : await sendJson<ReviewView>(`/api/layouts/${view.layoutId}/review`, "POST", body.data);
+      await mutate(next, { revalidate: false });
       setReason("");
       setMessage({ kind: "ok", text: `Revision ${next.review.currentRevision} is now ${REVIEW_STATE_WORDS[next.review.state]}.` });
       router.refresh();
     } catch (e) {
-      setMessage({ kind: "error", text: e instanceof HttpError ? e.message : "The server could not be reached; nothing was changed. Try again." });
+      setMessage({ kind: "error", text: e instanceof FetchError && e.unreachable ? "The server could not be reached; nothing was changed. Try again." : describeError(e) });
     } finally {
       setBusy(null);
     }
@@ -177,7 +185,7 @@ export function ReviewPanel({ initial, summary, boards, canComment, lifeSafety }
       </div>
 
       <div className="flex flex-col gap-4">
-        <Comments layoutId={view.layoutId} comments={view.comments} boards={boards} boardName={boardName} canComment={canComment} onAdded={(c) => setView((v) => ({ ...v, comments: [...v.comments, c] }))} />
+        <Comments layoutId={view.layoutId} comments={view.comments} boards={boards} boardName={boardName} canComment={canComment} onAdded={(c) => mutate((v) => (v ? { ...v, comments: [...v.comments, c] } : v), { revalidate: false })} />
         <Card>
           <h2 className="text-lg font-semibold">Decisions</h2>
           {view.decisions.length === 0 ? <p className="mt-2 text-sm text-slate-600">No review steps yet.</p> : null}
@@ -196,103 +204,5 @@ export function ReviewPanel({ initial, summary, boards, canComment, lifeSafety }
         </Card>
       </div>
     </div>
-  );
-}
-
-function Comments({
-  layoutId,
-  comments,
-  boards,
-  boardName,
-  canComment,
-  onAdded,
-}: {
-  layoutId: number;
-  comments: CommentView[];
-  boards: { key: string; name: string; inputs: number }[];
-  boardName: (key: string) => string;
-  canComment: boolean;
-  onAdded: (c: CommentView) => void;
-}) {
-  const [body, setBody] = useState("");
-  const [boardKey, setBoardKey] = useState("");
-  const [input, setInput] = useState("");
-  const [error, setError] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
-  const board = boards.find((b) => b.key === boardKey);
-
-  async function add(e: React.FormEvent) {
-    e.preventDefault();
-    setBusy(true);
-    setError(null);
-    const target = !boardKey ? undefined : input ? { kind: "input", boardKey, input: Number(input) } : { kind: "board", boardKey };
-    try {
-      const r = await sendJson<{ comment: CommentView }>(`/api/layouts/${layoutId}/comments`, "POST", { body, ...(target ? { target } : {}) });
-      onAdded(r.comment);
-      setBody("");
-    } catch (err) {
-      setError(err instanceof HttpError ? err.message : "The server could not be reached; the comment was not saved.");
-    } finally {
-      setBusy(false);
-    }
-  }
-
-  return (
-    <Card>
-      <h2 className="text-lg font-semibold">Comments</h2>
-      {comments.length === 0 ? <p className="mt-2 text-sm text-slate-600">No comments yet.</p> : null}
-      <ol className="mt-2 space-y-3" data-testid="comments">
-        {comments.map((c) => {
-          const about = targetText(c.target, boardName);
-          return (
-            <li key={c.id} className="rounded-md border border-line bg-paper p-2 text-sm">
-              <p className="text-xs text-slate-500">
-                {c.author ?? "A former member"} · revision {c.revision} · {when(c.createdAt)}
-                {about ? ` · about ${about}` : ""}
-              </p>
-              <p className="mt-1 whitespace-pre-wrap">{c.body}</p>
-            </li>
-          );
-        })}
-      </ol>
-      {canComment ? (
-        <form onSubmit={add} className="mt-3 flex flex-col gap-2 text-sm">
-          <label className="block">
-            <span className="font-medium">Add a comment</span>
-            <textarea required maxLength={4000} rows={3} className="mt-1 block w-full rounded-md border border-line bg-white px-3 py-2" value={body} onChange={(e) => setBody(e.target.value)} />
-          </label>
-          <div className="flex flex-wrap items-end gap-2">
-            <label className="block">
-              <span className="text-xs text-slate-600">About</span>
-              <select className="mt-1 block rounded-md border border-line bg-white px-2 py-1.5" value={boardKey} onChange={(e) => (setBoardKey(e.target.value), setInput(""))}>
-                <option value="">the whole layout</option>
-                {boards.map((b) => (
-                  <option key={b.key} value={b.key}>
-                    {b.name}
-                  </option>
-                ))}
-              </select>
-            </label>
-            {board ? (
-              <label className="block">
-                <span className="text-xs text-slate-600">Input</span>
-                <select className="mt-1 block rounded-md border border-line bg-white px-2 py-1.5" value={input} onChange={(e) => setInput(e.target.value)}>
-                  <option value="">the whole board</option>
-                  {Array.from({ length: board.inputs }, (_, i) => (
-                    <option key={i + 1} value={i + 1}>
-                      input {i + 1}
-                    </option>
-                  ))}
-                </select>
-              </label>
-            ) : null}
-            <Button type="submit" disabled={busy || !body.trim()}>
-              {busy ? "Saving…" : "Comment"}
-            </Button>
-          </div>
-          {error ? <p className="text-sm font-medium text-fault">{error}</p> : null}
-        </form>
-      ) : null}
-    </Card>
   );
 }

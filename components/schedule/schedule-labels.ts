@@ -1,4 +1,5 @@
 import type { SupervisionPreference } from "@/lib/schedule/schema";
+import { SUPERVISION_WORDS } from "@/lib/vocabulary/words";
 
 export interface DetectorType {
   id: string;
@@ -12,9 +13,4 @@ export interface SiteArea {
   rooms: string[];
 }
 
-export const supervisionLabels: Record<SupervisionPreference, string> = {
-  "double-eol": "double end-of-line",
-  "single-eol": "single end-of-line",
-  "shared-ok": "may share an input",
-  none: "no resistor",
-};
+export const supervisionLabels: Record<SupervisionPreference, string> = SUPERVISION_WORDS;

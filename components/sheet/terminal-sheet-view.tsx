@@ -3,9 +3,9 @@
 import { useState } from "react";
 import type { SheetView } from "@/lib/server/sheets";
 import type { SheetInput, SpareInput } from "@/lib/sheet/sheet-types";
-import { PAPER_WORDS, type PaperSize } from "@/lib/sheet/sheet-request-schema";
+import { PAPER_WORDS, sendSheetSchema, type PaperSize } from "@/lib/sheet/sheet-request-schema";
 import { Button } from "@/components/ui/button";
-import { HttpError, sendJson } from "@/components/review/http";
+import { describeError, FetchError, sendJson } from "@/lib/client/fetcher";
 import { SheetInputBlock } from "@/components/sheet/sheet-input-block";
 
 export interface TerminalSheetViewProps {
@@ -30,10 +30,10 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal }: Ter
     setSending(true);
     setSent(null);
     try {
-      const r = await sendJson<{ sent: { to: string; installer: string; fileName: string; sizeBytes: number } }>(`/api/layouts/${view.layoutId}/sheet/send`, "POST", { size });
+      const r = await sendJson<{ sent: { to: string; installer: string; fileName: string; sizeBytes: number } }>(`/api/layouts/${view.layoutId}/sheet/send`, "POST", sendSheetSchema.parse({ size }));
       setSent({ kind: "ok", text: `Sent to ${r.sent.installer} <${r.sent.to}> with ${r.sent.fileName} (${Math.max(1, Math.round(r.sent.sizeBytes / 1024))} KiB, ${PAPER_WORDS[size]}).` });
     } catch (e) {
-      setSent({ kind: "error", text: e instanceof HttpError ? e.message : "The server could not be reached; nothing was sent." });
+      setSent({ kind: "error", text: e instanceof FetchError && e.unreachable ? "The server could not be reached; nothing was sent." : describeError(e) });
     } finally {
       setSending(false);
     }

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { shippedCatalog } from "@/lib/catalog/shipped";
-import { parseCsvRecords } from "@/lib/schedule/csv";
+import { readCsv } from "@/lib/csv/csv";
 import { batterySize, billOfMaterials } from "@/lib/bom/bill-of-materials";
-import { bomCsv, csvField, toCsv, zoneListCsv } from "@/lib/bom/csv";
+import { bomCsv, zoneListCsv } from "@/lib/bom/csv";
 import { buildTerminalSheet } from "@/lib/sheet/build-sheet";
 import { largeLayout, largeSchedule, midLayout, midSchedule } from "@/lib/sheet/testing/sample-layouts";
 
@@ -55,29 +55,22 @@ describe("bill of materials", () => {
   });
 });
 
-describe("CSV exports (RFC 4180)", () => {
-  it("quotes fields with commas, quotes and line breaks, doubling quotes, CRLF between records", () => {
-    // RFC 4180 §2: fields containing line breaks, double quotes or commas are enclosed in double quotes; a quote inside is doubled
-    expect(csvField('Door, "main"')).toBe('"Door, ""main"""');
-    expect(csvField("two\nlines")).toBe('"two\nlines"');
-    expect(csvField("plain")).toBe("plain");
-    expect(toCsv(["a", "b"], [["1", null]])).toBe("a,b\r\n1,\r\n");
-  });
-  it("exports the zone list, read back by the schedule's independent CSV parser", () => {
+describe("CSV exports", () => {
+  it("exports the zone list, read back by the CSV reader", () => {
     const schedule = midSchedule.map((d) => (d.id === "d-door" ? { ...d, label: 'Front door, "main"' } : d));
     const csv = zoneListCsv(buildTerminalSheet(midLayout, schedule, catalog));
-    const { records, error } = parseCsvRecords(csv.replace(/\r\n$/, ""));
+    const { records, error } = readCsv(csv);
     expect(error).toBeNull();
-    expect(records[0].fields).toEqual(["zone", "label", "area", "room", "device_type", "board", "input", "report_types"]);
-    expect(records[1].fields).toEqual(["1", 'Front door, "main"', "Ground floor", "Lobby", "Surface door contact", "Control panel", "1", "normal; active (alarm); open; short"]);
-    expect(records.map((r) => r.fields[0])).toEqual(["zone", "1", "2", "3", "4", "5"]);
+    expect(records[0]).toEqual(["zone", "label", "area", "room", "device_type", "board", "input", "report_types"]);
+    expect(records[1]).toEqual(["1", 'Front door, "main"', "Ground floor", "Lobby", "Surface door contact", "Control panel", "1", "normal; active (alarm); open / cut; short"]);
+    expect(records.map((r) => r[0])).toEqual(["zone", "1", "2", "3", "4", "5"]);
   });
   it("exports the bill of materials with a total record", () => {
-    const { records, error } = parseCsvRecords(bomCsv(billOfMaterials(midLayout, midSchedule, catalog)).replace(/\r\n$/, ""));
+    const { records, error } = readCsv(bomCsv(billOfMaterials(midLayout, midSchedule, catalog)));
     expect(error).toBeNull();
     const panelName = catalog.panels.find((p) => p.id === "panel-mid-16")!.name;
-    expect(records[1].fields).toEqual(["panel", "panel-mid-16", panelName, "1", "260.00", "260.00", ""]);
-    const total = records.at(-1)!.fields;
+    expect(records[1]).toEqual(["panel", "panel-mid-16", panelName, "1", "260.00", "260.00", ""]);
+    const total = records.at(-1)!;
     expect([total[0], total[5]]).toEqual(["total", "472.00"]);
   });
 });

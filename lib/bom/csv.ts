@@ -1,18 +1,10 @@
 import type { Report } from "@/lib/catalog/schema";
-import { REPORT_WORDS } from "@/lib/loop/row-labels";
+import { writeCsv, type CsvCell } from "@/lib/csv/csv";
 import type { BillOfMaterials } from "@/lib/bom/bill-of-materials";
 import type { SheetInput, TerminalSheet } from "@/lib/sheet/sheet-types";
+import { REPORT_WORDS } from "@/lib/vocabulary/words";
 
-// CSV exports (RFC 4180): a header record, CRLF between records, fields quoted when they hold a comma, a quote or a line break.
-
-export function csvField(v: string | number | null): string {
-  const s = v === null ? "" : String(v);
-  return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
-}
-
-export function toCsv(header: readonly string[], rows: readonly (readonly (string | number | null)[])[]): string {
-  return [header, ...rows].map((r) => r.map(csvField).join(",")).join("\r\n") + "\r\n";
-}
+// The layout's CSV exports, written through lib/csv (quoting and the formula guard live there).
 
 export const ZONE_LIST_COLUMNS = ["zone", "label", "area", "room", "device_type", "board", "input", "report_types"] as const;
 
@@ -20,21 +12,21 @@ const reportList = (rs: readonly Report[]) => rs.map((r) => REPORT_WORDS[r]).joi
 
 /** One record per zone, in zone order. */
 export function zoneListCsv(sheet: TerminalSheet): string {
-  const rows: (string | number)[][] = [];
+  const rows: [number, ...CsvCell[]][] = [];
   for (const b of sheet.boards)
     for (const r of b.rows) {
       if (r.spare) continue;
       for (const d of (r as SheetInput).detectors) rows.push([d.zone, d.label, d.area, d.room, d.deviceType, b.name, r.input, reportList(d.reports)]);
     }
-  rows.sort((a, b) => Number(a[0]) - Number(b[0]));
-  return toCsv(ZONE_LIST_COLUMNS, rows);
+  rows.sort((a, b) => a[0] - b[0]);
+  return writeCsv(ZONE_LIST_COLUMNS, rows);
 }
 
 export const BOM_COLUMNS = ["kind", "catalog_id", "description", "quantity", "unit_price", "total", "note"] as const;
 
 /** The bill of materials, with a final total record over the priced lines. */
 export function bomCsv(bom: BillOfMaterials): string {
-  const rows: (string | number | null)[][] = bom.lines.map((l) => [l.kind, l.catalogId, l.description, l.quantity, l.unitPrice === null ? null : l.unitPrice.toFixed(2), l.total === null ? null : l.total.toFixed(2), l.note]);
+  const rows: CsvCell[][] = bom.lines.map((l) => [l.kind, l.catalogId, l.description, l.quantity, l.unitPrice === null ? null : l.unitPrice.toFixed(2), l.total === null ? null : l.total.toFixed(2), l.note]);
   rows.push(["total", null, `priced lines (${bom.unpricedLines} not priced)`, null, null, bom.total.toFixed(2), null]);
-  return toCsv(BOM_COLUMNS, rows);
+  return writeCsv(BOM_COLUMNS, rows);
 }

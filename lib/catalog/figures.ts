@@ -1,4 +1,5 @@
 import { kindLabel } from "./kinds";
+import { CATEGORY_WORDS, SCHEME_WORDS } from "@/lib/vocabulary/words";
 import { catalogKinds, type Catalog, type CatalogKind, type Detector, type ExpansionBoard, type InputType, type Keypad, type Panel, type PowerSupply } from "./schema";
 
 /** One figure of an entry for a table cell: `key` is the schema field it comes from. */
@@ -25,7 +26,7 @@ const yesNo = (b: boolean) => (b ? "yes" : "no");
 const f = (key: string, label: string, value: number | string, unit = ""): Figure => ({ key, label, value, unit });
 
 function inputTypeFigures(it: InputType): Figure[] {
-  const out = [f("schemes", "Wiring schemes", it.schemes.join(", "))];
+  const out = [f("schemes", "Wiring schemes", it.schemes.map((s) => SCHEME_WORDS[s]).join(", "))];
   if (it.eolOhms !== undefined) out.push(f("eolOhms", "End-of-line resistor", it.eolOhms, "Ω"));
   if (it.alarmOhms !== undefined) out.push(f("alarmOhms", "Alarm resistor", it.alarmOhms, "Ω"));
   if (it.sharedOhms) out.push(f("sharedOhms", "Shared-input resistors", `${it.sharedOhms[0]} / ${it.sharedOhms[1]}`, "Ω"));
@@ -82,7 +83,7 @@ function powerSupplyFigures(p: PowerSupply): Figure[] {
 
 function detectorFigures(d: Detector): Figure[] {
   const out = [
-    f("category", "Category", d.category),
+    f("category", "Category", CATEGORY_WORDS[d.category]),
     f("contact", "Contact", d.contact),
     f("tamper", "Tamper loop", yesNo(d.tamper)),
     f("lifeSafety", "Life-safety device", yesNo(d.lifeSafety)),

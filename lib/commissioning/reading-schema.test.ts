@@ -11,6 +11,8 @@ describe("meter readings as typed", () => {
     expect(parseMeterReading("2R2")).toEqual({ kind: "ohms", ohms: 2.2 });
     expect(parseMeterReading("1M0")).toEqual({ kind: "ohms", ohms: 1e6 });
     expect(parseMeterReading("0.3 ohm")).toEqual({ kind: "ohms", ohms: 0.3 });
+    expect(parseMeterReading("0")).toEqual({ kind: "ohms", ohms: 0 }); // a meter across a short; no resistor value is 0
+    expect(parseMeterReading("470R")).toEqual({ kind: "ohms", ohms: 470 });
   });
   it("reads the meter's overload display as open", () => {
     for (const s of ["OL", "o.l.", "open", "∞"]) expect(parseMeterReading(s)).toEqual({ kind: "open" });

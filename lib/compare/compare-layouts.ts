@@ -4,7 +4,9 @@ import { boardNames } from "@/lib/layout/names";
 import type { LayoutDocument } from "@/lib/layout/schema";
 import { FAULT_WORDS } from "@/lib/loop/row-labels";
 import type { Schedule } from "@/lib/schedule/schema";
+import { severityRank, type Severity } from "@/lib/findings";
 import { createSolver } from "@/lib/solver";
+import { isLifeSafety } from "@/lib/solver/resolve";
 
 // Side by side: what each candidate layout costs, how many inputs it uses and leaves, what each supply carries,
 // how much of it is supervised, what the solver found, and what each shared input trades away.
@@ -49,6 +51,8 @@ export interface ComparisonColumn {
   supplies: SupplyColumn[];
   coverage: { used: number; covered: number; share: number | null };
   findings: { error: number; warning: number; note: number };
+  /** Every finding of the one solve, errors first. */
+  findingList: { severity: Severity; message: string }[];
   shared: SharedTradeoff[];
   bom: BillOfMaterials;
 }
@@ -59,6 +63,8 @@ export interface LayoutComparison {
   best: { cost: number[]; coverage: number[]; errors: number[]; spare: number[] };
   /** Short plain sentences on how the candidates differ. */
   summary: string[];
+  /** The schedule holds smoke, heat or other life-safety devices: the comparison carries the fire caution. */
+  lifeSafety: boolean;
 }
 
 function argBest(values: (number | null)[], better: (a: number, b: number) => boolean): number[] {
@@ -102,6 +108,7 @@ export function compareLayouts(candidates: readonly CompareCandidate[], schedule
       }),
       coverage: r.coverage,
       findings: r.counts,
+      findingList: r.findings.map((f) => ({ severity: f.severity, message: f.message })).sort((a, b) => severityRank[a.severity] - severityRank[b.severity]),
       shared: r.shared.entries.map((e) => {
         const where = `${names.get(e.boardKey) ?? e.boardKey}, input ${e.input}`;
         const labels = e.detectorIds.map((id) => schedule.find((d) => d.id === id)?.label ?? id);
@@ -127,5 +134,9 @@ export function compareLayouts(candidates: readonly CompareCandidate[], schedule
     summary.push(`${c.name}: ${c.inputs.used} of ${c.inputs.total} inputs used, ${c.inputs.spare} spare; supervision coverage ${pct(c.coverage.share)}; ${c.findings.error} error${c.findings.error === 1 ? "" : "s"}, ${c.findings.warning} warning${c.findings.warning === 1 ? "" : "s"}.`);
     if (c.shared.length) summary.push(`${c.name} saves ${c.shared.length} input${c.shared.length === 1 ? "" : "s"} by sharing: ${c.shared.map((s) => s.text).join(" ")}`);
   }
-  return { columns, best, summary };
+  const lifeSafety = schedule.some((d) => {
+    const c = catalog.detectors.find((x) => x.id === d.catalogId);
+    return !!c && isLifeSafety(c);
+  });
+  return { columns, best, summary, lifeSafety };
 }

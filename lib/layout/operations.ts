@@ -1,3 +1,4 @@
+import { isLifeSafety } from "@/lib/catalog/life-safety";
 import type { Catalog, InputType, WiringScheme } from "@/lib/catalog/schema";
 import type { Schedule, ScheduleDetector, SupervisionPreference } from "@/lib/schedule/schema";
 import { boardEntry, boardInputs, indexCatalog, type CatalogIndex } from "@/lib/layout/catalog-index";
@@ -151,7 +152,7 @@ export function makeShared(doc: LayoutDocument, ctx: LayoutContext, detectorId: 
   const other = target.detectorIds[0];
   const lifeSafety = [detectorId, other].find((d) => {
     const c = ix.detectors.get(detectorOf(ctx, d)?.catalogId ?? "");
-    return c?.lifeSafety || c?.category === "smoke" || c?.category === "heat";
+    return !!c && isLifeSafety(c);
   });
   if (lifeSafety) return refuse(doc, `${label(ctx, lifeSafety)} is a life-safety device and must have an input of its own`);
   const base = without(doc, ctx, detectorId);

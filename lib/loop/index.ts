@@ -9,6 +9,8 @@ export { rowsMatchingReading } from "./meter-reading";
 export { LIFE_SAFETY_CAUTION } from "./loop-findings";
 export { statesLabel, rowLabel, REPORT_WORDS, FAULT_WORDS } from "./row-labels";
 export { loopJsonReplacer, loopJsonReviver } from "./loop-json";
+export { CORE_COLOURS, CABLE_CORES_WORDS, coresOf, conductorFaultLabel, enumerateConductorFaults, positionWords } from "./conductors";
+export { classAProblems } from "./class-a";
 
 export {
   COPPER_RESISTIVITY_20C,
@@ -44,11 +46,16 @@ export {
   loopSpecSchema,
   loopDetectorSchema,
   cableSpecSchema,
-  cableGaugeSchema,
   placementSchema,
+  cableCoresSchema,
+  coreColourSchema,
+  conductorFaultSchema,
+  conductorFaultsSchema,
+  pathwaySchema,
   findingTargetSchema,
   inputTypeRefSchema,
   type AnalyzeRequest,
 } from "./loop-schema";
+export { cableGaugeSchema } from "./cable-gauge";
 export { analyzeRequest, analyzeRequestAsync, type AnalyzeRequestResult, type RequestIssue, type InputTypeLookup } from "./analyze-request";
 export { buildLoopNetlist, ohmsFromResult, SPICE_OPEN_OHMS, type SpiceCase } from "./spice-netlist";

@@ -1,5 +1,6 @@
 // Plain descriptions of a row and of a report, for findings and the loop bench.
 import type { Report } from "@/lib/catalog/schema";
+import { REPORT_WORDS } from "@/lib/vocabulary/words";
 import type { DetectorState, Fault, LoopDetector } from "./types";
 
 export const FAULT_WORDS: Record<Fault, string> = {
@@ -9,16 +10,7 @@ export const FAULT_WORDS: Record<Fault, string> = {
   cut: "one conductor cut",
 };
 
-export const REPORT_WORDS: Record<Report, string> = {
-  short: "short",
-  normal: "normal",
-  active: "active (alarm)",
-  "active-a": "detector A active",
-  "active-b": "detector B active",
-  "active-both": "both detectors active",
-  open: "open",
-  trouble: "trouble",
-};
+export { REPORT_WORDS };
 
 export function statesLabel(detectors: readonly LoopDetector[], states: readonly DetectorState[]): string {
   let active = "";

@@ -4,12 +4,16 @@ import { z } from "zod";
 import { catalogFileSchema, idSchema, inputTypeSchema, reportSchema } from "@/lib/catalog/schema";
 import { analyzeRequestSchema, inputTypeRefSchema, loopSpecSchema } from "@/lib/loop";
 import { siteInputSchema, siteUpdateSchema } from "@/lib/sites/site-schema";
-import { acceptSchema, inviteSchema, roleChangeSchema } from "@/lib/server/members";
+import { acceptSchema, inviteSchema, roleChangeSchema } from "@/lib/members/member-schema";
 import { roles } from "@/lib/auth/permissions";
 import { layoutDocumentSchema } from "@/lib/layout/schema";
 import { bulkEditPatchSchema, createDetectorFormSchema, updateDetectorFormSchema } from "@/lib/schedule/schema";
-import { createLayoutSchema, restoreSchema, saveLayoutSchema, suggestRequestSchema } from "@/lib/server/layouts";
-import { deleteDetectorsSchema, importRequestSchema } from "@/lib/server/schedules";
+import { createLayoutSchema, restoreSchema, saveLayoutSchema, suggestRequestSchema } from "@/lib/layout/layout-request-schema";
+import { deleteDetectorsSchema, importRequestSchema } from "@/lib/schedule/schedule-request-schema";
+import { catalogUploadFormSchema, MAX_UPLOAD_BYTES, uploadFileFieldSchema } from "@/lib/catalog/upload-schema";
+import { chooseLayoutSchema, commentSchema, reviewActionSchema } from "@/lib/review/review-schema";
+import { sendSheetSchema } from "@/lib/sheet/sheet-request-schema";
+import { recordReadingSchema } from "@/lib/commissioning/commissioning-schema";
 import { findingSchema, loopAnalysisJsonSchema, readingJsonSchema, resistorUseSchema } from "./loop-analysis-schema";
 
 export type JsonSchema = Record<string, unknown>;
@@ -55,7 +59,7 @@ const inputTypeListSchema = z.strictObject({
 });
 
 /** Component name → zod schema. Every name here becomes `#/components/schemas/<name>`. */
-const named: Record<string, z.ZodType> = {
+export const namedSchemas: Record<string, z.ZodType> = {
   Id: idSchema,
   Report: reportSchema,
   InputType: inputTypeSchema,
@@ -87,11 +91,23 @@ const named: Record<string, z.ZodType> = {
   ScheduleBulkEdit: bulkEditPatchSchema,
   ScheduleDelete: deleteDetectorsSchema,
   ScheduleImport: importRequestSchema,
+  CatalogUploadForm: catalogUploadFormSchema,
+  Comment: commentSchema,
+  ReviewStep: reviewActionSchema,
+  LayoutChoice: chooseLayoutSchema,
+  SheetSend: sendSheetSchema,
+  ReadingRecord: recordReadingSchema,
 };
+
+/** Replaces what zod wrote for a schema with a hand-written description (for what JSON Schema can't say). */
+function replace(target: JsonSchema, by: JsonSchema) {
+  for (const k of Object.keys(target)) delete target[k];
+  Object.assign(target, by);
+}
 
 export function componentSchemas(): Record<string, JsonSchema> {
   const registry = z.registry<{ id: string }>();
-  for (const [id, schema] of Object.entries(named)) registry.add(schema, { id });
+  for (const [id, schema] of Object.entries(namedSchemas)) registry.add(schema, { id });
   const { schemas } = z.toJSONSchema(registry, {
     // Requests are described as a client writes them (defaults optional); responses have no defaults.
     io: "input",
@@ -101,13 +117,13 @@ export function componentSchemas(): Record<string, JsonSchema> {
     uri: (id) => `#/components/schemas/${id}`,
     override: (ctx) => {
       // inputType is parsed by a transform: an id, or a whole input type.
-      if (ctx.zodSchema === inputTypeRefSchema) {
-        for (const k of Object.keys(ctx.jsonSchema)) delete (ctx.jsonSchema as JsonSchema)[k];
-        Object.assign(ctx.jsonSchema, {
+      if (ctx.zodSchema === inputTypeRefSchema)
+        replace(ctx.jsonSchema as JsonSchema, {
           description: "An input type id from the caller's catalog (shipped plus the organisation's upload), or a whole input type.",
           oneOf: [REF("Id"), REF("InputType")],
         });
-      }
+      // The upload's file part: a File-like check in zod, a YAML text part on the wire.
+      if (ctx.zodSchema === uploadFileFieldSchema) replace(ctx.jsonSchema as JsonSchema, { type: "string", contentMediaType: "text/yaml", description: `The .yaml file, at most ${MAX_UPLOAD_BYTES / 1024} KiB.` });
     },
   });
   const out: Record<string, JsonSchema> = {};

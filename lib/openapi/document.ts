@@ -92,7 +92,6 @@ const uploadId = { name: "uploadId", description: "A stored version of the organ
 const entryId = { name: "entryId", description: "The id of a catalog entry (any kind).", schema: REF("Id") };
 const photoId = { name: "photoId", description: "A photo of the layout's commissioning record." };
 const object = (description: string) => ({ description, schema: { type: "object" } });
-const json = (description: string) => ({ contentType: "application/json", schema: { type: "object", description } });
 const pdf = (description: string) => ({ description, schema: { type: "string", contentMediaType: "application/pdf" }, contentType: "application/pdf" });
 const csv = (description: string) => ({ description, schema: { type: "string" }, contentType: "text/csv" });
 const sizeQuery = { name: "size", description: "Paper size.", schema: { type: "string", enum: ["A4", "LETTER"] } };
@@ -215,14 +214,7 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
         description: "`mode=preview` (or `?preview=1`) validates the file and shows the diff without storing; `mode=store` keeps it as the next version. A file that does not validate is refused with 422 and located errors; a store after another version came in gives 409.",
         permission: "catalog:upload",
         query: [{ name: "preview", description: "1 or true: preview whatever the form says.", schema: { type: "string", enum: ["0", "1", "true", "false"] } }],
-        bodyContent: {
-          contentType: "multipart/form-data",
-          schema: {
-            type: "object",
-            properties: { file: { type: "string", contentMediaType: "text/yaml", description: "The .yaml file, at most 256 KiB." }, mode: { type: "string", enum: ["preview", "store"], default: "preview" }, baseVersion: { type: "integer", minimum: 0 } },
-            required: ["file"],
-          },
-        },
+        bodyContent: { contentType: "multipart/form-data", schema: REF("CatalogUploadForm") },
         ok: object("The preview (errors, diff) or the stored version with its diff."),
         errors: [409],
       },
@@ -270,13 +262,13 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
   },
   "/api/layouts/{layoutId}/comments": {
     get: ["listComments", { tag: "review", summary: "The layout's comment thread, oldest first", permission: "layout:read", pathParams: [layoutId], ok: object("{ comments }.") }],
-    post: ["addComment", { tag: "review", summary: "Comment on the layout, a board, an input or a detector", permission: "layout:comment", pathParams: [layoutId], bodyContent: json("The comment and what it is about."), ok: { status: 201, ...object("The comment.") } }],
+    post: ["addComment", { tag: "review", summary: "Comment on the layout, a board, an input or a detector", permission: "layout:comment", pathParams: [layoutId], body: "Comment", ok: { status: 201, ...object("The comment.") } }],
   },
   "/api/layouts/{layoutId}/review": {
     get: ["getReview", { tag: "review", summary: "The review state, the steps the caller may take (with reasons for the others), comments and decisions", permission: "layout:read", pathParams: [layoutId], ok: object("The review.") }],
     post: [
       "reviewStep",
-      { tag: "review", summary: "One review step: submit, withdraw, approve or reject", description: "Approve and reject are the engineer's; 409 from the wrong state or when a newer revision was saved.", permission: "layout:submit", pathParams: [layoutId], bodyContent: json("{ action, … }."), ok: object("The review after the step."), errors: [409] },
+      { tag: "review", summary: "One review step: submit, withdraw, approve or reject", description: "Approve and reject are the engineer's; 409 from the wrong state or when a newer revision was saved.", permission: "layout:submit", pathParams: [layoutId], body: "ReviewStep", ok: object("The review after the step."), errors: [409] },
     ],
   },
   "/api/layouts/{layoutId}/sheet": {
@@ -286,7 +278,7 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
     get: ["getSheetPdf", { tag: "sheets", summary: "The terminal sheet as a PDF", permission: "sheet:read", pathParams: [layoutId], query: [sizeQuery, revisionQuery], ok: pdf("The terminal sheet.") }],
   },
   "/api/layouts/{layoutId}/sheet/send": {
-    post: ["sendSheet", { tag: "sheets", summary: "E-mail the terminal sheet PDF to the site's assigned installer", description: "409 when the site has no installer.", permission: "sheet:send", pathParams: [layoutId], bodyContent: json("{ size }: A4 or LETTER."), ok: object("{ sent }."), errors: [409] }],
+    post: ["sendSheet", { tag: "sheets", summary: "E-mail the terminal sheet PDF to the site's assigned installer", description: "409 when the site has no installer.", permission: "sheet:send", pathParams: [layoutId], body: "SheetSend", ok: object("{ sent }."), errors: [409] }],
   },
   "/api/layouts/{layoutId}/commissioning": {
     get: ["getCommissioning", { tag: "commissioning", summary: "Progress per loop on the approved revision, the readings and the photos", description: 'Open readings are sent as "Infinity".', permission: "sheet:read", pathParams: [layoutId], ok: object("The commissioning record so far.") }],
@@ -294,7 +286,7 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
   "/api/layouts/{layoutId}/commissioning/readings": {
     post: [
       "recordReading",
-      { tag: "commissioning", summary: "Record one meter reading, judged against the approved sheet", description: "201; 200 with the stored reading when the clientId was seen before.", permission: "commissioning:record", pathParams: [layoutId], bodyContent: json("The loop, the reading in ohms and a clientId."), ok: { status: 201, ...object("The reading and its verdict.") } },
+      { tag: "commissioning", summary: "Record one meter reading, judged against the approved sheet", description: "201; 200 with the stored reading when the clientId was seen before.", permission: "commissioning:record", pathParams: [layoutId], body: "ReadingRecord", ok: { status: 201, ...object("The reading and its verdict.") } },
     ],
   },
   "/api/layouts/{layoutId}/commissioning/complete": {
@@ -328,7 +320,7 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
   },
   "/api/sites/{siteId}/decisions": {
     get: ["listDecisions", { tag: "review", summary: "The decision log of the site's layouts (review steps and choices with reasons), newest first", permission: "layout:read", pathParams: [siteId], ok: object("{ decisions }.") }],
-    post: ["chooseLayout", { tag: "review", summary: "Record which of the compared layouts was chosen, and why", permission: "layout:write", pathParams: [siteId], bodyContent: json("The chosen layout and the reason."), ok: { status: 201, ...object("The decision.") } }],
+    post: ["chooseLayout", { tag: "review", summary: "Record which of the compared layouts was chosen, and why", permission: "layout:write", pathParams: [siteId], body: "LayoutChoice", ok: { status: 201, ...object("The decision.") } }],
   },
   "/api/sites/{siteId}/exports/bom.csv": {
     get: ["exportBom", { tag: "sheets", summary: "The bill of materials (catalog list prices, resistors by value, batteries) as RFC 4180 CSV", permission: "sheet:read", pathParams: [siteId], query: [layoutQuery, revisionQuery], ok: csv("One line per part.") }],

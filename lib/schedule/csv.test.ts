@@ -1,30 +1,8 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { parseCsvRecords, parseScheduleCsv, serializeScheduleCsv } from "@/lib/schedule/csv";
+import { parseScheduleCsv, serializeScheduleCsv } from "@/lib/schedule/csv";
 import { scheduleRowSchema, type ScheduleRow } from "@/lib/schedule/schema";
 import { fixtureCatalog } from "@/lib/solver/testing/fixture-catalog";
-
-describe("parseCsvRecords (RFC 4180)", () => {
-  it("reads quoted fields with commas, doubled quotes and line breaks", () => {
-    // RFC 4180 §2: fields with commas, quotes or line breaks are enclosed in double quotes; a quote inside is doubled
-    const { records, error } = parseCsvRecords('a,"b,c","say ""hi""","two\r\nlines"\r\nx,y,z,w\r\n');
-    expect(error).toBeNull();
-    expect(records.map((r) => r.fields)).toEqual([
-      ["a", "b,c", 'say "hi"', "two\r\nlines"],
-      ["x", "y", "z", "w"],
-    ]);
-  });
-  it("accepts LF line ends, a byte order mark and a last record without a line break", () => {
-    const { records } = parseCsvRecords("\ufeffa,b\nc,d");
-    expect(records.map((r) => r.fields)).toEqual([["a", "b"], ["c", "d"]]);
-  });
-  it("reports an unclosed quote", () => {
-    expect(parseCsvRecords('a,b\r\n"open,c\r\n').error).toMatch(/never closed/);
-  });
-  it("reports text after a closing quote", () => {
-    expect(parseCsvRecords('"a"b,c').error).toMatch(/after a closing quote/);
-  });
-});
 
 describe("parseScheduleCsv", () => {
   const header = "label,type,area,room,cable_m,gauge,supervision";

@@ -1,7 +1,8 @@
 import type { Catalog } from "@/lib/catalog/schema";
+import { readCsv, writeCsv } from "@/lib/csv/csv";
 import { formatGauge, parseGauge, scheduleRowSchema, supervisionPreferenceSchema, type ScheduleRow } from "@/lib/schedule/schema";
 
-// Device schedule as CSV (RFC 4180): a header row, then one detector per record.
+// Device schedule as CSV (through lib/csv): a header row, then one detector per record.
 
 export const scheduleCsvColumns = ["label", "type", "area", "room", "cable_m", "gauge", "supervision"] as const;
 export type ScheduleCsvColumn = (typeof scheduleCsvColumns)[number];
@@ -24,61 +25,6 @@ export interface ScheduleCsvParse {
   errors: CsvRowError[];
 }
 
-/** RFC 4180 records. Quoted fields may hold commas, quotes ("") and line breaks; CRLF or LF ends a record. */
-export function parseCsvRecords(text: string): { records: { fields: string[]; quoted: boolean[] }[]; error: string | null } {
-  const records: { fields: string[]; quoted: boolean[] }[] = [];
-  let fields: string[] = [];
-  let quoted: boolean[] = [];
-  let field = "";
-  let isQuoted = false;
-  let inQuotes = false;
-  let afterQuote = false;
-  let i = text.charCodeAt(0) === 0xfeff ? 1 : 0;
-  const endField = () => {
-    fields.push(field);
-    quoted.push(isQuoted);
-    field = "";
-    isQuoted = false;
-    afterQuote = false;
-  };
-  const endRecord = () => {
-    endField();
-    records.push({ fields, quoted });
-    fields = [];
-    quoted = [];
-  };
-  for (; i < text.length; i++) {
-    const c = text[i];
-    if (inQuotes) {
-      if (c === '"') {
-        if (text[i + 1] === '"') {
-          field += '"';
-          i++;
-        } else {
-          inQuotes = false;
-          afterQuote = true;
-        }
-      } else field += c;
-      continue;
-    }
-    if (c === ",") endField();
-    else if (c === "\r" && text[i + 1] === "\n") {
-      endRecord();
-      i++;
-    } else if (c === "\n" || c === "\r") endRecord();
-    else if (c === '"' && field.trim() === "" && !afterQuote) {
-      field = "";
-      inQuotes = true;
-      isQuoted = true;
-    } else if (afterQuote) {
-      if (c !== " " && c !== "\t") return { records, error: `record ${records.length + 1}: text after a closing quote` };
-    } else field += c;
-  }
-  if (inQuotes) return { records, error: `record ${records.length + 1}: a quoted field is never closed` };
-  if (field !== "" || fields.length > 0 || isQuoted) endRecord();
-  return { records, error: null };
-}
-
 function parseNumber(s: string): number | null {
   const t = s.trim();
   if (!/^[+]?(\d+([.,]\d*)?|[.,]\d+)([eE][+-]?\d+)?$/.test(t)) return null;
@@ -91,9 +37,9 @@ function parseNumber(s: string): number | null {
  */
 export function parseScheduleCsv(text: string, catalog: Pick<Catalog, "detectors">): ScheduleCsvParse {
   const out: ScheduleCsvParse = { rows: [], rowNumbers: [], errors: [] };
-  const { records, error } = parseCsvRecords(text);
+  const { records, error } = readCsv(text);
   if (error) {
-    out.errors.push({ row: records.length + 1, column: null, message: error });
+    out.errors.push({ row: error.record, column: null, message: `record ${error.record}: ${error.message}` });
     return out;
   }
   const header = records[0];
@@ -102,7 +48,7 @@ export function parseScheduleCsv(text: string, catalog: Pick<Catalog, "detectors
     return out;
   }
   const index = new Map<ScheduleCsvColumn, number>();
-  header.fields.forEach((h, i) => {
+  header.forEach((h, i) => {
     const name = h.trim().toLowerCase().replace(/[\s-]+/g, "_") as ScheduleCsvColumn;
     if (!scheduleCsvColumns.includes(name)) return;
     if (index.has(name)) out.errors.push({ row: 1, column: name, message: `column ${name} appears twice` });
@@ -114,16 +60,14 @@ export function parseScheduleCsv(text: string, catalog: Pick<Catalog, "detectors
   const detectorIds = new Set(catalog.detectors.map((d) => d.id));
   records.slice(1).forEach((rec, k) => {
     const row = k + 2;
-    if (rec.fields.every((f, j) => f.trim() === "" && !rec.quoted[j])) return; // blank line
+    if (rec.every((f) => f.trim() === "")) return; // blank line
+    // text cells are trimmed by the row schema as well, so quoted and bare cells read alike
     const cell = (c: ScheduleCsvColumn) => {
       const j = index.get(c);
-      if (j === undefined) return "";
-      const v = rec.fields[j] ?? "";
-      return rec.quoted[j] ? v : v.trim();
+      return j === undefined ? "" : (rec[j] ?? "").trim();
     };
     const errs: CsvRowError[] = [];
-    if (rec.fields.length > header.fields.length)
-      errs.push({ row, column: null, message: `${rec.fields.length} fields, the header has ${header.fields.length}` });
+    if (rec.length > header.length) errs.push({ row, column: null, message: `${rec.length} fields, the header has ${header.length}` });
     const type = cell("type").trim();
     if (type === "") errs.push({ row, column: "type", message: "no detector type" });
     else if (!detectorIds.has(type)) errs.push({ row, column: "type", message: `${type} is not a detector in the catalog` });
@@ -163,14 +107,10 @@ export function parseScheduleCsv(text: string, catalog: Pick<Catalog, "detectors
   return out;
 }
 
-function quote(v: string): string {
-  return /[",\r\n]|^\s|\s$/.test(v) ? `"${v.replace(/"/g, '""')}"` : v;
-}
-
-/** Serialize rows with the header; CRLF between records as RFC 4180 asks. */
+/** Serialize rows with the header, through the one CSV writer (formula guard included). */
 export function serializeScheduleCsv(rows: readonly ScheduleRow[]): string {
-  const lines = [scheduleCsvColumns.join(",")];
-  for (const r of rows)
-    lines.push([r.label, r.catalogId, r.area, r.room, String(r.cableM), formatGauge(r.gauge), r.supervision].map(quote).join(","));
-  return lines.join("\r\n") + "\r\n";
+  return writeCsv(
+    scheduleCsvColumns,
+    rows.map((r) => [r.label, r.catalogId, r.area, r.room, r.cableM, formatGauge(r.gauge), r.supervision]),
+  );
 }

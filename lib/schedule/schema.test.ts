@@ -9,6 +9,13 @@ describe("schedule schemas", () => {
     expect(formatGauge({ awg: 18 })).toBe("18 AWG");
     expect(formatGauge({ mm2: 1.5 })).toBe("1.5 mm2");
   });
+  it("take the schedule's gauges only: whole AWG numbers 10 to 30, more than 0 and at most 10 mm²", () => {
+    const row = { label: "Door", catalogId: "fx-door", area: "", room: "", cableM: 10, supervision: "single-eol" };
+    const gauge = (g: unknown) => createDetectorFormSchema.safeParse({ ...row, gauge: g });
+    for (const g of [{ awg: 10 }, { awg: 30 }, { mm2: 0.22 }, { mm2: 10 }]) expect(gauge(g).success, JSON.stringify(g)).toBe(true);
+    for (const g of [{ awg: 9 }, { awg: 31 }, { awg: 22.5 }, { mm2: 0 }, { mm2: 10.5 }, { awg: 22, mm2: 0.5 }, { awg: "22" }]) expect(gauge(g).success, JSON.stringify(g)).toBe(false);
+    expect(gauge({ awg: 40 }).error?.issues[0]).toMatchObject({ path: ["gauge", "awg"], message: "AWG must be a whole number from 10 to 30 (got 40)" });
+  });
   it("limit the cable run to more than 0 m and at most 2000 m", () => {
     const row = { label: "Door", catalogId: "fx-door", area: "", room: "", gauge: { awg: 22 }, supervision: "single-eol" };
     expect(createDetectorFormSchema.safeParse({ ...row, cableM: "12.5" }).data?.cableM).toBe(12.5); // a form's text field

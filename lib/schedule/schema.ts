@@ -1,5 +1,7 @@
 import { z } from "zod";
 import { idSchema } from "@/lib/catalog/schema";
+import { cableGaugeSchema, scheduleGaugeRange } from "@/lib/loop/cable-gauge";
+import type { CableGauge } from "@/lib/loop/types";
 
 // A site's device schedule: the list of its detectors, each with the cable run to its board.
 
@@ -7,11 +9,7 @@ import { idSchema } from "@/lib/catalog/schema";
 export const supervisionPreferenceSchema = z.enum(["double-eol", "single-eol", "shared-ok", "none"]);
 export type SupervisionPreference = z.infer<typeof supervisionPreferenceSchema>;
 
-export const cableGaugeSchema = z.union([
-  z.strictObject({ awg: z.number().int().min(10).max(30) }),
-  z.strictObject({ mm2: z.number().positive().max(10) }),
-]);
-export type ScheduleCableGauge = z.infer<typeof cableGaugeSchema>;
+export type ScheduleCableGauge = CableGauge;
 
 const text = (max: number) => z.string().trim().max(max);
 
@@ -25,7 +23,7 @@ const detectorFields = {
   area: text(120),
   room: text(120),
   cableM: cableMSchema,
-  gauge: cableGaugeSchema,
+  gauge: cableGaugeSchema.superRefine(scheduleGaugeRange),
   supervision: supervisionPreferenceSchema,
 };
 

@@ -1,8 +1,7 @@
 import "server-only";
 import { createHash } from "node:crypto";
 import type { Transaction } from "sequelize";
-import { z } from "zod";
-import { db } from "./db";
+import { bindModels, db } from "./db";
 import { audit } from "./audit";
 import { ApiError, conflict, notFound } from "./errors";
 import type { Actor } from "./session";
@@ -10,12 +9,11 @@ import { Organisation, OrganisationCatalog, User } from "@/models";
 import { shippedCatalog } from "@/lib/catalog/shipped";
 import { catalogDiff, effectiveCatalog, findEntry, parseCatalogFile, type CatalogDiff, type CatalogError, type EntryKey, type FoundEntry, type LoadedCatalog } from "@/lib/catalog/loader";
 import type { Catalog } from "@/lib/catalog/schema";
+import { catalogUploadFormSchema, MAX_UPLOAD_BYTES, type UploadMode } from "@/lib/catalog/upload-schema";
 
 // An organisation's catalog: the shipped catalog plus the organisation's latest uploaded file
 // (lib/catalog/loader.ts effectiveCatalog). Every uploaded version is kept; the latest is in use.
 
-/** Largest accepted catalog file. The shipped catalog's five files together are about 40 KiB. */
-export const MAX_UPLOAD_BYTES = 256 * 1024;
 /** Room for the multipart envelope (boundaries, part headers, the mode field) around the file. */
 const MAX_FORM_BYTES = MAX_UPLOAD_BYTES + 16 * 1024;
 
@@ -95,16 +93,7 @@ export function checkUploadFile(input: { name: string; type: string; bytes: Uint
 const sha256Hex = (text: string) => createHash("sha256").update(text, "utf8").digest("hex");
 const tooLarge = () => new ApiError(413, `The file is too large: a catalog file may be at most ${MAX_UPLOAD_BYTES / 1024} KiB.`);
 
-/** The form fields of `POST /api/catalog/uploads` (multipart/form-data). */
-export const catalogUploadFormSchema = z.object({
-  mode: z.enum(["preview", "store"], { message: 'mode must be "preview" or "store"' }).default("preview"),
-  /** The version the preview's diff was made against; storing refuses (409) if another version came in since. */
-  baseVersion: z.coerce.number().int().min(0).max(2 ** 31).optional(),
-  file: z.custom<File>((v) => typeof v === "object" && v !== null && typeof (v as File).arrayBuffer === "function" && typeof (v as File).name === "string", {
-    message: "choose a YAML file to upload",
-  }),
-});
-export type CatalogUploadForm = { mode: "preview" | "store"; baseVersion?: number; file: UploadFile };
+export type CatalogUploadForm = { mode: UploadMode; baseVersion?: number; file: UploadFile };
 
 /** Reads at most `limit` bytes of a request body; 413 beyond. */
 async function readBody(req: Request, limit: number): Promise<Uint8Array> {
@@ -194,14 +183,14 @@ const summaryAttributes = ["id", "organisationId", "version", "fileName", "sizeB
 
 /** Every stored version of the organisation's catalog file, newest first (without the text). */
 export async function listUploads(organisationId: number): Promise<CatalogUpload[]> {
-  db();
+  bindModels();
   const rows = await OrganisationCatalog.findAll({ where: { organisationId }, attributes: summaryAttributes, order: [["version", "DESC"]] });
   return describeUploads(rows);
 }
 
 /** The text of one stored version; 404 for another organisation's version, indistinguishable from a missing one. */
 export async function uploadText(organisationId: number, uploadId: number): Promise<{ fileName: string; version: number; text: string; sha256: string }> {
-  db();
+  bindModels();
   const row = await OrganisationCatalog.findOne({ where: { id: uploadId, organisationId } });
   if (!row) throw notFound("That catalog version");
   return { fileName: row.fileName, version: row.version, text: row.yamlText, sha256: row.sha256 };
@@ -256,7 +245,7 @@ const shippedInfo = (shipped: LoadedCatalog, problem: EffectiveCatalogInfo["prob
  * shared between callers through the cache: treat them as read-only.
  */
 export async function effectiveCatalogInfo(organisationId: number): Promise<EffectiveCatalogInfo> {
-  db();
+  bindModels();
   const shipped = shippedCatalog();
   const latest = await OrganisationCatalog.findOne({ where: { organisationId }, attributes: summaryAttributes, order: [["version", "DESC"]] });
   const key = latest ? `${latest.id}:${latest.sha256}` : "shipped";

@@ -17,12 +17,19 @@ export function createSequelize(url: string): Sequelize {
   });
 }
 
+const instance = (): Sequelize => (globalForDb.loopwrightSequelize ??= createSequelize(env().DATABASE_URL));
+
 /**
  * One Sequelize instance per process (kept on globalThis so dev reloads reuse it). The build may
  * give each route its own copy of the model classes, so each copy is bound to the shared instance.
  */
 export function db(): Sequelize {
-  const sequelize = (globalForDb.loopwrightSequelize ??= createSequelize(env().DATABASE_URL));
+  bindModels();
+  return instance();
+}
+
+/** Bind this bundle's copy of the model classes to the shared instance: call before querying a model directly (Model.findAll ...). */
+export function bindModels(): void {
+  const sequelize = instance();
   if (Organisation.sequelize !== sequelize) initModels(sequelize);
-  return sequelize;
 }

@@ -12,6 +12,8 @@ const envSchema = z.object({
   SMTP_PORT: z.coerce.number().int().positive().default(2525),
   MAIL_FROM: z.string().default("Loopwright <no-reply@loopwright.invalid>"),
   LOOPWRIGHT_DEV_OUTBOX: z.enum(["0", "1"]).default("0"),
+  // How many proxies in front of the app append to x-forwarded-for (0: reached directly); see lib/server/throttle.ts.
+  LOOPWRIGHT_TRUSTED_PROXIES: z.coerce.number().int().min(0).max(10).default(0),
 });
 export type Env = z.infer<typeof envSchema>;
 

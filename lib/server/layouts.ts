@@ -1,6 +1,5 @@
 import "server-only";
 import { col, literal, Op, type Transaction } from "sequelize";
-import { z } from "zod";
 import { db } from "./db";
 import { audit } from "./audit";
 import { ApiError, conflict, notFound } from "./errors";
@@ -8,10 +7,12 @@ import { findSite } from "./sites";
 import { catalogFor, ensureCan, loadSchedule } from "./schedules";
 import type { Actor } from "./session";
 import { Layout, LayoutRevision, Site, User } from "@/models";
+import { isLifeSafety } from "@/lib/catalog/life-safety";
 import type { Catalog } from "@/lib/catalog/schema";
 import { boardEntry, indexCatalog } from "@/lib/layout/catalog-index";
 import { boardName } from "@/lib/layout/names";
-import { layoutDocumentSchema, layoutPowerSchema, type LayoutDocument } from "@/lib/layout/schema";
+import { layoutDocumentSchema, type LayoutDocument } from "@/lib/layout/schema";
+import type { CreateLayoutInput, SaveLayoutInput, SuggestRequest } from "@/lib/layout/layout-request-schema";
 import type { Schedule } from "@/lib/schedule/schema";
 import { solveLayout, type Suggestion } from "@/lib/solver";
 import { suggestOffLoop } from "@/lib/server/workers/off-loop";
@@ -51,30 +52,6 @@ export interface RevisionMeta {
 export function solveForSave(doc: LayoutDocument, schedule: Schedule, catalog: Catalog): LayoutSolveSummary {
   return summarizeSolve(doc, solveLayout(doc, schedule, catalog));
 }
-
-const nameSchema = z.string().trim().min(1, "a name is needed").max(200);
-const noteSchema = z.string().trim().max(500);
-
-export const createLayoutSchema = z.union([
-  z.strictObject({ name: nameSchema, note: noteSchema.optional(), document: layoutDocumentSchema }),
-  z.strictObject({ name: nameSchema, note: noteSchema.optional(), panelId: z.string().min(1).max(63) }),
-  z.strictObject({ name: nameSchema, note: noteSchema.optional(), suggestion: z.strictObject({ allowShared: z.boolean(), busCableM: z.number().nonnegative().max(100000).optional() }) }),
-]);
-export type CreateLayoutInput = z.infer<typeof createLayoutSchema>;
-
-export const saveLayoutSchema = z.strictObject({
-  version: z.number().int().positive(),
-  document: layoutDocumentSchema,
-  name: nameSchema.optional(),
-  note: noteSchema.optional(),
-});
-export type SaveLayoutInput = z.infer<typeof saveLayoutSchema>;
-
-export const restoreSchema = z.strictObject({ version: z.number().int().positive().optional() }).optional();
-
-export const suggestRequestSchema = z
-  .strictObject({ busCableM: z.number().nonnegative().max(100000).optional(), power: layoutPowerSchema.optional() })
-  .optional();
 
 /** What in the document names things that are not in the catalog or the schedule (422 on save). */
 export function referenceIssues(doc: LayoutDocument, schedule: Schedule, catalog: Catalog): { path: string; message: string }[] {
@@ -166,7 +143,7 @@ export function blankDocument(panelId: string, schedule: Schedule, catalog: Cata
   const ix = indexCatalog(catalog);
   const fire = schedule.some((d) => {
     const c = ix.detectors.get(d.catalogId);
-    return !!c && (c.lifeSafety || c.category === "smoke" || c.category === "heat");
+    return !!c && isLifeSafety(c);
   });
   return { panelId, boards: [], inputs: [], power: fire ? { standbyProfileId: "nfpa72-fire", safetyFactor: 1.25 } : { standbyProfileId: "intruder-grade-2", safetyFactor: 1.2 }, busCableM: 0 };
 }
@@ -328,7 +305,7 @@ function suggestionView(allowShared: boolean, s: Suggestion): SuggestionView {
 }
 
 /** The cheapest hardware for the site's schedule both ways: one detector per input, and shared inputs allowed. */
-export async function suggestForSite(actor: Actor, siteId: number, opts: z.infer<typeof suggestRequestSchema> = {}): Promise<{ suggestions: SuggestionView[] }> {
+export async function suggestForSite(actor: Actor, siteId: number, opts: SuggestRequest = {}): Promise<{ suggestions: SuggestionView[] }> {
   await findSite(actor, siteId);
   const [schedule, catalog] = await Promise.all([loadSchedule(siteId), catalogFor(actor.organisationId)]);
   if (schedule.length === 0) throw new ApiError(422, "The device schedule is empty: add detectors before asking for hardware.");

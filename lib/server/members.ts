@@ -1,27 +1,24 @@
 import "server-only";
 import { createHash, randomBytes } from "node:crypto";
-import bcrypt from "bcryptjs";
-import { Op } from "sequelize";
-import { z } from "zod";
-import { db } from "./db";
+import { Op, type Transaction } from "sequelize";
+import { bindModels, db } from "./db";
 import { audit } from "./audit";
 import { ApiError } from "./errors";
 import { sendMail } from "./mail";
 import { env } from "./env";
 import { Invitation, Membership, Organisation, User } from "@/models";
-import { roles, roleLabels, type Role } from "@/lib/auth/permissions";
-import { passwordSchema } from "@/lib/auth/password";
+import { can, roleLabels, type Role } from "@/lib/auth/permissions";
+import { passwordStrengthProblem } from "@/lib/auth/password";
+import type { AcceptInput, InviteInput } from "@/lib/members/member-schema";
+import { hashPassword } from "./password-hash";
+import { endSessions } from "./session-version";
 import type { Actor } from "./session";
 
 const INVITE_DAYS = 7;
 const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
 
-export const inviteSchema = z.strictObject({ email: z.email("Enter a valid e-mail address").max(254), role: z.enum(roles) });
-export const acceptSchema = z.strictObject({ token: z.string().min(20).max(200), name: z.string().trim().min(1, "Enter your name").max(200), password: passwordSchema });
-export const roleChangeSchema = z.strictObject({ role: z.enum(roles) });
-
 export async function listMembers(organisationId: number) {
-  db();
+  bindModels();
   const rows = await Membership.findAll({ where: { organisationId }, include: [{ model: User, attributes: ["id", "name", "email"] }], order: [["id", "ASC"]] });
   const invitations = await Invitation.findAll({ where: { organisationId, acceptedAt: null, expiresAt: { [Op.gt]: new Date() } }, order: [["id", "DESC"]] });
   return {
@@ -33,7 +30,7 @@ export async function listMembers(organisationId: number) {
   };
 }
 
-export async function inviteMember(actor: Actor, input: z.infer<typeof inviteSchema>) {
+export async function inviteMember(actor: Actor, input: InviteInput) {
   const sequelize = db();
   const email = input.email.toLowerCase();
   const existing = await User.findOne({ where: { email }, include: [{ model: Membership, where: { organisationId: actor.organisationId }, required: true }] });
@@ -57,22 +54,27 @@ export async function inviteMember(actor: Actor, input: z.infer<typeof inviteSch
 }
 
 export async function findInvitation(token: string) {
-  db();
+  bindModels();
   const inv = await Invitation.findOne({ where: { tokenHash: hashToken(token) } });
   if (!inv || inv.acceptedAt || inv.expiresAt < new Date()) return null;
   const org = await Organisation.findByPk(inv.organisationId);
   return { email: inv.email, role: inv.role as Role, organisationName: org?.name ?? "" };
 }
 
-export async function acceptInvitation(input: z.infer<typeof acceptSchema>) {
+export async function acceptInvitation(input: AcceptInput) {
   const sequelize = db();
   return sequelize.transaction(async (transaction) => {
     const inv = await Invitation.findOne({ where: { tokenHash: hashToken(input.token) }, transaction, lock: transaction.LOCK.UPDATE });
     if (!inv || inv.acceptedAt || inv.expiresAt < new Date()) throw new ApiError(404, "This invitation link is not valid any more. Ask an admin for a new one.");
-    const passwordHash = await bcrypt.hash(input.password, 12);
+    const weak = await passwordStrengthProblem(input.password, { name: input.name, email: inv.email });
+    if (weak) throw new ApiError(422, "Some fields are not valid.", [{ path: "password", message: weak }]);
+    const passwordHash = await hashPassword(input.password);
     let user = await User.findOne({ where: { email: inv.email }, transaction });
-    if (user) await user.update({ passwordHash, name: input.name }, { transaction });
-    else user = await User.create({ email: inv.email, name: input.name, passwordHash }, { transaction });
+    if (user) {
+      await user.update({ passwordHash, name: input.name }, { transaction });
+      // A password set anew ends the sessions signed in with the old one.
+      await endSessions(user.id, { transaction });
+    } else user = await User.create({ email: inv.email, name: input.name, passwordHash }, { transaction });
     await Membership.findOrCreate({ where: { organisationId: inv.organisationId, userId: user.id }, defaults: { organisationId: inv.organisationId, userId: user.id, role: inv.role }, transaction });
     await inv.update({ acceptedAt: new Date() }, { transaction });
     await audit({ organisationId: inv.organisationId, userId: user.id, action: "member.join", entityType: "membership", entityId: user.id, detail: { role: inv.role } }, transaction);
@@ -80,14 +82,38 @@ export async function acceptInvitation(input: z.infer<typeof acceptSchema>) {
   });
 }
 
+/**
+ * Refuses (409) a change that would leave the organisation without an admin: `leaving` is the
+ * membership about to lose its admin role or be removed. Call it inside the transaction after
+ * lockOrganisation, so two admins demoting each other at once are serialised and the second sees the first.
+ */
+export async function assertAdminRemains(organisationId: number, leaving: Membership, transaction: Transaction) {
+  if (leaving.role !== "admin") return;
+  // A locking read sees the latest committed rows, whatever the transaction's snapshot.
+  const others = await Membership.findAll({ where: { organisationId, role: "admin", id: { [Op.ne]: leaving.id } }, attributes: ["id"], transaction, lock: transaction.LOCK.UPDATE });
+  if (others.length === 0) throw new ApiError(409, "This would leave the organisation without an admin. Make another member admin first.");
+}
+
+/** Serialises membership changes of one organisation (SELECT ... FOR UPDATE on its row). */
+export async function lockOrganisation(organisationId: number, transaction: Transaction) {
+  await Organisation.findByPk(organisationId, { attributes: ["id"], transaction, lock: transaction.LOCK.UPDATE });
+}
+
 export async function changeRole(actor: Actor, membershipId: number, role: Role) {
   const sequelize = db();
   return sequelize.transaction(async (transaction) => {
+    await lockOrganisation(actor.organisationId, transaction);
     const m = await Membership.findOne({ where: { id: membershipId, organisationId: actor.organisationId }, transaction, lock: transaction.LOCK.UPDATE });
     if (!m) throw new ApiError(404, "That member was not found.");
     if (m.userId === actor.userId && role !== "admin") throw new ApiError(409, "You cannot remove your own admin role; ask another admin.");
+    if (role !== "admin") await assertAdminRemains(actor.organisationId, m, transaction);
+    // The actor's own role is read again under the lock: a change made meanwhile may have taken it away.
+    const mine = await Membership.findOne({ where: { userId: actor.userId, organisationId: actor.organisationId }, attributes: ["id", "role"], transaction, lock: transaction.LOCK.UPDATE });
+    if (!mine || !can(mine.role, "members:manage")) throw new ApiError(403, "Your own role was changed meanwhile; you may not change roles any more.");
     const before = m.role;
     await m.update({ role }, { transaction });
+    // The member's sessions end: they sign in again under the new role.
+    if (before !== role) await endSessions(m.userId, { transaction });
     await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "member.role", entityType: "membership", entityId: m.id, detail: { from: before, to: role } }, transaction);
     return { membershipId: m.id, role };
   });

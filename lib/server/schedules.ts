@@ -1,6 +1,5 @@
 import "server-only";
 import { Op, type Transaction } from "sequelize";
-import { z } from "zod";
 import { db } from "./db";
 import { audit } from "./audit";
 import { ApiError, notFound } from "./errors";
@@ -111,8 +110,6 @@ export async function bulkEditDetectors(actor: Actor, siteId: number, edit: Bulk
   });
 }
 
-export const deleteDetectorsSchema = z.strictObject({ ids: z.array(z.string().min(1).max(64)).min(1).max(5000) });
-
 export async function deleteDetectors(actor: Actor, siteId: number, idList: string[]): Promise<{ deleted: number }> {
   ensureCan(actor, "schedule:write");
   await findSite(actor, siteId);
@@ -125,14 +122,6 @@ export async function deleteDetectors(actor: Actor, siteId: number, idList: stri
     return { deleted: rows.length };
   });
 }
-
-export const MAX_IMPORT_BYTES = 1024 * 1024;
-export const importRequestSchema = z.strictObject({
-  mode: z.enum(["preview", "confirm"]),
-  csv: z.string().max(MAX_IMPORT_BYTES, "the file is larger than 1 MiB"),
-  fileName: z.string().max(200).optional(),
-});
-export type ImportRequest = z.infer<typeof importRequestSchema>;
 
 export interface ImportPreview {
   /** Rows that would be stored, each with its record number in the file (the header is row 1). */

@@ -1,5 +1,5 @@
 import "server-only";
-import { db } from "./db";
+import { bindModels, db } from "./db";
 import { audit } from "./audit";
 import { ApiError } from "./errors";
 import { env } from "./env";
@@ -44,7 +44,7 @@ export interface SiteInstaller {
 /** The installer assigned to the layout's site, if there is one and they are still a member of the organisation. */
 export async function installerOfSite(actor: Actor, siteInstallerUserId: number | null): Promise<SiteInstaller | null> {
   if (siteInstallerUserId == null) return null;
-  db();
+  bindModels();
   const m = await Membership.findOne({ where: { organisationId: actor.organisationId, userId: siteInstallerUserId }, include: [{ model: User, attributes: ["id", "name", "email"] }] });
   const u = (m as (Membership & { User?: User }) | null)?.User;
   return u ? { userId: u.id, name: u.name, email: u.email } : null;

@@ -2,7 +2,7 @@ import "server-only";
 import { getServerSession } from "next-auth";
 import { redirect } from "next/navigation";
 import { authOptions } from "./auth-options";
-import { db } from "./db";
+import { bindModels } from "./db";
 import { Membership, Organisation, User } from "@/models";
 import { can, refusal, type Permission, type Role } from "@/lib/auth/permissions";
 import { ApiError } from "./errors";
@@ -19,17 +19,20 @@ export interface Actor {
 /**
  * The signed-in member, re-read from the database on every request so that a changed role
  * or a removed membership takes effect at once (the token only names the user and organisation).
+ * The same query reads the user's session version: a token signed in before the version was raised
+ * (sign-out, a new password, a role change) is refused. No cache, so no staleness window and no extra query.
  */
 export async function currentActor(): Promise<Actor | null> {
-  const session = (await getServerSession(authOptions())) as { userId?: number; organisationId?: number } | null;
-  if (!session?.userId || !session.organisationId) return null;
-  db();
+  const session = (await getServerSession(authOptions())) as { userId?: number; organisationId?: number; sessionVersion?: number } | null;
+  if (!session?.userId || !session.organisationId || typeof session.sessionVersion !== "number") return null;
+  bindModels();
   const membership = await Membership.findOne({
     where: { userId: session.userId, organisationId: session.organisationId },
-    include: [{ model: User, attributes: ["name", "email"] }, { model: Organisation, attributes: ["name"] }],
+    include: [{ model: User, attributes: ["name", "email", "sessionVersion"] }, { model: Organisation, attributes: ["name"] }],
   });
   if (!membership) return null;
   const m = membership as Membership & { User: User; Organisation: Organisation };
+  if (m.User.sessionVersion !== session.sessionVersion) return null;
   return { userId: m.userId, organisationId: m.organisationId, organisationName: m.Organisation.name, role: m.role, name: m.User.name, email: m.User.email };
 }
 

@@ -1,6 +1,6 @@
 import "server-only";
 import type { Transaction } from "sequelize";
-import { db } from "./db";
+import { bindModels } from "./db";
 import { notFound } from "./errors";
 import { catalogFor, ensureCan, loadSchedule } from "./schedules";
 import type { Actor } from "./session";
@@ -28,7 +28,7 @@ export interface LayoutRef {
 
 /** The layout, only if its site belongs to the actor's organisation (404 otherwise), with its review state. */
 export async function findLayoutForReview(actor: Actor, layoutId: number, transaction?: Transaction, lock = false): Promise<LayoutRef> {
-  db();
+  bindModels();
   const layout = await Layout.findOne({
     where: { id: layoutId },
     include: [{ model: Site, as: "site", attributes: ["id", "name", "organisationId"], where: { organisationId: actor.organisationId }, required: true }],

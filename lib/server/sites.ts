@@ -1,5 +1,5 @@
 import "server-only";
-import { db } from "./db";
+import { bindModels, db } from "./db";
 import { audit } from "./audit";
 import { notFound, ApiError } from "./errors";
 import { Area, Membership, Room, Site, User } from "@/models";
@@ -23,14 +23,14 @@ export interface SiteDetail extends SiteSummary {
 const summary = (s: Site): SiteSummary => ({ id: s.id, name: s.name, address: s.address, description: s.description, installerUserId: s.installerUserId, updatedAt: s.updatedAt.toISOString() });
 
 export async function listSites(actor: Actor): Promise<SiteSummary[]> {
-  db();
+  bindModels();
   const sites = await Site.findAll({ where: { organisationId: actor.organisationId }, order: [["name", "ASC"]] });
   return sites.map(summary);
 }
 
 /** A site of the actor's organisation, or 404: another organisation's ids are indistinguishable from missing ones. */
 export async function findSite(actor: Actor, siteId: number): Promise<Site> {
-  db();
+  bindModels();
   const site = await Site.findOne({ where: { id: siteId, organisationId: actor.organisationId } });
   if (!site) throw notFound("That site");
   return site;

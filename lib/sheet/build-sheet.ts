@@ -1,7 +1,6 @@
 import type { Band, Catalog, InputType, WiringScheme } from "@/lib/catalog/schema";
 import { boardEntry, boardInputs, indexCatalog } from "@/lib/layout/catalog-index";
 import { PANEL_KEY, type LayoutDocument, type LayoutInput } from "@/lib/layout/schema";
-import type { Placement } from "@/lib/loop/types";
 import { formatOhms } from "@/lib/resistors/format-ohms";
 import { formatGauge, type Schedule, type ScheduleDetector } from "@/lib/schedule/schema";
 import { createSolver } from "@/lib/solver";
@@ -11,22 +10,10 @@ import { coreMap, usesLoopBack } from "@/lib/sheet/core-map";
 import { sheetResistors } from "@/lib/sheet/sheet-resistors";
 import type { SheetBoard, SheetDetector, SheetInput, SpareInput, TerminalSheet } from "@/lib/sheet/sheet-types";
 import { expectedReadings, zoneReports } from "@/lib/sheet/test-readings";
+import { PLACEMENT_WORDS, SCHEME_WORDS } from "@/lib/vocabulary/words";
 
 // The terminal sheet of a layout: per board, every input with its zones, detectors, resistors, cores and the
 // meter reading expected in each commissioning test (the loop engine's rows, through the solver).
-
-export const SCHEME_WORDS: Record<WiringScheme, string> = {
-  none: "no resistor",
-  "single-eol": "single end-of-line",
-  "double-eol": "double end-of-line",
-  shared: "shared input",
-};
-
-export const PLACEMENT_WORDS: Record<Placement, string> = {
-  "at-detector": "resistors at the detector",
-  "at-panel": "resistor at the panel (supervises nothing on the cable)",
-  "loop-back": "loop-back resistor (four conductors)",
-};
 
 export const MEASURING_NOTE =
   "Readings are taken across the input's terminal pair at the panel end, with the pair lifted off the input together with anything fitted at its terminals, and the meter on its resistance range. A cut reads open: the meter shows OL. Ranges cover part tolerance and the cable from 10 °C to 40 °C (common practice, no published source).";
@@ -145,7 +132,7 @@ export function buildTerminalSheet(layout: LayoutDocument, schedule: Schedule, c
         scheme: inp.scheme,
         schemeText: SCHEME_WORDS[inp.scheme],
         placement: inp.placement,
-        placementText: inp.scheme === "none" ? "no resistor" : PLACEMENT_WORDS[inp.placement],
+        placementText: inp.scheme === "none" ? SCHEME_WORDS.none : PLACEMENT_WORDS[inp.placement],
         resistors: sheetResistors({ scheme: inp.scheme, placement: inp.placement, contact, labels: detectors.map((d) => d.label), ...fittedValues(inp, type), tolerancePct: type?.tolerancePct ?? 5 }),
         loopConductors: usesLoopBack(inp.scheme, inp.placement) ? 4 : 2,
         cores: coreMap({ scheme: inp.scheme, placement: inp.placement, contact, tamper: placed.some((d) => d.cat.tamper), powered: !!powered, input: n, powerFrom: powered?.poweredFrom }),

@@ -89,7 +89,7 @@ function resolveDetectorsSlowly(inp: LayoutInput, cache: DetectorCache, ix: Cata
   return detectors;
 }
 
-export const isLifeSafety = (d: Detector) => d.lifeSafety || d.category === "smoke" || d.category === "heat";
+export { isLifeSafety } from "@/lib/catalog/life-safety";
 
 export function resolveLayout(
   layout: LayoutDocument,

@@ -1,7 +1,8 @@
 import { readFileSync } from "node:fs";
 import { beforeAll, describe, expect, it } from "vitest";
 import { testDb, makeOrganisation } from "./support";
-import { MAX_UPLOAD_BYTES, cleanFileName, previewUpload, readCatalogUploadForm } from "@/lib/server/catalogs";
+import { cleanFileName, previewUpload, readCatalogUploadForm } from "@/lib/server/catalogs";
+import { MAX_UPLOAD_BYTES } from "@/lib/catalog/upload-schema";
 
 const good = readFileSync("tests/fixtures/catalog/good-upload.yaml");
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { CHART, chartModel, nameLines } from "@/components/compare/chart-model";
+import { isBest, loadStyle, ma, money, pct, plural, shortSummary } from "@/components/compare/compare-format";
 
 // The comparison chart: spare inputs and supervision coverage of each layout as bars on one 0–100 % scale.
 
@@ -45,5 +46,31 @@ describe("the comparison chart", () => {
     expect(nameLines("Large panel with shared inputs")).toEqual(["Large panel with", "shared inputs"]);
     expect(nameLines("A very long layout name that goes on and on")).toEqual(["A very long layout", "name that goes on and…"]);
     expect(nameLines("Supercalifragilisticexpialidocious")).toEqual(["Supercalifragilistice…"]);
+  });
+});
+
+describe("the compare page's wording", () => {
+  it("shortens the sharing sentences of the summary (they are listed in full per layout)", () => {
+    expect(shortSummary("A saves 1 input by sharing: Hall, input 3 carries the door and the window: saves 1 input, …")).toBe("A saves 1 input by sharing; what each shared input trades is listed below.");
+    expect(shortSummary("A: 2 of 40 inputs used, 38 spare.")).toBe("A: 2 of 40 inputs used, 38 spare.");
+  });
+
+  it("marks a layout best on a measure unless every layout ties on it", () => {
+    expect(isBest([0], 0, 3)).toBe(true);
+    expect(isBest([0], 1, 3)).toBe(false);
+    expect(isBest([0, 1, 2], 1, 3)).toBe(false);
+    expect(isBest([], 0, 2)).toBe(false);
+  });
+
+  it("writes money, currents, shares and counts", () => {
+    expect(money(1234.5)).toBe("1,234.50");
+    expect(ma(12.6)).toBe("13 mA");
+    expect(pct(null)).toBe("no inputs used");
+    expect(pct(0.925)).toBe("93 %");
+    expect(plural(1, "error")).toBe("1 error");
+    expect(plural(0, "error")).toBe("0 errors");
+    expect(loadStyle(1.1)).toContain("text-fault");
+    expect(loadStyle(0.9)).toBe("text-warn");
+    expect(loadStyle(0.5)).toBe("text-slate-600");
   });
 });

@@ -1,5 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { changePanel, dropEdit, overSentence, parseDragId, parseDropId, resistorLines, resistorText, withoutMissingDetectors, zoneNumbers, detectorDragId, inputDropId } from "@/components/editor/editor-model";
+import { changePanel, dropEdit, overSentence, parseDragId, parseDropId, resistorLines, resistorText, withoutMissingDetectors, zoneNumbers, detectorDragId, inputDropId, boardSortId, UNPLACED_DROP_ID } from "@/components/editor/editor-model";
+import { copyName, dragOriginId, dragPlace, dropTargetIds, removedNotice } from "@/components/editor/drag-model";
+import { indexCatalog } from "@/lib/layout/catalog-index";
 import { createSolver } from "@/lib/solver";
 import { fixtureCatalog } from "@/lib/solver/testing/fixture-catalog";
 import { board, det, emptyLayout, inp } from "@/lib/solver/testing/fixture-schedule";
@@ -126,5 +128,43 @@ describe("changePanel", () => {
     expect(e.layout.inputs).toEqual([expect.objectContaining({ input: 2, detectorIds: ["d"] })]);
     expect(changePanel(doc, ctx, "fx-panel-large").ok).toBe(false);
     expect(changePanel(doc, ctx, "no-such-panel")).toMatchObject({ ok: false, message: "no-such-panel is not a control panel in the catalog" });
+  });
+});
+
+describe("drag model", () => {
+  const ix = indexCatalog(fixtureCatalog);
+  const doc = emptyLayout("fx-panel-small", { boards: [board("b1", "expansion", "fx-exp-8", 1), board("b2", "keypad", "fx-keypad", 2)], inputs: [inp("panel", 2, ["a"])] });
+  const labelOf = (id: string) => schedule.find((d) => d.id === id)?.label ?? id;
+
+  it("orders keyboard drop targets: the unplaced list, the panel's inputs, then each board's, skipping boards without inputs", () => {
+    const ids = dropTargetIds(doc, ix);
+    // fx-panel-small has 8 inputs, fx-exp-8 has 8, fx-keypad none
+    expect(ids).toHaveLength(1 + 8 + 8);
+    expect(ids[0]).toBe(UNPLACED_DROP_ID);
+    expect(ids[1]).toBe(inputDropId("panel", 1));
+    expect(ids[8]).toBe(inputDropId("panel", 8));
+    expect(ids[9]).toBe(inputDropId("b1", 1));
+    expect(ids.some((id) => id.startsWith("in:b2:"))).toBe(false);
+  });
+
+  it("starts a drag where the item is: its input, the unplaced list, or its board position", () => {
+    expect(dragOriginId(doc, detector("a"))).toBe(inputDropId("panel", 2));
+    expect(dragOriginId(doc, detector("b"))).toBe(UNPLACED_DROP_ID);
+    expect(dragOriginId(doc, { type: "board", boardKey: "b2" })).toBe(boardSortId("b2"));
+  });
+
+  it("names the dragged item and where it is", () => {
+    expect(dragPlace(doc, detector("a"), labelOf)).toBe("Front door, on Control panel, input 2");
+    expect(dragPlace(doc, detector("b"), labelOf)).toBe("Hall motion, unplaced");
+    expect(dragPlace(doc, { type: "board", boardKey: "b2" }, labelOf)).toBe("Keypad 1, position 2 of 2");
+  });
+
+  it("words the removed-detector notice and the names of rescue copies", () => {
+    expect(removedNotice(0)).toBeNull();
+    expect(removedNotice(1)).toBe("1 detector was deleted from the device schedule since the last save and have been taken off their inputs.");
+    expect(removedNotice(3)).toMatch(/^3 detectors were deleted/);
+    expect(copyName("Ground floor", "reload", "02/12/2026, 17:00")).toBe("Ground floor — my changes 02/12/2026, 17:00");
+    expect(copyName("Ground floor", "copy", "02/12/2026, 17:00")).toBe("Ground floor (copy 02/12/2026, 17:00)");
+    expect(copyName("x".repeat(199), "copy", "now")).toHaveLength(200);
   });
 });

@@ -3,42 +3,10 @@ import fc from "fast-check";
 import { analyzeLoop, type Fault, type LoopSpec } from "@/lib/loop";
 import { shippedCatalog } from "@/lib/catalog/shipped";
 import { currentReading, expectedReport, readingInterval, rowStatus, settingsFor, toLoopSpec, withScheme } from "@/components/loop-bench/bench-state";
-import { ohmsText, parseOhms } from "@/components/loop-bench/parse-ohms";
+import { gaugeIn, nearestAwg, resistorAtPanelShort, withRow, withSharedOhms, withState, withTamper } from "@/components/loop-bench/bench-actions";
 
 const inputTypes = shippedCatalog().catalog.inputTypes;
 const byId = (id: string) => inputTypes.find((t) => t.id === id)!;
-
-describe("parseOhms", () => {
-  it("reads plain figures, SI prefixes and the IEC 60062 letter code", () => {
-    // IEC 60062 letter and digit code: R, K, M stand for the decimal point and the multiplier
-    const cases: [string, number][] = [
-      ["4700", 4700],
-      ["4700 Ω", 4700],
-      ["4.7k", 4700],
-      ["4.7 kΩ", 4700],
-      ["4,7k", 4700],
-      ["4k7", 4700],
-      ["4K7", 4700],
-      ["470R", 470],
-      ["0R47", 0.47],
-      ["1M2", 1_200_000],
-      ["2.2M", 2_200_000],
-      ["5k6 ohms", 5600],
-      [".5k", 500],
-    ];
-    for (const [text, ohms] of cases) expect(parseOhms(text), text).toBe(ohms);
-  });
-  it("refuses what is not a positive resistance", () => {
-    for (const text of ["", "  ", "0", "-5", "abc", "4k7k", "1e3", "5 V", "k"]) expect(parseOhms(text), text).toBeNull();
-  });
-  it("writes values back so they read the same", () => {
-    fc.assert(
-      fc.property(fc.integer({ min: 1, max: 9_999_999 }), (ohms) => {
-        expect(parseOhms(ohmsText(ohms))).toBeCloseTo(ohms, 6);
-      }),
-    );
-  });
-});
 
 describe("bench settings", () => {
   it("start from what the input type expects: its scheme, values and tolerance, a contact that reads normal at rest", () => {
@@ -131,5 +99,43 @@ describe("row status", () => {
     expect(row(["active"], "open", "cut")).toBe("misread");
     expect(row(["normal", "trouble"], "normal")).toBe("uncertain");
     expect(row(["normal"], "normal")).toBe("ok");
+  });
+});
+
+describe("bench actions", () => {
+  const t = byId(inputTypes.find((x) => x.schemes.includes("single-eol") && x.schemes.includes("none"))?.id ?? inputTypes[0].id);
+  const base = settingsFor(t);
+
+  it("writes a conductor in the other unit: nearest AWG by area ratio, mm² to two figures", () => {
+    // ASTM B258: 22 AWG ≈ 0.326 mm², 24 AWG ≈ 0.205 mm², 18 AWG ≈ 0.823 mm²
+    expect(nearestAwg(0.326)).toBe(22);
+    expect(nearestAwg(0.22)).toBe(24);
+    expect(nearestAwg(0.75)).toBe(18);
+    expect(gaugeIn({ unit: "mm2", value: 0.22 }, "awg")).toEqual({ unit: "awg", value: 24 });
+    expect(gaugeIn({ unit: "awg", value: 22 }, "mm2")).toEqual({ unit: "mm2", value: 0.33 });
+    const same = { unit: "awg" as const, value: 20 };
+    expect(gaugeIn(same, "awg")).toBe(same);
+  });
+
+  it("sets one detector's state, and takes tamper states back to rest when tamper contacts go", () => {
+    const s = withState(withState(base, 1, "tamper"), 2, "active");
+    expect(s.states.slice(0, 3)).toEqual(["rest", "tamper", "active"]);
+    expect(withTamper(s, false).states.slice(0, 3)).toEqual(["rest", "rest", "active"]);
+    expect(withTamper(s, true).states.slice(0, 3)).toEqual(["rest", "tamper", "active"]);
+  });
+
+  it("changes one shared resistor, and takes a states-table row with its fault", () => {
+    expect(withSharedOhms({ ...base, sharedOhms: [1000, 2200] }, 1, 4700).sharedOhms).toEqual([1000, 4700]);
+    expect(withSharedOhms({ ...base, sharedOhms: [1000, 2200] }, 0, null).sharedOhms).toEqual([null, 2200]);
+    const row = withRow(withState(base, 3, "active"), ["active", undefined], "cut");
+    expect(row.fault).toBe("cut");
+    expect(row.states).toEqual(["active", "rest", "rest", "active"]);
+  });
+
+  it("shows the lesson: resistor at the panel, short at the detector end, every detector at rest, never left without a resistor", () => {
+    const lesson = resistorAtPanelShort({ ...withState(base, 0, "active"), scheme: "none" }, t);
+    expect(lesson).toMatchObject({ placement: "at-panel", fault: "short-detector" });
+    expect(lesson.scheme).not.toBe("none");
+    expect(lesson.states.every((x) => x === "rest")).toBe(true);
   });
 });

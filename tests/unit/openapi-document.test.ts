@@ -4,6 +4,7 @@ import { describe, expect, it } from "vitest";
 import { openApiDocument } from "@/lib/openapi/document";
 import { exportedMethods, openApiPathOf } from "@/lib/openapi/route-paths";
 import { loopAnalysisJsonSchema } from "@/lib/openapi/loop-analysis-schema";
+import { namedSchemas } from "@/lib/openapi/components";
 import { analyzeLoop, loopJsonReplacer, type LoopSpec } from "@/lib/loop";
 import { shippedCatalog } from "@/lib/catalog/shipped";
 import { permissionTable } from "@/lib/auth/permissions";
@@ -24,8 +25,21 @@ function routeFiles(dir: string): string[] {
 const root = process.cwd();
 const routes = routeFiles(join(root, "app", "api")).map((f) => {
   const rel = relative(root, f);
-  return { file: rel, path: openApiPathOf(rel), methods: exportedMethods(readFileSync(f, "utf8")) };
+  const source = readFileSync(f, "utf8");
+  return { file: rel, source, path: openApiPathOf(rel), methods: exportedMethods(source) };
 });
+
+/** Each `export const METHOD = route({ ..., body: name ... })` of a route file, with the module `name` is imported from. */
+function handlerBodies(source: string): { method: string; name: string; from: string | null }[] {
+  const out: { method: string; name: string; from: string | null }[] = [];
+  for (const m of source.matchAll(/export const (GET|POST|PUT|PATCH|DELETE) = route\(\{(.*?)\}, async/g)) {
+    const name = /\bbody: (\w+)/.exec(m[2])?.[1];
+    if (!name) continue;
+    const imp = [...source.matchAll(/import \{([^}]*)\} from "([^"]+)"/g)].find((i) => i[1].split(",").some((n) => n.trim() === name));
+    out.push({ method: m[1], name, from: imp ? imp[2] : null });
+  }
+  return out;
+}
 const doc = openApiDocument();
 type Operation = { operationId: string; responses: Record<string, { content?: Record<string, { schema: unknown }> }>; requestBody?: unknown; parameters?: { name: string; in: string }[]; security?: unknown[]; "x-permission"?: string };
 const operations: { path: string; method: string; op: Operation }[] = Object.entries(doc.paths).flatMap(([path, item]) =>
@@ -104,6 +118,44 @@ describe("the OpenAPI document", () => {
       } else expect(op.security).toEqual([]);
       if (op.requestBody) expect(statuses).toContain("422");
     }
+  });
+
+  it("documents each JSON body with the very zod schema its handler parses", async () => {
+    const bodies = routes.flatMap((r) => handlerBodies(r.source).map((b) => ({ ...b, route: r })));
+    expect(bodies.length).toBeGreaterThanOrEqual(20);
+    const wrong: string[] = [];
+    for (const b of bodies) {
+      const where = `${b.method} ${b.route.path} (body: ${b.name})`;
+      if (!b.from) {
+        wrong.push(`${where}: the schema is not imported from a module`);
+        continue;
+      }
+      const schema = ((await import(b.from)) as Record<string, unknown>)[b.name];
+      const component = Object.entries(namedSchemas).find(([, s]) => s === schema)?.[0];
+      const documented = (doc.paths[b.route.path]?.[b.method.toLowerCase() as "get"] as { requestBody?: { content?: Record<string, { schema?: unknown }> } } | undefined)?.requestBody?.content?.["application/json"]?.schema;
+      if (!component) wrong.push(`${where}: no component is made from it`);
+      else if (JSON.stringify(documented) !== JSON.stringify({ $ref: `#/components/schemas/${component}` })) wrong.push(`${where}: documented as ${JSON.stringify(documented)}, not ${component}`);
+    }
+    expect(wrong).toEqual([]);
+  });
+
+  it("documents the catalog upload form from the schema the server reads it with", async () => {
+    const { catalogUploadFormSchema } = await import("@/lib/catalog/upload-schema");
+    expect(namedSchemas.CatalogUploadForm).toBe(catalogUploadFormSchema);
+    const op = doc.paths["/api/catalog/uploads"].post as unknown as { requestBody: { content: Record<string, { schema: unknown }> } };
+    expect(op.requestBody.content["multipart/form-data"].schema).toEqual({ $ref: "#/components/schemas/CatalogUploadForm" });
+    const form = (doc.components as { schemas: Record<string, { properties: Record<string, Record<string, unknown>>; required: string[] }> }).schemas.CatalogUploadForm;
+    expect(form.required).toEqual(["file"]);
+    expect(form.properties.mode.enum).toEqual(["preview", "store"]);
+    expect(form.properties.file).toMatchObject({ type: "string", contentMediaType: "text/yaml" });
+  });
+
+  it("is built from pure request schemas: neither lib/openapi nor any *-schema.ts under lib imports server code", () => {
+    const files = (dir: string): string[] => readdirSync(dir).flatMap((n) => (statSync(join(dir, n)).isDirectory() ? files(join(dir, n)) : [join(dir, n)]));
+    const checked = files(join(root, "lib")).filter((f) => /\.ts$/.test(f) && !/\.test\.ts$/.test(f) && (relative(root, f).startsWith(join("lib", "openapi")) || /-schema\.ts$/.test(f)));
+    expect(checked.map((f) => relative(root, f))).toEqual(expect.arrayContaining([join("lib", "openapi", "components.ts"), join("lib", "members", "member-schema.ts"), join("lib", "catalog", "upload-schema.ts")]));
+    const impure = checked.filter((f) => /from "(@\/lib\/server\/|server-only|\.\.?\/.*server)|import "server-only"/.test(readFileSync(f, "utf8"))).map((f) => relative(root, f));
+    expect(impure).toEqual([]);
   });
 
   it("describes POST /api/loops/analyze: the request, the analysis, and 401/403/404/422", () => {

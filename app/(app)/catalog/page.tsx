@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { pageActor } from "@/lib/server/session";
-import { effectiveCatalogInfo, entryOrigin, listUploads, MAX_UPLOAD_BYTES } from "@/lib/server/catalogs";
+import { effectiveCatalogInfo, entryOrigin, listUploads } from "@/lib/server/catalogs";
+import { MAX_UPLOAD_BYTES } from "@/lib/catalog/upload-schema";
 import { can, refusal } from "@/lib/auth/permissions";
 import { catalogSummary } from "@/lib/catalog/figures";
 import { findEntry } from "@/lib/catalog/loader";
@@ -12,7 +13,7 @@ import { CatalogBrowser } from "@/components/catalog/catalog-browser";
 import { CatalogUploadForm } from "@/components/catalog/catalog-upload";
 import { UploadVersions } from "@/components/catalog/upload-versions";
 import { LifeSafetyCaution } from "@/components/catalog/life-safety-caution";
-import { isLifeSafety } from "@/components/catalog/catalog-words";
+import { isLifeSafetyEntry } from "@/lib/catalog/life-safety";
 import { tableStateFrom, type CatalogRow } from "@/components/catalog/catalog-table-model";
 
 export const metadata: Metadata = { title: "Catalog" };
@@ -24,7 +25,7 @@ export default async function CatalogPage({ searchParams }: { searchParams: Prom
   const rows: CatalogRow[] = catalogSummary(info.catalog).map((r) => ({
     ...r,
     origin: entryOrigin(info, { kind: r.kind, id: r.id }),
-    lifeSafety: isLifeSafety(info.catalog, r.kind, findEntry(info.catalog, r.id)!.entry),
+    lifeSafety: isLifeSafetyEntry(info.catalog, r.kind, findEntry(info.catalog, r.id)!.entry),
   }));
   const canUpload = can(actor.role, "catalog:upload");
 

@@ -1,5 +1,6 @@
 import { route } from "@/lib/server/route";
-import { inviteMember, inviteSchema, listMembers } from "@/lib/server/members";
+import { inviteMember, listMembers } from "@/lib/server/members";
+import { inviteSchema } from "@/lib/members/member-schema";
 
 // GET /api/members — members and open invitations of the caller's organisation
 export const GET = route({ permission: "members:read" }, async ({ actor }) => listMembers(actor.organisationId));

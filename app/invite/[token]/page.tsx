@@ -17,7 +17,7 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
             <p className="mb-4 text-sm">
               Join <strong>{inv.organisationName}</strong> as <strong>{roleLabels[inv.role].toLowerCase()}</strong> with <strong>{inv.email}</strong>. Choose your password.
             </p>
-            <AcceptInviteForm token={token} />
+            <AcceptInviteForm token={token} email={inv.email} />
           </Card>
         ) : (
           <Card role="alert">This invitation link is not valid any more. Ask an admin of your organisation for a new one.</Card>

@@ -2,7 +2,6 @@ import "server-only";
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import PDFDocument from "pdfkit";
-import { woffToSfnt } from "@/lib/server/pdf/woff-to-sfnt";
 
 // Shared PDF plumbing: pdfkit with the Inter font embedded (its Greek subset supplies Ω), page sizes, running text that switches font for glyphs the Latin subset lacks, and tables.
 
@@ -19,12 +18,12 @@ interface FontSet {
 }
 
 let fonts: FontSet | null = null;
-// The same Inter as fonts/*.woff2, in its WOFF (1) packing: pdfkit's font subsetter cannot cut glyphs out of
-// WOFF2's transformed glyph table, and reads WOFF tables as plain TrueType.
+// The same Inter as the pages' fonts/*.woff2, as plain TrueType: pdfkit's font subsetter cannot cut glyphs out
+// of WOFF2's transformed glyph table, and a TrueType file is read in place without inflating tables.
 function loadFonts(): FontSet {
   if (fonts) return fonts;
-  const here = join(process.cwd(), "lib", "server", "pdf", "fonts");
-  const read = (name: string) => woffToSfnt(readFileSync(join(here, `inter-${name}-normal.woff`)));
+  const here = join(process.cwd(), "fonts");
+  const read = (name: string) => readFileSync(join(here, `inter-${name}-normal.ttf`));
   fonts = { regular: read("latin-400"), bold: read("latin-700"), greekRegular: read("greek-400"), greekBold: read("greek-700") };
   return fonts;
 }

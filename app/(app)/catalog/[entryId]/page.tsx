@@ -12,7 +12,7 @@ import { Card } from "@/components/ui/card";
 import { FiguresTable, InputTypeBands, RelatedList, relatedEntries } from "@/components/catalog/entry-detail";
 import { LifeSafetyCaution, MainsCaution } from "@/components/catalog/life-safety-caution";
 import { OriginBadge } from "@/components/catalog/origin-badge";
-import { isLifeSafety } from "@/components/catalog/catalog-words";
+import { isLifeSafetyEntry } from "@/lib/catalog/life-safety";
 import { orNotFound } from "@/lib/server/page-load";
 
 export const metadata: Metadata = { title: "Catalog entry" };
@@ -46,7 +46,7 @@ export default async function CatalogEntryPage({ params }: { params: Promise<{ e
           </span>
         }
       />
-      {isLifeSafety(catalog, kind, entry) ? <LifeSafetyCaution className="mb-4" /> : null}
+      {isLifeSafetyEntry(catalog, kind, entry) ? <LifeSafetyCaution className="mb-4" /> : null}
       {mainsFed ? <MainsCaution className="mb-4" /> : null}
       <p className="mb-4 max-w-3xl text-sm">{entry.description}</p>
       <div className="mb-6 grid gap-6 lg:grid-cols-3">

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { idParam, route } from "@/lib/server/route";
-import { deleteLayout, getLayout, saveLayout, saveLayoutSchema } from "@/lib/server/layouts";
+import { deleteLayout, getLayout, saveLayout } from "@/lib/server/layouts";
+import { saveLayoutSchema } from "@/lib/layout/layout-request-schema";
 
 const params = z.object({ layoutId: idParam });
 

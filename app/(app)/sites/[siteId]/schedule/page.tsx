@@ -6,6 +6,7 @@ import { getSite } from "@/lib/server/sites";
 import { catalogFor, loadSchedule } from "@/lib/server/schedules";
 import { idParam } from "@/lib/server/route";
 import { can } from "@/lib/auth/permissions";
+import { isLifeSafety } from "@/lib/catalog/life-safety";
 import { PageHeader } from "@/components/ui/page-header";
 import { Refusal } from "@/components/ui/refusal";
 import { ScheduleManager } from "@/components/schedule/schedule-manager";
@@ -22,7 +23,7 @@ export default async function SchedulePage({ params }: { params: Promise<{ siteI
   if (!id.success) notFound();
   const site = await orNotFound(getSite(actor, id.data));
   const [schedule, catalog] = await Promise.all([loadSchedule(site.id), catalogFor(actor.organisationId)]);
-  const types = catalog.detectors.map((d) => ({ id: d.id, name: d.name, category: d.category, lifeSafety: d.lifeSafety || d.category === "smoke" || d.category === "heat" }));
+  const types = catalog.detectors.map((d) => ({ id: d.id, name: d.name, category: d.category, lifeSafety: isLifeSafety(d) }));
   const fireIds = new Set(types.filter((t) => t.lifeSafety).map((t) => t.id));
   return (
     <>

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { idParam, route } from "@/lib/server/route";
-import { createLayout, createLayoutSchema, listLayouts } from "@/lib/server/layouts";
+import { createLayout, listLayouts } from "@/lib/server/layouts";
+import { createLayoutSchema } from "@/lib/layout/layout-request-schema";
 
 const params = z.object({ siteId: idParam });
 

@@ -1,7 +1,8 @@
 import { z } from "zod";
 import { idParam, route } from "@/lib/server/route";
-import { bulkEditDetectors, createDetector, deleteDetectors, deleteDetectorsSchema, listSchedule } from "@/lib/server/schedules";
+import { bulkEditDetectors, createDetector, deleteDetectors, listSchedule } from "@/lib/server/schedules";
 import { bulkEditPatchSchema, createDetectorFormSchema } from "@/lib/schedule/schema";
+import { deleteDetectorsSchema } from "@/lib/schedule/schedule-request-schema";
 
 const params = z.object({ siteId: idParam });
 

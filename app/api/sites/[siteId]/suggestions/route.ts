@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { idParam, route } from "@/lib/server/route";
-import { suggestForSite, suggestRequestSchema } from "@/lib/server/layouts";
+import { suggestForSite } from "@/lib/server/layouts";
+import { suggestRequestSchema } from "@/lib/layout/layout-request-schema";
 
 const params = z.object({ siteId: idParam });
 

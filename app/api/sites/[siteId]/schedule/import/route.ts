@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { idParam, route } from "@/lib/server/route";
-import { confirmImport, importRequestSchema, MAX_IMPORT_BYTES, previewImport } from "@/lib/server/schedules";
+import { confirmImport, previewImport } from "@/lib/server/schedules";
+import { importRequestSchema, MAX_IMPORT_BYTES } from "@/lib/schedule/schedule-request-schema";
 
 const params = z.object({ siteId: idParam });
 

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { idParam, route } from "@/lib/server/route";
-import { restoreRevision, restoreSchema } from "@/lib/server/layouts";
+import { restoreRevision } from "@/lib/server/layouts";
+import { restoreSchema } from "@/lib/layout/layout-request-schema";
 
 const params = z.object({ layoutId: idParam, rev: idParam });
 

@@ -1,0 +1,30 @@
+import { z } from "zod";
+import { layoutDocumentSchema, layoutPowerSchema } from "@/lib/layout/schema";
+
+// Request bodies of the layout API, shared by the route handlers, the forms and the OpenAPI document.
+
+const nameSchema = z.string().trim().min(1, "a name is needed").max(200);
+const noteSchema = z.string().trim().max(500);
+
+export const createLayoutSchema = z.union([
+  z.strictObject({ name: nameSchema, note: noteSchema.optional(), document: layoutDocumentSchema }),
+  z.strictObject({ name: nameSchema, note: noteSchema.optional(), panelId: z.string().min(1).max(63) }),
+  z.strictObject({ name: nameSchema, note: noteSchema.optional(), suggestion: z.strictObject({ allowShared: z.boolean(), busCableM: z.number().nonnegative().max(100000).optional() }) }),
+]);
+export type CreateLayoutInput = z.infer<typeof createLayoutSchema>;
+
+export const saveLayoutSchema = z.strictObject({
+  version: z.number().int().positive(),
+  document: layoutDocumentSchema,
+  name: nameSchema.optional(),
+  note: noteSchema.optional(),
+});
+export type SaveLayoutInput = z.infer<typeof saveLayoutSchema>;
+
+export const restoreSchema = z.strictObject({ version: z.number().int().positive().optional() }).optional();
+export type RestoreInput = z.infer<typeof restoreSchema>;
+
+export const suggestRequestSchema = z
+  .strictObject({ busCableM: z.number().nonnegative().max(100000).optional(), power: layoutPowerSchema.optional() })
+  .optional();
+export type SuggestRequest = z.infer<typeof suggestRequestSchema>;

@@ -1,0 +1,64 @@
+import type { DetectorCategory, Report, WiringScheme } from "@/lib/catalog/schema";
+import type { Placement } from "@/lib/loop/types";
+import type { SupervisionPreference } from "@/lib/schedule/schema";
+
+// The one vocabulary for the words a user reads (GLOSSARY.md): the screens, the terminal sheet, its PDF, the
+// CSV exports and the findings all take them from here. Lower case, to sit inside a sentence; `sentence()` when
+// one starts a label.
+
+export const SCHEME_WORDS: Record<WiringScheme, string> = {
+  none: "no resistor",
+  "single-eol": "single end-of-line",
+  "double-eol": "double end-of-line",
+  shared: "shared input",
+};
+
+/** Where the supervision resistors sit. */
+export const PLACEMENT_WORDS: Record<Placement, string> = {
+  "at-detector": "resistor at the detector",
+  "at-panel": "resistor at the panel",
+  "loop-back": "loop-back resistor",
+};
+
+/** What the panel makes of a reading. */
+export const REPORT_WORDS: Record<Report, string> = {
+  short: "short",
+  normal: "normal",
+  active: "active (alarm)",
+  "active-a": "detector A active",
+  "active-b": "detector B active",
+  "active-both": "both detectors active",
+  open: "open / cut",
+  trouble: "trouble",
+};
+
+export const CATEGORY_WORDS: Record<DetectorCategory, string> = {
+  "door-contact": "door contact",
+  "window-contact": "window contact",
+  motion: "motion detector",
+  "glass-break": "glass-break detector",
+  vibration: "vibration detector",
+  panic: "hold-up button",
+  water: "flood detector",
+  temperature: "temperature detector",
+  smoke: "smoke detector",
+  heat: "heat detector",
+};
+
+/** The supervision a designer asks for on a schedule row: a scheme, or leave to share. */
+export const SUPERVISION_WORDS: Record<SupervisionPreference, string> = {
+  "double-eol": SCHEME_WORDS["double-eol"],
+  "single-eol": SCHEME_WORDS["single-eol"],
+  "shared-ok": "may share an input",
+  none: SCHEME_WORDS.none,
+};
+
+/** The word with a capital first letter, to start a label or a sentence. */
+export function sentence(word: string): string {
+  return word.charAt(0).toUpperCase() + word.slice(1);
+}
+
+/** A word map with every word capitalised, for screens whose labels stand alone. */
+export function sentenceWords<K extends string>(words: Record<K, string>): Record<K, string> {
+  return Object.fromEntries(Object.entries<string>(words).map(([k, w]) => [k, sentence(w)])) as Record<K, string>;
+}
