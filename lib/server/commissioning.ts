@@ -16,7 +16,8 @@ import { commissioningProgress, type CommissioningProgressReport, type RecordedR
 import type { EffectiveReview } from "@/lib/review/effective-state";
 import { buildTerminalSheet } from "@/lib/sheet/build-sheet";
 import type { SheetInput, TerminalSheet, TestKey } from "@/lib/sheet/sheet-types";
-import { commissioningReportPdf, type ReportPhoto } from "@/lib/server/pdf/commissioning-report-pdf";
+import type { ReportPhoto } from "@/lib/server/pdf/commissioning-report-pdf";
+import { commissioningReportPdfOffLoop } from "@/lib/server/workers/off-loop";
 import type { PageSize } from "@/lib/server/pdf/pdf-kit";
 
 // Commissioning of a layout's approved revision: meter readings judged against the terminal sheet (stored once
@@ -256,6 +257,6 @@ export async function commissioningReportPdfFor(actor: Actor, layoutId: number, 
     const v = photoView(p);
     return { boardKey: v.boardKey ?? "", input: v.input, fileName: v.fileName, sizeBytes: v.sizeBytes, takenBy: v.uploadedBy, takenAt: v.createdAt };
   });
-  const pdf = await commissioningReportPdf(commissioningProgress(sheet, readings), { ...sheetMetaOf(ctx), caution: sheet.caution }, reportPhotos, size);
+  const pdf = await commissioningReportPdfOffLoop(commissioningProgress(sheet, readings), { ...sheetMetaOf(ctx), caution: sheet.caution }, reportPhotos, size);
   return { pdf, fileName: `${fileStem("commissioning", ctx.site.name, ctx.layout.name, `rev-${rev}`)}.pdf` };
 }

@@ -14,7 +14,8 @@ import { boardName } from "@/lib/layout/names";
 import { layoutDocumentSchema, type LayoutDocument } from "@/lib/layout/schema";
 import type { CreateLayoutInput, SaveLayoutInput, SuggestRequest } from "@/lib/layout/layout-request-schema";
 import type { Schedule } from "@/lib/schedule/schema";
-import { solveLayout, suggestHardware, type Suggestion } from "@/lib/solver";
+import { solveLayout, type Suggestion } from "@/lib/solver";
+import { suggestOffLoop } from "@/lib/server/workers/off-loop";
 import type { Severity } from "@/lib/findings";
 import { summarizeSolve, type LayoutSolveSummary } from "@/lib/layout/layout-summary";
 
@@ -169,7 +170,7 @@ export async function createLayout(actor: Actor, siteId: number, input: CreateLa
     document = blankDocument(input.panelId, schedule, catalog);
     from = "blank";
   } else {
-    const s = suggestHardware(schedule, catalog, { allowShared: input.suggestion.allowShared, busCableM: input.suggestion.busCableM });
+    const s = await suggestOffLoop(schedule, catalog, { allowShared: input.suggestion.allowShared, busCableM: input.suggestion.busCableM });
     if (!s.found) throw new ApiError(422, `No suggestion: ${s.reason}`);
     document = s.layout;
     from = input.suggestion.allowShared ? "suggestion-shared" : "suggestion-single";
@@ -309,7 +310,6 @@ export async function suggestForSite(actor: Actor, siteId: number, opts: Suggest
   const [schedule, catalog] = await Promise.all([loadSchedule(siteId), catalogFor(actor.organisationId)]);
   if (schedule.length === 0) throw new ApiError(422, "The device schedule is empty: add detectors before asking for hardware.");
   const base = { busCableM: opts?.busCableM, power: opts?.power };
-  return {
-    suggestions: [false, true].map((allowShared) => suggestionView(allowShared, suggestHardware(schedule, catalog, { ...base, allowShared }))),
-  };
+  const suggestions = await Promise.all([false, true].map(async (allowShared) => suggestionView(allowShared, await suggestOffLoop(schedule, catalog, { ...base, allowShared }))));
+  return { suggestions };
 }

@@ -10,27 +10,26 @@ import { fileStem, findLayoutForReview, getTerminalSheet, loadSheetContext, shee
 import type { Actor } from "./session";
 import { Membership, Site, User } from "@/models";
 import type { PageSize } from "@/lib/server/pdf/pdf-kit";
-import { terminalSheetPdf } from "@/lib/server/pdf/terminal-sheet-pdf";
+import { terminalSheetPdfOffLoop } from "@/lib/server/workers/off-loop";
 import { loopJsonReplacer } from "@/lib/loop/loop-json";
-import { buildTerminalSheet } from "@/lib/sheet/build-sheet";
 
 // The terminal sheet as a PDF, for download and e-mailed to the site's installer as an attachment.
 
-// Laying out a sheet of a few dozen loops takes pdfkit over a second of CPU, so the last few PDFs are kept, keyed by
-// everything they are made from (the sheet itself, its heading, the paper): the same sheet is not laid out twice.
+// Laying out a sheet of a few dozen loops takes pdfkit over a second of CPU (on a worker thread), so the last few PDFs are kept, keyed by
+// everything they are made from (the revision's document, the schedule and the catalog the sheet is built from, its
+// heading, the paper): the same sheet is not laid out twice. The sheet itself is built on the worker thread too.
 const PDF_CACHE_ENTRIES = 8;
 const pdfCache = new Map<string, Buffer>();
 
 /** The terminal sheet PDF of a revision (the approved one by default), from the cache when the same sheet was made before. */
 export async function terminalSheetPdfCached(actor: Actor, layoutId: number, opts: SheetOptions & { size?: PageSize } = {}): Promise<{ pdf: Buffer; fileName: string }> {
   const ctx = await loadSheetContext(actor, layoutId, opts);
-  const sheet = buildTerminalSheet(ctx.document, ctx.schedule, ctx.catalog);
   const meta = sheetMetaOf(ctx);
   const size = opts.size ?? "A4";
-  const key = createHash("sha256").update(JSON.stringify({ sheet, meta, size }, loopJsonReplacer)).digest("hex");
+  const key = createHash("sha256").update(JSON.stringify({ document: ctx.document, schedule: ctx.schedule, catalog: ctx.catalog, meta, size }, loopJsonReplacer)).digest("hex");
   let pdf = pdfCache.get(key);
   if (pdf) pdfCache.delete(key);
-  else pdf = await terminalSheetPdf(sheet, meta, size);
+  else pdf = await terminalSheetPdfOffLoop(ctx.document, ctx.schedule, ctx.catalog, meta, size);
   pdfCache.set(key, pdf);
   while (pdfCache.size > PDF_CACHE_ENTRIES) pdfCache.delete(pdfCache.keys().next().value!);
   return { pdf, fileName: `${fileStem("terminal-sheet", ctx.site.name, ctx.layout.name, `rev-${ctx.revision}`)}.pdf` };

@@ -13,7 +13,8 @@ import { effectiveReview, type EffectiveReview } from "@/lib/review/effective-st
 import type { Schedule } from "@/lib/schedule/schema";
 import { buildTerminalSheet } from "@/lib/sheet/build-sheet";
 import type { TerminalSheet } from "@/lib/sheet/sheet-types";
-import { terminalSheetPdf, type SheetMeta } from "@/lib/server/pdf/terminal-sheet-pdf";
+import type { SheetMeta } from "@/lib/server/pdf/terminal-sheet-pdf";
+import { terminalSheetPdfOffLoop } from "@/lib/server/workers/off-loop";
 import type { PageSize } from "@/lib/server/pdf/pdf-kit";
 
 // Terminal sheets, zone lists and bills of materials of a layout revision: by default the approved revision
@@ -105,7 +106,7 @@ export function fileStem(...parts: (string | number)[]): string {
 
 export async function terminalSheetPdfFor(actor: Actor, layoutId: number, opts: SheetOptions & { size?: PageSize } = {}): Promise<{ pdf: Buffer; fileName: string }> {
   const ctx = await loadSheetContext(actor, layoutId, opts);
-  const pdf = await terminalSheetPdf(buildTerminalSheet(ctx.document, ctx.schedule, ctx.catalog), sheetMetaOf(ctx), opts.size ?? "A4");
+  const pdf = await terminalSheetPdfOffLoop(ctx.document, ctx.schedule, ctx.catalog, sheetMetaOf(ctx), opts.size ?? "A4");
   return { pdf, fileName: `${fileStem("terminal-sheet", ctx.site.name, ctx.layout.name, `rev-${ctx.revision}`)}.pdf` };
 }
 
