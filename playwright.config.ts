@@ -21,7 +21,11 @@ export default defineConfig({
     screenshot: "only-on-failure",
     launchOptions: { executablePath: "/usr/bin/chromium", args: chromiumArgs },
   },
-  projects: [{ name: "chromium", use: { ...devices["Desktop Chrome"], launchOptions: { executablePath: "/usr/bin/chromium", args: chromiumArgs } } }],
+  projects: [
+    // signs each role in once and saves its state under .auth/ (tests/e2e/support-auth.setup.ts); the specs start from those
+    { name: "setup", testMatch: /support-auth\.setup\.ts$/, use: { ...devices["Desktop Chrome"], launchOptions: { executablePath: "/usr/bin/chromium", args: chromiumArgs } } },
+    { name: "chromium", dependencies: ["setup"], use: { ...devices["Desktop Chrome"], launchOptions: { executablePath: "/usr/bin/chromium", args: chromiumArgs } } },
+  ],
   webServer: {
     command: "bash scripts/serve-e2e.sh",
     url: `${baseURL}/api/health`,
@@ -29,5 +33,7 @@ export default defineConfig({
     timeout: 120_000,
     stdout: "ignore",
     stderr: "pipe",
+    // SIGTERM, not the default SIGKILL: scripts/serve-e2e.sh then stops the mail sink and the fake S3 server it started
+    gracefulShutdown: { signal: "SIGTERM", timeout: 15_000 },
   },
 });

@@ -9,7 +9,8 @@ export default defineConfig({
     projects: [
       {
         resolve: { alias },
-        test: { name: "unit", include: ["lib/**/*.test.ts", "tests/unit/**/*.test.ts"], environment: "node" },
+        // property tests run hundreds of cases: room for a busy two-core machine
+        test: { name: "unit", include: ["lib/**/*.test.ts", "tests/unit/**/*.test.ts"], environment: "node", testTimeout: 20000 },
       },
       {
         resolve: { alias },

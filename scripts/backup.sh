@@ -3,6 +3,7 @@
 #   scripts/backup.sh [ARCHIVE] [DATABASE]     default: .data/backups/loopwright-<UTC time>.tar.gz, database loopwright
 set -euo pipefail
 source "$(dirname "$0")/env.sh"
+bash "$ROOT/scripts/doctor.sh" --for backup --quiet || exit 1 # names what is missing
 db="${2:-loopwright}"
 out="${1:-$DATA_DIR/backups/loopwright-$(date -u +%Y%m%dT%H%M%SZ).tar.gz}"
 mkdir -p "$(dirname "$out")"

@@ -2,6 +2,7 @@
 # Private MariaDB instance on loopback, data under .data/mariadb (git-ignored).
 #   scripts/db.sh up            install if missing, initialise once, start, wait, create app database + user
 #   scripts/db.sh down          clean shutdown
+#   scripts/db.sh status        exit 0 when it answers
 #   scripts/db.sh create NAME   (re)create an empty database NAME owned by the app user
 #   scripts/db.sh sql           open a client as root
 set -euo pipefail
@@ -20,6 +21,11 @@ up() {
       mariadb-install-db --no-defaults --user="$(id -un)" --datadir="$DB_DIR/data" \
         --auth-root-authentication-method=normal --skip-test-db >"$DB_DIR/install.log" 2>&1
     fi
+    # Another instance (another checkout's data folder) already holding the port would make this start fail obscurely.
+    if (exec 3<>"/dev/tcp/127.0.0.1/$DB_PORT") 2>/dev/null; then
+      echo "Port $DB_PORT is taken by another server (another checkout's MariaDB?). Set LOOPWRIGHT_DB_PORT to a free port for a private instance." >&2
+      exit 1
+    fi
     rm -f "$DB_SOCKET"
     # setsid: the server outlives the shell that started it.
     setsid mariadbd --no-defaults --user="$(id -un)" --datadir="$DB_DIR/data" \
@@ -37,7 +43,7 @@ up() {
 }
 
 down() {
-  if running; then admin shutdown && echo "MariaDB stopped"; else echo "MariaDB is not running"; fi
+  if running; then admin shutdown && echo "MariaDB on 127.0.0.1:$DB_PORT stopped"; else echo "MariaDB is not running"; fi
 }
 
 create() {
@@ -49,7 +55,8 @@ create() {
 case "${1:-}" in
   up) up ;;
   down) down ;;
+  status) if running; then echo "MariaDB running on 127.0.0.1:$DB_PORT"; else echo "MariaDB is not running on 127.0.0.1:$DB_PORT"; exit 1; fi ;;
   create) create "${2:?database name}" ;;
   sql) client ;;
-  *) echo "usage: scripts/db.sh up|down|create NAME|sql" >&2; exit 2 ;;
+  *) echo "usage: scripts/db.sh up|down|status|create NAME|sql" >&2; exit 2 ;;
 esac

@@ -3,6 +3,7 @@
 #   scripts/restore.sh ARCHIVE [DATABASE]      default database: loopwright
 set -euo pipefail
 source "$(dirname "$0")/env.sh"
+bash "$ROOT/scripts/doctor.sh" --for backup --quiet || exit 1 # names what is missing
 archive="${1:?archive made by scripts/backup.sh}"
 db="${2:-loopwright}"
 [[ "$db" =~ ^loopwright[a-z0-9_]*$ ]] || { echo "refusing: database name must start with loopwright" >&2; exit 1; }

@@ -5,6 +5,7 @@ set -euo pipefail
 source "$(dirname "$0")/env.sh"
 cd "$ROOT"
 
+ensure_system start  # lists what is missing (scripts/doctor.sh), installs mariadb-server if needed
 ensure_node_modules
 bash scripts/db.sh up
 
@@ -12,7 +13,6 @@ export DATABASE_URL="$(db_url loopwright)"
 export NEXTAUTH_URL="http://localhost:3000"
 export NEXTAUTH_SECRET="$(cat "$DATA_DIR/session-secret")"
 export SMTP_PORT
-export LOOPWRIGHT_DEV_OUTBOX=1
 
 npx tsx scripts/migrate.ts
 npx tsx scripts/seed.ts
@@ -22,9 +22,9 @@ export_s3_env "$S3_PORT"
 bash scripts/s3-sink.sh start "$S3_PORT"
 
 # Rebuild only when a source file is newer than the last build.
-if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib catalog models fonts public instrumentation.ts next.config.mjs postcss.config.mjs package-lock.json -newer .next/BUILD_ID -type f -print -quit 2>/dev/null)" ]; then
+if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib catalog models fonts public instrumentation.ts proxy.ts next.config.mjs postcss.config.mjs package-lock.json -newer .next/BUILD_ID -type f -print -quit 2>/dev/null)" ]; then
   npx next build
 fi
 
-echo "Loopwright on http://localhost:3000 — demo sign-ins are in README.md; outbox at /dev/outbox. Ctrl-C stops the app; npm run stop stops MariaDB, the mail sink and the fake S3 server."
+echo "Loopwright on http://localhost:3000 — demo sign-ins are in README.md; demo mail at http://127.0.0.1:$((SMTP_PORT + 1))/. Ctrl-C stops the app; npm run stop stops MariaDB, the mail sink and the fake S3 server."
 exec npx next start --hostname 127.0.0.1 --port 3000

@@ -64,6 +64,8 @@ export const inputTypeSchema = z.strictObject({
   maxLoopOhms: ohms,
   /** Whether life-safety (fire) devices may be wired to this input type at all. */
   lifeSafety: z.boolean().default(false),
+  /** The input also watches its loop for a core touching earth (reported as trouble). */
+  earthFaultMonitor: z.boolean().optional(),
 });
 export type InputType = z.infer<typeof inputTypeSchema>;
 

@@ -9,6 +9,7 @@ import { maxCableRun, type CableRow } from "./max-cable";
 import { FAULT_WORDS, statesLabel } from "./row-labels";
 import { buildFindings } from "./loop-findings";
 import { resistorUses } from "./resistor-uses";
+import { attachWiring, wiringProblems } from "./wiring-analysis";
 import type { Fault, LoopAnalysis, LoopSpec, Reading } from "./types";
 
 const LAYOUT: FindingTarget = { kind: "layout" };
@@ -46,7 +47,7 @@ function invalidAnalysis(problems: LoopProblem[], target: FindingTarget): LoopAn
 }
 
 export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: FindingTarget = LAYOUT): LoopAnalysis {
-  const problems = loopProblems(loop, inputType);
+  const problems = [...loopProblems(loop, inputType), ...wiringProblems(loop)];
   if (problems.length) return invalidAnalysis(problems, target);
   const m = compileLoop(loop, inputType);
   const cb = compileBands(inputType.bands[loop.scheme]!);
@@ -149,5 +150,6 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
   }
   const findings: Finding[] = buildFindings({ loop, inputType, model: m, rows, masks, analysis }, target);
   analysis.findings = findings;
+  attachWiring(analysis, loop, inputType, m, target);
   return analysis;
 }

@@ -9,6 +9,8 @@ export { rowsMatchingReading } from "./meter-reading";
 export { LIFE_SAFETY_CAUTION } from "./loop-findings";
 export { statesLabel, rowLabel, REPORT_WORDS, FAULT_WORDS } from "./row-labels";
 export { loopJsonReplacer, loopJsonReviver } from "./loop-json";
+export { CORE_COLOURS, CABLE_CORES_WORDS, coresOf, conductorFaultLabel, enumerateConductorFaults, positionWords } from "./conductors";
+export { classAProblems } from "./class-a";
 
 export {
   COPPER_RESISTIVITY_20C,
@@ -45,6 +47,11 @@ export {
   loopDetectorSchema,
   cableSpecSchema,
   placementSchema,
+  cableCoresSchema,
+  coreColourSchema,
+  conductorFaultSchema,
+  conductorFaultsSchema,
+  pathwaySchema,
   findingTargetSchema,
   inputTypeRefSchema,
   type AnalyzeRequest,

@@ -6,6 +6,7 @@ import { contactTypeSchema, idSchema, inputTypeSchema, wiringSchemeSchema, type 
 import type { FindingTarget } from "@/lib/findings";
 import { cableGaugeSchema } from "./cable-gauge";
 import { inputTypeProblems, loopShapeProblems } from "./loop-problems";
+import { wiringProblems } from "./wiring-analysis";
 import type { LoopSpec } from "./types";
 
 export const placementSchema = z.enum(["at-detector", "at-panel", "loop-back"], {
@@ -30,6 +31,41 @@ export const loopDetectorSchema = z.strictObject({
 
 const ohmsField = (what: string) => num(what).optional();
 
+export const cableCoresSchema = z.enum(["two-core", "four-core-loop-back", "four-core-alarm-tamper"], {
+  error: 'cores is "two-core", "four-core-loop-back" or "four-core-alarm-tamper"',
+});
+export const coreColourSchema = z.enum(["yellow", "blue", "green", "white"], { error: "a core is yellow, blue, green or white" });
+export const loopPartSchema = z.enum(["contact", "tamper", "eol", "alarm", "shared-a", "shared-b"], {
+  error: 'part is "contact", "tamper", "eol", "alarm", "shared-a" or "shared-b"',
+});
+const atM = num("the fault's position (metres from the panel)");
+export const conductorFaultSchema = z.discriminatedUnion(
+  "kind",
+  [
+    z.strictObject({ kind: z.literal("short"), cores: z.tuple([coreColourSchema, coreColourSchema]), atM }),
+    z.strictObject({ kind: z.literal("open"), core: coreColourSchema, atM }),
+    z.strictObject({ kind: z.literal("earth"), core: coreColourSchema, atM }),
+    z.strictObject({ kind: z.literal("part-short"), part: loopPartSchema, detector: z.number().int("a detector index is a whole number").optional() }),
+  ],
+  { error: 'a conductor fault\'s kind is "short", "open", "earth" or "part-short"' },
+);
+const faultListSchema = z.array(conductorFaultSchema).max(200, "at most 200 conductor faults in one request");
+/** "all", or a list of conductor faults; errors point into the list rather than at the union. */
+export const conductorFaultsSchema = z.unknown().transform((v, ctx): "all" | z.output<typeof faultListSchema> => {
+  if (v === "all") return "all";
+  if (!Array.isArray(v)) {
+    ctx.addIssue({ code: "custom", message: 'conductorFaults is "all" or a list of conductor faults' });
+    return z.NEVER;
+  }
+  const r = faultListSchema.safeParse(v);
+  if (!r.success) {
+    for (const i of r.error.issues) ctx.addIssue({ code: "custom", path: i.path as (string | number)[], message: i.message });
+    return z.NEVER;
+  }
+  return r.data;
+});
+export const pathwaySchema = z.enum(["class-b", "class-a"], { error: 'pathway is "class-b" or "class-a"' });
+
 export const loopSpecSchema = z
   .strictObject({
     scheme: wiringSchemeSchema,
@@ -42,9 +78,13 @@ export const loopSpecSchema = z
     cable: cableSpecSchema,
     contactOhms: num("contact resistance").default(0.05),
     shortOhms: num("short resistance").optional(),
+    cores: cableCoresSchema.optional(),
+    conductorFaults: conductorFaultsSchema.optional(),
+    pathway: pathwaySchema.optional(),
   })
   .superRefine((loop, ctx) => {
     for (const p of loopShapeProblems(loop as LoopSpec)) ctx.addIssue({ code: "custom", path: p.path, message: p.message });
+    for (const p of wiringProblems(loop as LoopSpec)) ctx.addIssue({ code: "custom", path: p.path, message: p.message });
   });
 
 // The schema's output is exactly the engine's LoopSpec.

@@ -15,7 +15,8 @@ describe("loop reading properties", () => {
         const tempC = loop.cable.tempMinC + u * (loop.cable.tempMaxC - loop.cable.tempMinC);
         const short = readingAt(loop, r.states, r.fault, { tempC }, testInputType);
         const long = readingAt(loop, r.states, r.fault, { tempC, lengthM: loop.cable.lengthM + extra }, testInputType);
-        expect(long).toBeGreaterThanOrEqual(short);
+        // a run longer by a fraction of a nanometre may round one ulp lower: allow 1e-12 relative
+        expect(long).toBeGreaterThanOrEqual(short * (1 - 1e-12));
       }),
       { numRuns: 300 },
     );

@@ -5,9 +5,9 @@ import fc from "fast-check";
 import { Simulation } from "eecircuit-engine";
 import { analyzeLoop } from "./analyze-loop";
 import { buildLoopNetlist, ohmsFromResult, refereeConductorOhms, type SpiceCase } from "./spice-netlist";
-import { loopArb } from "./test-support/loop-arbitraries";
+import { cableArb, loopArb } from "./test-support/loop-arbitraries";
 import { testInputType } from "./test-support/input-types";
-import type { LoopSpec } from "./types";
+import type { ConductorReading, LoopSpec } from "./types";
 
 let sim: Simulation;
 beforeAll(async () => {
@@ -85,5 +85,84 @@ describe("loop readings against ngspice", () => {
       { numRuns: 40, seed: 60063 },
     );
     expect(compared).toBeGreaterThan(1000);
+  }, 300_000);
+
+  it("random loops with every conductor fault (cores, opens, earth, part shorts) agree within 0.01 %", async () => {
+    let compared = 0;
+    const withCores = fc.tuple(loopArb, fc.boolean()).map(([loop, alarmTamper]): LoopSpec => {
+      const at = alarmTamper && loop.placement === "at-detector" && loop.detectors.some((d) => d.tamper);
+      return { ...loop, cores: at ? "four-core-alarm-tamper" : undefined, conductorFaults: "all" };
+    });
+    await fc.assert(
+      fc.asyncProperty(withCores, async (loop) => {
+        const a = analyzeLoop(loop, testInputType);
+        expect(a.valid).toBe(true);
+        const tol = loop.tolerancePct / 100;
+        const mid = (loop.cable.tempMinC + loop.cable.tempMaxC) / 2;
+        const cases: SpiceCase[] = [];
+        for (const f of a.conductors!.faults)
+          for (const r of f.rows) {
+            const c = { states: r.states, fault: "none" as const, conductorFault: f.fault };
+            cases.push({ ...c, tempC: loop.cable.tempMinC, partFactor: 1 - tol }, { ...c, tempC: loop.cable.tempMaxC, partFactor: 1 + tol }, { ...c, tempC: mid, partFactor: 1 });
+          }
+        const spice = await spiceReadings(loop, cases);
+        let i = 0;
+        for (const f of a.conductors!.faults)
+          for (const r of f.rows) {
+            [r.minOhms, r.maxOhms, r.nominalOhms!].forEach((e, k) => {
+              const s = spice[i + k];
+              if (!agree(e, s)) throw new Error(`${loop.scheme}/${loop.placement}/${loop.cores ?? ""} ${r.label} [${k}]: engine ${e}, ngspice ${s}`);
+              if (e !== Infinity) compared++;
+            });
+            i += 3;
+          }
+      }),
+      { numRuns: 25, seed: 60062 },
+    );
+    expect(compared).toBeGreaterThan(3000);
+  }, 600_000);
+
+  it("random Class A loops: every single open, fed from the panel and from either end, agree within 0.01 %", async () => {
+    const classA = fc
+      .record({ n: fc.integer({ min: 1, max: 4 }), double: fc.boolean(), cable: cableArb, contactOhms: fc.double({ min: 0.01, max: 1, noNaN: true }), tol: fc.constantFrom(1, 5, 10) })
+      .map(({ n, double, cable, contactOhms, tol }): LoopSpec => ({
+        scheme: double ? "double-eol" : "single-eol",
+        placement: "at-detector",
+        pathway: "class-a",
+        detectors: Array.from({ length: n }, (_, i) => ({ label: `D${i + 1}`, contact: "NO", tamper: false, lifeSafety: true })),
+        tolerancePct: tol,
+        cable,
+        contactOhms,
+      }));
+    let compared = 0;
+    await fc.assert(
+      fc.asyncProperty(classA, async (loop) => {
+        const a = analyzeLoop(loop, testInputType);
+        expect(a.valid).toBe(true);
+        const tol = loop.tolerancePct / 100;
+        const mid = (loop.cable.tempMinC + loop.cable.tempMaxC) / 2;
+        const rows: { row: ConductorReading; feed: "panel" | "out" | "return"; open: { core: "yellow" | "blue"; segment: number } }[] = [];
+        a.classA!.opens.forEach((o, k) => {
+          const open = { core: o.core as "yellow" | "blue", segment: k % (loop.detectors.length + 1) };
+          rows.push({ row: o.rest, feed: "panel", open });
+          for (const d of o.devices) rows.push({ row: d.reading, feed: d.side ?? "out", open });
+        });
+        const cases: SpiceCase[] = [];
+        for (const r of rows) {
+          const c = { states: r.row.states, fault: "none" as const, classA: { feed: r.feed, open: r.open } };
+          cases.push({ ...c, tempC: loop.cable.tempMinC, partFactor: 1 - tol }, { ...c, tempC: loop.cable.tempMaxC, partFactor: 1 + tol }, { ...c, tempC: mid, partFactor: 1 });
+        }
+        const spice = await spiceReadings(loop, cases);
+        rows.forEach((r, i) =>
+          [r.row.minOhms, r.row.maxOhms, r.row.nominalOhms!].forEach((e, k) => {
+            const s = spice[3 * i + k];
+            if (!agree(e, s)) throw new Error(`Class A ${r.row.label} [${k}]: engine ${e}, ngspice ${s}`);
+            if (e !== Infinity) compared++;
+          }),
+        );
+      }),
+      { numRuns: 30, seed: 72 },
+    );
+    expect(compared).toBeGreaterThan(300);
   }, 300_000);
 });

@@ -6,7 +6,7 @@
 // coefficient in the engine shows up as a disagreement instead of being copied into both sides.
 import type { InputType } from "@/lib/catalog/schema";
 import { fittedValues } from "./loop-problems";
-import type { CableGauge, DetectorState, Fault, LoopSpec } from "./types";
+import type { CableGauge, ConductorFault, CoreColour, DetectorState, Fault, LoopPart, LoopSpec } from "./types";
 
 /** An open contact or cut conductor; large enough to vanish beside any loop, small enough to keep the matrix sane. */
 export const SPICE_OPEN_OHMS = 1e12;
@@ -18,6 +18,10 @@ export interface SpiceCase {
   tempC: number;
   /** Multiplier on every resistor's marked value (1 − tol for the low end, 1 + tol for the high end). */
   partFactor: number;
+  /** A conductor fault instead of `fault` (which is then "none"). */
+  conductorFault?: ConductorFault;
+  /** Class A loops: where the input feeds the loop (default "panel": out terminals, end of line in place). */
+  classA?: { feed: "panel" | "out" | "return"; open: { core: "yellow" | "blue"; segment: number } | null };
 }
 
 /** IEC 60028 annealed copper at 20 °C: 1/58 Ω·mm²/m, i.e. 1.7241e-8 Ω·m. */
@@ -64,10 +68,30 @@ function addCase(net: Net, p: string, loop: LoopSpec, inputType: InputType | und
   const RB = (f.sharedOhms?.[1] ?? 0) * c.partFactor;
   const dets = loop.detectors;
   const closed = (i: number) => (dets[i].contact === "NO" ? c.states[i] === "active" : c.states[i] !== "active");
-  const contact = (a: string, b: string, i: number) => net.r(a, b, closed(i) ? rk : Infinity);
+  const contact = (a: string, b: string, i: number) => part("contact", a, b, closed(i) ? rk : Infinity, i);
   const pp = `${p}pp`;
   const gnd = "0";
   net.lines.push(`I${p} ${gnd} ${pp} DC 1`);
+  const cf = c.conductorFault;
+  const L = loop.cable.lengthM;
+  const rPerM = L > 0 ? rc / L : 0;
+  const taps: Partial<Record<CoreColour, string>> = {};
+  // One core from its panel-end node to its detector-end node, split where a conductor fault sits on it.
+  const wire = (core: CoreColour, panel: string, far: string) => {
+    if (!cf || cf.kind === "part-short" || !(cf.kind === "short" ? cf.cores.includes(core) : cf.core === core)) return net.r(panel, far, rc);
+    const a = net.node();
+    const b = cf.kind === "open" ? net.node() : a;
+    net.r(panel, a, rPerM * cf.atM);
+    if (a !== b) net.r(a, b, Infinity); // the break, as the stand-in for an open so every node keeps a DC path
+    net.r(b, far, rPerM * (L - cf.atM));
+    taps[core] = a;
+  };
+  const parts: { part: LoopPart; detector?: number; a: string; b: string }[] = [];
+  const part = (pt: LoopPart, a: string, b: string, ohms: number, detector?: number) => {
+    parts.push({ part: pt, detector, a, b });
+    net.r(a, b, ohms);
+  };
+  const alarmTamper = loop.cores === "four-core-alarm-tamper";
 
   // Tamper contacts in series from `a`; returns the far node.
   const tampers = (a: string): string => {
@@ -75,7 +99,7 @@ function addCase(net: Net, p: string, loop: LoopSpec, inputType: InputType | und
     dets.forEach((d, i) => {
       if (!d.tamper) return;
       const m = net.node();
-      net.r(n, m, c.states[i] === "tamper" ? Infinity : rk);
+      part("tamper", n, m, c.states[i] === "tamper" ? Infinity : rk, i);
       n = m;
     });
     return n;
@@ -95,9 +119,9 @@ function addCase(net: Net, p: string, loop: LoopSpec, inputType: InputType | und
   const sharedPair = (a: string, b: string) => {
     const mid = net.node();
     contact(a, mid, 0);
-    net.r(a, mid, RA);
+    part("shared-a", a, mid, RA);
     contact(mid, b, 1);
-    net.r(mid, b, RB);
+    part("shared-b", mid, b, RB);
   };
 
   const scheme = loop.scheme;
@@ -108,54 +132,70 @@ function addCase(net: Net, p: string, loop: LoopSpec, inputType: InputType | und
   const x = net.node(); // far end of the feeding conductor
 
   if (placement === "at-detector") {
-    net.r(pp, x, cut ? Infinity : rc);
-    net.r(y, gnd, rc);
-    const t = tampers(x);
+    if (cut) net.r(pp, x, Infinity);
+    else wire("yellow", pp, x);
+    let t: string;
+    if (alarmTamper) {
+      // alarm pair out and back, linked at the panel to the tamper pair (green out, white back)
+      const pb = net.node();
+      const gt = net.node();
+      const wt = net.node();
+      wire("blue", pb, y);
+      wire("green", pb, gt);
+      wire("white", gnd, wt);
+      net.r(tampers(gt), wt, 0);
+      t = x;
+    } else {
+      wire("blue", gnd, y);
+      t = tampers(x);
+    }
     if (scheme === "none") group(t, y);
     else if (scheme === "single-eol") {
       if (dets[0].contact === "NO") {
         group(t, y);
-        net.r(t, y, R);
+        part("eol", t, y, R);
       } else {
         const m = net.node();
         group(t, m);
-        net.r(m, y, R);
+        part("eol", m, y, R);
       }
     } else if (scheme === "double-eol") {
       const m = net.node();
-      net.r(t, m, R);
+      part("eol", t, m, R);
       group(m, y);
-      net.r(m, y, Ra);
+      part("alarm", m, y, Ra);
     } else {
       const m = net.node();
-      net.r(t, m, R);
+      part("eol", t, m, R);
       sharedPair(m, y);
     }
   } else if (placement === "at-panel") {
     if (scheme === "single-eol" && dets[0].contact === "NO") {
-      net.r(pp, gnd, R);
+      part("eol", pp, gnd, R);
     } else {
       const q = net.node();
-      net.r(pp, q, R);
-      if (scheme === "double-eol") net.r(q, gnd, Ra);
+      part("eol", pp, q, R);
+      if (scheme === "double-eol") part("alarm", q, gnd, Ra);
       panelEndA = q;
     }
-    net.r(panelEndA, x, cut ? Infinity : rc);
-    net.r(y, gnd, rc);
+    if (cut) net.r(panelEndA, x, Infinity);
+    else wire("yellow", panelEndA, x);
+    wire("blue", gnd, y);
     const t = tampers(x);
     if (scheme === "shared") sharedPair(t, y);
     else group(t, y);
   } else {
     // loop-back: c1 out to x, c4 back from y; the resistor through c2 (out→panel) and c3 (panel→out).
-    net.r(pp, x, cut ? Infinity : rc);
-    net.r(y, gnd, rc);
+    if (cut) net.r(pp, x, Infinity);
+    else wire("yellow", pp, x);
+    wire("blue", gnd, y);
     const t = tampers(x);
     const q1 = net.node();
     const q2 = net.node();
     const viaPanel = (from: string, to: string) => {
-      net.r(from, q1, rc); // c2
-      net.r(q1, q2, R);
-      net.r(q2, to, rc); // c3
+      wire("green", q1, from); // c2, panel end q1
+      part("eol", q1, q2, R);
+      wire("white", q2, to); // c3, panel end q2
     };
     if (scheme === "single-eol" && dets[0].contact === "NO") {
       group(t, y);
@@ -165,13 +205,55 @@ function addCase(net: Net, p: string, loop: LoopSpec, inputType: InputType | und
       if (scheme === "single-eol") group(t, z);
       else if (scheme === "double-eol") {
         group(t, z);
-        net.r(t, z, Ra);
+        part("alarm", t, z, Ra);
       } else sharedPair(t, z);
       viaPanel(z, y);
     }
   }
   if (c.fault === "short-panel") net.r(panelEndA, gnd, rsh);
   if (c.fault === "short-detector") net.r(x, y, rsh);
+  if (cf?.kind === "short") net.r(taps[cf.cores[0]]!, taps[cf.cores[1]]!, rsh);
+  if (cf?.kind === "earth") net.r(taps[cf.core]!, `${p}earth`, rsh); // earth is its own node: no return path
+  if (cf?.kind === "part-short")
+    for (const q of parts) if (q.part === cf.part && (cf.detector === undefined || q.detector === cf.detector)) net.r(q.a, q.b, rsh);
+  return pp;
+}
+
+/**
+ * A Class A loop: two rails from the out terminals past each detector (evenly spaced over the cable length)
+ * and back one more cable length to the return terminals; NO contacts across the rails at each detector.
+ */
+function addClassACase(net: Net, p: string, loop: LoopSpec, inputType: InputType | undefined, c: SpiceCase): string {
+  const f = fittedValues(loop, inputType);
+  const { feed, open } = c.classA!;
+  const n = loop.detectors.length;
+  const L = loop.cable.lengthM;
+  const pp = `${p}pp`;
+  net.lines.push(`I${p} 0 ${pp} DC 1`);
+  const rail = (core: "yellow" | "blue") => {
+    const nodes = Array.from({ length: n + 2 }, () => net.node());
+    for (let s = 0; s <= n; s++) {
+      const r = refereeConductorOhms(loop.cable.gauge, s < n ? L / n : L, c.tempC);
+      if (open && open.core === core && open.segment === s) {
+        const a = net.node();
+        const b = net.node();
+        net.r(nodes[s], a, r / 2);
+        net.r(a, b, Infinity);
+        net.r(b, nodes[s + 1], r / 2);
+      } else net.r(nodes[s], nodes[s + 1], r);
+    }
+    return nodes;
+  };
+  const plus = rail("yellow");
+  const minus = rail("blue");
+  loop.detectors.forEach((_, i) => net.r(plus[i + 1], minus[i + 1], c.states[i] === "active" ? loop.contactOhms : Infinity));
+  const double = loop.scheme === "double-eol";
+  const R = (f.eolOhms ?? 0) * c.partFactor;
+  const Ra = (f.alarmOhms ?? 0) * c.partFactor;
+  const at = feed === "return" ? n + 1 : 0;
+  net.r(pp, plus[at], double ? R : 0);
+  net.r(minus[at], "0", 0);
+  if (feed === "panel") net.r(plus[n + 1], minus[n + 1], double ? Ra : R);
   return pp;
 }
 
@@ -182,7 +264,7 @@ export function buildLoopNetlist(loop: LoopSpec, cases: readonly SpiceCase[], in
   cases.forEach((c, i) => {
     const p = `k${i}_`;
     const net = new Net(p);
-    probes.push(addCase(net, p, loop, inputType, c));
+    probes.push(c.classA ? addClassACase(net, p, loop, inputType, c) : addCase(net, p, loop, inputType, c));
     lines.push(...net.lines);
   });
   lines.push(".op", ".end");

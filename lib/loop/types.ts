@@ -42,6 +42,68 @@ export interface LoopSpec {
   contactOhms: number;
   /** Resistance of an injected short (the fault itself), ohms; default 0. */
   shortOhms?: number;
+  /** The cable's cores; default two-core, or four-core-loop-back with a loop-back resistor. */
+  cores?: CableCores;
+  /** Conductor faults to check: "all" enumerates every single one (loops of up to 8 detectors). */
+  conductorFaults?: "all" | ConductorFault[];
+  /** NFPA 72 pathway class; "class-a" wires the loop out past every detector and back to the panel. */
+  pathway?: Pathway;
+}
+
+/** Cores named by colour (the colours of common alarm cable; common practice, no published source). */
+export type CoreColour = "yellow" | "blue" | "green" | "white";
+/**
+ * two-core: the input pair (yellow out, blue back). four-core-loop-back: the input pair plus green and white
+ * out to the detector and back to the loop-back resistor. four-core-alarm-tamper: the alarm pair (yellow,
+ * blue) and the tamper pair (green, white), linked in series at the panel so both sit on one input.
+ */
+export type CableCores = "two-core" | "four-core-loop-back" | "four-core-alarm-tamper";
+/** A part a stray strand or a wrong link can short on its own terminals. */
+export type LoopPart = "contact" | "tamper" | "eol" | "alarm" | "shared-a" | "shared-b";
+/** A conductor fault; `atM` is metres from the panel end (0) to the detector end (the cable length). */
+export type ConductorFault =
+  | { kind: "short"; cores: [CoreColour, CoreColour]; atM: number }
+  | { kind: "open"; core: CoreColour; atM: number }
+  | { kind: "earth"; core: CoreColour; atM: number }
+  | { kind: "part-short"; part: LoopPart; detector?: number };
+export type Pathway = "class-b" | "class-a";
+
+/** detected / mistaken / defeat as for the input-pair faults; an earth fault on an input that doesn't watch earth is
+ * not-supervised; a short between points already joined changes nothing (no-effect). */
+export type ConductorVerdict = "detected" | "mistaken" | "defeat" | "not-supervised" | "no-effect";
+
+export type ConductorReading = Omit<Reading, "fault">;
+
+export interface ConductorFaultResult {
+  fault: ConductorFault;
+  /** e.g. "a short between the yellow and green cores at the detector end". */
+  label: string;
+  verdict: ConductorVerdict;
+  /** One row per detector-state combination, in the order of the input-pair rows' combinations. */
+  rows: ConductorReading[];
+}
+
+export interface ConductorAnalysis {
+  cores: CableCores;
+  colours: CoreColour[];
+  faults: ConductorFaultResult[];
+}
+
+/** One single open on a Class A loop: what the panel reads, and whether each detector is still reported. */
+export interface ClassAOpen {
+  core: CoreColour;
+  atM: number;
+  /** e.g. "the yellow core open between Detector 1 and Detector 2". */
+  label: string;
+  /** The loop at rest read from the out terminals, as the panel first sees the open. */
+  rest: ConductorReading;
+  devices: { detector: number; side: "out" | "return" | null; reading: ConductorReading; reported: boolean }[];
+}
+
+export interface ClassAAnalysis {
+  /** Every detector, active alone, is reported after any single open, and each open is reported. */
+  everyDeviceReported: boolean;
+  opens: ClassAOpen[];
 }
 
 export type DetectorState = "rest" | "active" | "tamper";
@@ -98,6 +160,10 @@ export interface LoopAnalysis {
   maxCableByLoopOhmsM?: number | null;
   /** Shared inputs only: what is lost compared with one detector per input, in plain words. */
   sharedLost?: string[];
+  /** Conductor faults, when the loop asks for them. */
+  conductors?: ConductorAnalysis;
+  /** Class A loops only: every single open and what is still reported. */
+  classA?: ClassAAnalysis;
 }
 
 /** `target` is where findings point (default `{ kind: "layout" }`). */

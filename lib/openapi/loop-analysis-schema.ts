@@ -51,6 +51,54 @@ export const resistorUseSchema = z
   })
   .meta({ description: "A resistor the loop carries: value, what the input type expects, preferred series and colour code." });
 
+const coreSchema = z.enum(["yellow", "blue", "green", "white"]);
+const conductorFaultJsonSchema = z
+  .discriminatedUnion("kind", [
+    z.strictObject({ kind: z.literal("short"), cores: z.tuple([coreSchema, coreSchema]), atM: z.number().nonnegative() }),
+    z.strictObject({ kind: z.literal("open"), core: coreSchema, atM: z.number().nonnegative() }),
+    z.strictObject({ kind: z.literal("earth"), core: coreSchema, atM: z.number().nonnegative() }),
+    z.strictObject({ kind: z.literal("part-short"), part: z.enum(["contact", "tamper", "eol", "alarm", "shared-a", "shared-b"]), detector: z.number().int().nonnegative().optional() }),
+  ])
+  .meta({ description: "A conductor fault; atM is metres from the panel end (0) to the detector end." });
+const conductorReadingJsonSchema = readingJsonSchema.omit({ fault: true });
+
+export const conductorAnalysisJsonSchema = z
+  .strictObject({
+    cores: z.enum(["two-core", "four-core-loop-back", "four-core-alarm-tamper"]),
+    colours: z.array(coreSchema).meta({ description: "The cable's cores by colour (common practice, no published source)." }),
+    faults: z.array(
+      z.strictObject({
+        fault: conductorFaultJsonSchema,
+        label: z.string(),
+        verdict: z.enum(["detected", "mistaken", "defeat", "not-supervised", "no-effect"]),
+        rows: z.array(conductorReadingJsonSchema).meta({ description: "One reading per detector-state combination." }),
+      }),
+    ),
+  })
+  .meta({ description: "Conductor faults: a short between two cores, one core open, a core to earth, a short across one part." });
+
+export const classAJsonSchema = z
+  .strictObject({
+    everyDeviceReported: z.boolean().meta({ description: "NFPA 72 Class A: each single open is reported and every detector still reports its alarm." }),
+    opens: z.array(
+      z.strictObject({
+        core: coreSchema,
+        atM: z.number().nonnegative().meta({ description: "Metres along the route out and back." }),
+        label: z.string(),
+        rest: conductorReadingJsonSchema,
+        devices: z.array(
+          z.strictObject({
+            detector: z.number().int().nonnegative(),
+            side: z.enum(["out", "return"]).nullable().meta({ description: "The end the panel reaches the detector from; null when neither reports it." }),
+            reading: conductorReadingJsonSchema,
+            reported: z.boolean(),
+          }),
+        ),
+      }),
+    ),
+  })
+  .meta({ description: "Class A loops only: every single open and what is still reported." });
+
 export const loopAnalysisJsonSchema = z
   .strictObject({
     rows: z.array(readingJsonSchema),
@@ -82,5 +130,7 @@ export const loopAnalysisJsonSchema = z
       .meta({ description: "Resistance of the conductors in the loop path over the temperature range (four conductors for a loop-back resistor)." }),
     maxCableByLoopOhmsM: z.number().nonnegative().nullable().optional().meta({ description: "Longest one-way run, metres, within the input type's loop-resistance limit at the hottest temperature." }),
     sharedLost: z.array(z.string()).optional().meta({ description: "Shared inputs only: what is lost against one detector per input." }),
+    conductors: conductorAnalysisJsonSchema.optional(),
+    classA: classAJsonSchema.optional(),
   })
   .meta({ description: "Every state × fault reading of the loop, the verdicts, the findings and the resistors." });

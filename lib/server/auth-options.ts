@@ -9,6 +9,7 @@ import { verifyPassword } from "./password-hash";
 import { endSessions } from "./session-version";
 import type { Role } from "@/lib/auth/permissions";
 import { signInSchema } from "@/lib/auth/sign-in-schema";
+import { safeCallbackUrl } from "@/lib/http/same-origin";
 
 // Shown to the user as is (next-auth passes a thrown message through as the error).
 export const WRONG_CREDENTIALS = "That e-mail and password do not match an account.";
@@ -46,6 +47,11 @@ export function authOptions(): NextAuthOptions {
       }),
     ],
     callbacks: {
+      // Only the app's own origin after sign-in or sign-out ("/\host" and "//host" name another host).
+      async redirect({ url, baseUrl }) {
+        const origin = new URL(baseUrl).origin;
+        return `${origin}${safeCallbackUrl(url, origin)}`;
+      },
       async jwt({ token, user }) {
         if (user) {
           const u = user as unknown as { id: string; organisationId: number; role: Role; sessionVersion: number };

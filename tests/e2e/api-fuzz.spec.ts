@@ -1,38 +1,20 @@
 import { gzipSync } from "node:zlib";
 import { test, expect, type APIRequestContext } from "@playwright/test";
 import fc from "fast-check";
-import type * as mariadb from "mariadb";
 import { permissionTable, type Role } from "@/lib/auth/permissions";
 import { routes, scheduleCsv } from "@/tests/api-registry/routes";
-import { routeKey, type DemoObjects, type RouteEntry } from "@/tests/api-registry/types";
-import { expectErrorBody, findDemoObjects, makeFixtures, openCallers, openDb, removeScratch, send, snapshotTables, type Callers } from "./support-api";
+import { routeKey, type RouteEntry } from "@/tests/api-registry/types";
+import { expectErrorBody, send, snapshotTables, setUpApiSuite } from "./support-api";
 
 // Every JSON API of the registry sent bodies that are wrong by construction (a wrong type, a missing required
 // key, an unknown key, strings and arrays past any limit, negative and non-finite numbers, 10,000 levels of
 // nesting, text that is not JSON, the wrong content type): each answer must be a 4xx with a readable `error`,
-// never a 5xx, and no table may change. Then the upload routes get wrong files behind right names.
+// never a 5xx, and no table may change. Then every string field gets a lone surrogate (422 naming the field),
+// and the upload routes get wrong files behind right names.
 
 const RUNS = 25;
 
-let callers: Callers;
-let conn: mariadb.Connection;
-let demoIds: DemoObjects;
-let fixtures: ReturnType<typeof makeFixtures>;
-
-test.beforeAll(async ({ playwright }) => {
-  conn = await openDb();
-  demoIds = await findDemoObjects(conn);
-  callers = await openCallers(playwright);
-  fixtures = makeFixtures(callers.demo.admin.api, conn, demoIds);
-});
-
-test.afterAll(async () => {
-  if (conn) {
-    await removeScratch(conn, demoIds, fixtures.created);
-    await conn.end();
-  }
-  for (const c of callers?.all ?? []) await c.api.dispose();
-});
+const suite = setUpApiSuite();
 
 // ---------------------------------------------------------------------------------------------
 // Mutations of a valid body, each one invalid whatever the schema's details.
@@ -156,9 +138,9 @@ function isJson(s: string): boolean {
 
 /** A caller of the demo organisation the permission allows (admin first). */
 function callerFor(entry: RouteEntry): APIRequestContext {
-  if (entry.access === "public") return callers.signedOut.api;
+  if (entry.access === "public") return suite.callers.signedOut.api;
   const role = (["admin", "engineer", "designer", "installer"] as Role[]).find((r) => (permissionTable[entry.access as keyof typeof permissionTable] as readonly Role[]).includes(r))!;
-  return callers.demo[role].api;
+  return suite.callers.demo[role].api;
 }
 
 test.describe("JSON APIs refuse malformed bodies with a 4xx and store nothing", () => {
@@ -166,9 +148,9 @@ test.describe("JSON APIs refuse malformed bodies with a 4xx and store nothing", 
     test(routeKey(entry), async ({ playwright }) => {
       test.setTimeout(180_000);
       const api = callerFor(entry);
-      const valid = await entry.build({ caller: { kind: "demo", role: null, email: null, password: null }, demo: demoIds, fixtures });
+      const valid = await entry.build({ caller: { kind: "demo", role: null, email: null, password: null }, demo: suite.demoIds, fixtures: suite.fixtures });
       const body = valid.json as Record<string, unknown>;
-      const before = await snapshotTables(conn);
+      const before = await snapshotTables(suite.conn);
       const seen: string[] = [];
       await fc.assert(
         fc.asyncProperty(mutations(entry, body), async (c) => {
@@ -181,7 +163,7 @@ test.describe("JSON APIs refuse malformed bodies with a 4xx and store nothing", 
         }),
         { numRuns: RUNS },
       );
-      expect(await snapshotTables(conn), "a refused body changed the database").toEqual(before);
+      expect(await snapshotTables(suite.conn), "a refused body changed the database").toEqual(before);
       // the unmutated request is accepted, so the refusals above came from the mutations
       const ok = await send(playwright, api, valid);
       expect(ok.status(), await ok.text()).toBe(entry.success);
@@ -191,9 +173,42 @@ test.describe("JSON APIs refuse malformed bodies with a 4xx and store nothing", 
 });
 
 // ---------------------------------------------------------------------------------------------
+// Text that is not Unicode: half a surrogate pair (legal in JSON text as an escape, storable in no column)
+// in each string of a valid body, and in a key. One place answers it: the route wrapper's JSON reading.
+
+const surrogates = ["\ud800", "\udfff", "tail \ud83d", "\udd25 head"];
+
+test.describe("JSON APIs answer a lone surrogate in any text with a 422 naming the field, and store nothing", () => {
+  for (const entry of routes.filter((e) => e.body === "json")) {
+    test(routeKey(entry), async () => {
+      test.setTimeout(180_000);
+      const api = callerFor(entry);
+      const valid = await entry.build({ caller: { kind: "demo", role: null, email: null, password: null }, demo: suite.demoIds, fixtures: suite.fixtures });
+      const body = valid.json as Record<string, unknown>;
+      const before = await snapshotTables(suite.conn);
+      const cases = nodesOf(body)
+        .filter((n) => n.kind === "string")
+        .map((n, i) => ({ field: dotted(n.path), text: JSON.stringify(setAt(body, n.path, `${n.value as string}${surrogates[i % surrogates.length]}`)) }));
+      const rest = JSON.stringify(body).slice(1);
+      cases.push({ field: "odd\udc00key", text: `{${JSON.stringify("odd\udc00key")}:1${rest === "}" ? "" : ","}${rest}` });
+      for (const c of cases) {
+        expect(c.text, "JSON.stringify escapes a lone surrogate as \\uXXXX").toMatch(/\\ud[89a-f][0-9a-f]{2}/i);
+        const res = await api.fetch(valid.url, { method: valid.method, data: c.text, headers: { "content-type": "application/json" }, maxRedirects: 0 });
+        const text = await res.text();
+        expect(res.status(), `${c.field}: ${text.slice(0, 300)}`).toBe(422);
+        await expectErrorBody(res, c.field);
+        expect(JSON.parse(text).issues?.[0]?.path, text.slice(0, 300)).toBe(c.field);
+      }
+      expect(await snapshotTables(suite.conn), "a refused body changed the database").toEqual(before);
+      console.log(`${routeKey(entry)}: ${cases.length} fields with a lone surrogate refused`);
+    });
+  }
+});
+
+// ---------------------------------------------------------------------------------------------
 // Uploads: wrong content behind a right name, oversize files, archive bombs, path tricks.
 
-const yamlText = () => fixtures.goodCatalogFile().buffer;
+const yamlText = () => suite.fixtures.goodCatalogFile().buffer;
 const png = Buffer.from("89504e470d0a1a0a0000000d49484452000000010000000108060000001f15c4890000000d49444154789c6360000002000154a24f5d0000000049454e44ae426082", "hex");
 const zip = Buffer.concat([Buffer.from("504b0304140000000800", "hex"), Buffer.alloc(200, 0x41)]);
 const gzipBomb = gzipSync(Buffer.alloc(64 * 1024 * 1024, 0x20)); // 64 MiB of spaces in about 64 KiB
@@ -206,8 +221,8 @@ const yamlBomb = ['a: &a ["lol","lol","lol","lol","lol","lol","lol","lol","lol"]
 
 test.describe("uploads refuse wrong files with a 4xx and store nothing", () => {
   test("catalog uploads: wrong content behind .yaml, oversize, archives and an alias bomb, bad names", async () => {
-    const api = callers.demo.engineer.api;
-    const before = await snapshotTables(conn);
+    const api = suite.callers.demo.engineer.api;
+    const before = await snapshotTables(suite.conn);
     const file = (name: string, mimeType: string, buffer: Buffer) => ({ name, mimeType, buffer });
     const cases: { label: string; status: number | "4xx"; multipart?: Record<string, string | ReturnType<typeof file>>; raw?: { body: Buffer | string; contentType: string } }[] = [
       { label: "a PNG image named .yaml", status: 415, multipart: { mode: "store", file: file("catalog.yaml", "application/yaml", png) } },
@@ -243,7 +258,7 @@ test.describe("uploads refuse wrong files with a 4xx and store nothing", () => {
       } else expect(status, `${c.label}: ${(await res.text()).slice(0, 300)}`).toBe(c.status);
       await expectErrorBody(res, c.label);
     }
-    expect(await snapshotTables(conn), "a refused upload changed the database").toEqual(before);
+    expect(await snapshotTables(suite.conn), "a refused upload changed the database").toEqual(before);
 
     // a path in the name of a good file: only the base name is kept (it is shown and offered on download, never used as a path)
     for (const name of ["../../etc/catalog.yaml", "..\\..\\windows\\catalog.yaml", "C:\\fakepath\\catalog.yaml", "/tmp/catalog.yaml"]) {
@@ -251,13 +266,13 @@ test.describe("uploads refuse wrong files with a 4xx and store nothing", () => {
       expect(res.status(), `${name}: ${(await res.text()).slice(0, 200)}`).toBe(200);
       expect((await res.json()).preview.fileName, name).toBe("catalog.yaml");
     }
-    expect(await snapshotTables(conn), "a preview changed the database").toEqual(before);
+    expect(await snapshotTables(suite.conn), "a preview changed the database").toEqual(before);
   });
 
   test("schedule CSV import: binary files, archives, oversize and odd shapes are refused on confirm and never a 5xx on preview", async () => {
-    const api = callers.demo.designer.api;
-    const { siteId } = await fixtures.scratchSite();
-    const before = await snapshotTables(conn);
+    const api = suite.callers.demo.designer.api;
+    const { siteId } = await suite.fixtures.scratchSite();
+    const before = await snapshotTables(suite.conn);
     const asText = (b: Buffer) => b.toString("latin1");
     const header = "label,type,area,room,cable_m,gauge,supervision";
     const csvs: { label: string; csv: string; fileName?: string }[] = [
@@ -289,6 +304,6 @@ test.describe("uploads refuse wrong files with a 4xx and store nothing", () => {
       expect([413, 422], `a ${size}-character file`).toContain(res.status());
       await expectErrorBody(res, `a ${size}-character file`);
     }
-    expect(await snapshotTables(conn), "a refused import changed the database").toEqual(before);
+    expect(await snapshotTables(suite.conn), "a refused import changed the database").toEqual(before);
   });
 });

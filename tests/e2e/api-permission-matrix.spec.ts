@@ -1,34 +1,15 @@
 import { test, expect } from "@playwright/test";
-import type * as mariadb from "mariadb";
 import { can, permissionTable, roles, type Role } from "@/lib/auth/permissions";
 import { routes } from "@/tests/api-registry/routes";
-import { routeKey, type DemoObjects, type RouteEntry } from "@/tests/api-registry/types";
-import { demoMarkers, expectErrorBody, findDemoObjects, findRivalObjects, makeFixtures, openCallers, openDb, removeScratch, send, snapshotTables, type CallerContext, type Callers } from "./support-api";
+import { routeKey, type RouteEntry } from "@/tests/api-registry/types";
+import { demoMarkers, expectErrorBody, findRivalObjects, send, snapshotTables, setUpApiSuite, type CallerContext } from "./support-api";
 
 // Every route method of the registry, called for real: signed out (401, or the public behaviour), as each
 // role of the demo organisation (403 where lib/auth/permissions.ts denies the role, the entry's success
 // status where it allows it), and as a member of another organisation against the demo organisation's
 // objects (404, indistinguishable from a missing object). A refused request must change nothing.
 
-let callers: Callers;
-let conn: mariadb.Connection;
-let demoIds: DemoObjects;
-let fixtures: ReturnType<typeof makeFixtures>;
-
-test.beforeAll(async ({ playwright }) => {
-  conn = await openDb();
-  demoIds = await findDemoObjects(conn);
-  callers = await openCallers(playwright);
-  fixtures = makeFixtures(callers.demo.admin.api, conn, demoIds);
-});
-
-test.afterAll(async () => {
-  if (conn) {
-    await removeScratch(conn, demoIds, fixtures.created);
-    await conn.end();
-  }
-  for (const c of callers?.all ?? []) await c.api.dispose();
-});
+const suite = setUpApiSuite();
 
 /** A role of the rival organisation that the entry's permission allows (so only the organisation differs). */
 const allowedRole = (e: RouteEntry): Role => (e.access === "public" ? "installer" : (permissionTable[e.access] as readonly Role[])[0]);
@@ -44,13 +25,13 @@ function expected(e: RouteEntry, c: CallerContext): number {
 test.describe("permission matrix", () => {
   for (const entry of routes) {
     test(`${routeKey(entry)} (${entry.access}${entry.orgScoped ? ", organisation's object" : ""})`, async ({ playwright }) => {
-      const who = [callers.signedOut, ...roles.map((r) => callers.demo[r]), callers.rival[allowedRole(entry)]];
+      const who = [suite.callers.signedOut, ...roles.map((r) => suite.callers.demo[r]), suite.callers.rival[allowedRole(entry)]];
       for (const caller of who) {
-        const spec = await entry.build({ caller, demo: demoIds, fixtures });
+        const spec = await entry.build({ caller, demo: suite.demoIds, fixtures: suite.fixtures });
         const want = expected(entry, caller);
         const what = `${routeKey(entry)} as ${caller.label} (${spec.method} ${spec.url})`;
         const mutating = spec.method !== "GET" && want >= 400;
-        const before = mutating ? await snapshotTables(conn) : null;
+        const before = mutating ? await snapshotTables(suite.conn) : null;
         const res = await send(playwright, caller.api, spec);
         expect(res.status(), `${what}: ${(await res.text()).slice(0, 300)}`).toBe(want);
         if (want >= 400) {
@@ -58,11 +39,11 @@ test.describe("permission matrix", () => {
           if (want === 401) expect((await res.json()).error, what).toMatch(/sign in/i);
           if (want === 403) expect((await res.json()).error, what).toMatch(new RegExp(`Your role \\(${caller.role}\\) cannot`));
         }
-        if (before) expect(await snapshotTables(conn), `${what} changed the database`).toEqual(before);
+        if (before) expect(await snapshotTables(suite.conn), `${what} changed the database`).toEqual(before);
         // another organisation's answers never carry the demo organisation's data
         if (caller.kind === "rival" && want < 400 && entry.access !== "public") {
           const text = await res.text();
-          const markers = spec.method === "GET" ? [...demoMarkers, (await fixtures.catalogUpload()).addedEntryId] : demoMarkers;
+          const markers = spec.method === "GET" ? [...demoMarkers, (await suite.fixtures.catalogUpload()).addedEntryId] : demoMarkers;
           for (const m of markers) expect(text.includes(m), `${what} shows "${m}"`).toBe(false);
         }
       }
@@ -71,15 +52,15 @@ test.describe("permission matrix", () => {
 });
 
 test("a member of another organisation walks the ids 1..N of sites and layouts and sees only its own", async () => {
-  const rival = await findRivalObjects(conn);
-  const own = callers.rival.designer.api;
+  const rival = await findRivalObjects(suite.conn);
+  const own = suite.callers.rival.designer.api;
   const made = await own.post(`/api/sites/${rival.siteId}/layouts`, { data: { name: "Rival layout", panelId: "panel-large-32" } });
   expect(made.status()).toBe(200);
   expect((await made.json()).layout.id).toBeGreaterThan(0);
 
-  const [{ maxSite }] = await conn.query("SELECT MAX(id) AS maxSite FROM sites");
-  const [{ maxLayout }] = await conn.query("SELECT MAX(id) AS maxLayout FROM layouts");
-  const ids = async (sql: string) => new Set(((await conn.query(sql, [rival.organisationId])) as { id: number }[]).map((r) => r.id));
+  const [{ maxSite }] = await suite.conn.query("SELECT MAX(id) AS maxSite FROM sites");
+  const [{ maxLayout }] = await suite.conn.query("SELECT MAX(id) AS maxLayout FROM layouts");
+  const ids = async (sql: string) => new Set(((await suite.conn.query(sql, [rival.organisationId])) as { id: number }[]).map((r) => r.id));
   const rivalSiteIds = await ids("SELECT id FROM sites WHERE organisation_id = ?");
   const rivalLayoutIds = await ids("SELECT l.id FROM layouts l JOIN sites s ON s.id = l.site_id WHERE s.organisation_id = ?");
   const otherSiteIds = await ids("SELECT id FROM sites WHERE organisation_id <> ?");
@@ -87,7 +68,7 @@ test("a member of another organisation walks the ids 1..N of sites and layouts a
   expect(otherSiteIds.size).toBeGreaterThan(0);
   expect(otherLayoutIds.size).toBeGreaterThan(0);
 
-  const walker = callers.rival.engineer.api;
+  const walker = suite.callers.rival.engineer.api;
   const notFoundBodies = new Map<string, Set<string>>();
   const seen = { own: 0, refused: 0 };
   const check = async (pattern: string, id: number, mine: boolean) => {

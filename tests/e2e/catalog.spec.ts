@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import { test, expect, type Page } from "@playwright/test";
-import { signIn } from "./support";
+import { signedInAs } from "./support";
 
 const fixture = (name: string) => `tests/fixtures/catalog/${name}`;
 
@@ -15,8 +15,9 @@ async function columnNumbers(page: Page, kind: string, header: string): Promise<
 }
 
 test.describe.serial("the catalog", () => {
+  test.use(signedInAs("engineer"));
+
   test("an engineer filters and sorts the tables and opens an input type's band scale", async ({ page }) => {
-    await signIn(page, "engineer");
     await page.goto("/catalog");
     await expect(page.getByRole("heading", { name: "Catalog", exact: true })).toBeVisible();
     await expect(page.getByTestId("life-safety-caution")).toContainText("authority having jurisdiction");
@@ -69,7 +70,6 @@ test.describe.serial("the catalog", () => {
   });
 
   test("an engineer uploads a good file, sees the diff, confirms and finds the entry in the table", async ({ page }) => {
-    await signIn(page, "engineer");
     await page.goto("/catalog");
     await page.getByLabel("Catalog file (.yaml)").setInputFiles(fixture("good-upload.yaml"));
     await page.getByRole("button", { name: "Check file" }).click();
@@ -103,7 +103,6 @@ test.describe.serial("the catalog", () => {
   });
 
   test("a bad file is refused with its line-numbered errors and nothing is stored", async ({ page }) => {
-    await signIn(page, "engineer");
     await page.goto("/catalog");
     await page.getByLabel("Catalog file (.yaml)").setInputFiles(fixture("bad-upload.yaml"));
     await page.getByRole("button", { name: "Check file" }).click();
@@ -125,18 +124,20 @@ test.describe.serial("the catalog", () => {
     expect((await (await page.request.get("/api/catalog/uploads")).json()).uploads).toHaveLength(1);
   });
 
-  test("a designer sees the catalog and the versions but no upload control; the API refuses (403)", async ({ page }) => {
-    await signIn(page, "designer");
-    await page.goto("/catalog");
-    await expect(page.locator('[data-testid="catalog-row"][data-entry-id="custom-beam-outdoor"]')).toBeVisible();
-    await expect(page.getByTestId("upload-versions").locator("tbody tr")).toHaveCount(1);
-    await expect(page.getByTestId("catalog-upload")).toHaveCount(0);
-    await expect(page.getByLabel("Catalog file (.yaml)")).toHaveCount(0);
-    const res = await page.request.post("/api/catalog/uploads", {
-      multipart: { mode: "preview", file: { name: "good-upload.yaml", mimeType: "application/yaml", buffer: readFileSync(fixture("good-upload.yaml")) } },
+  test.describe(() => {
+    test.use(signedInAs("designer"));
+    test("a designer sees the catalog and the versions but no upload control; the API refuses (403)", async ({ page }) => {
+      await page.goto("/catalog");
+      await expect(page.locator('[data-testid="catalog-row"][data-entry-id="custom-beam-outdoor"]')).toBeVisible();
+      await expect(page.getByTestId("upload-versions").locator("tbody tr")).toHaveCount(1);
+      await expect(page.getByTestId("catalog-upload")).toHaveCount(0);
+      await expect(page.getByLabel("Catalog file (.yaml)")).toHaveCount(0);
+      const res = await page.request.post("/api/catalog/uploads", {
+        multipart: { mode: "preview", file: { name: "good-upload.yaml", mimeType: "application/yaml", buffer: readFileSync(fixture("good-upload.yaml")) } },
+      });
+      expect(res.status()).toBe(403);
+      expect((await res.json()).error).toMatch(/cannot upload organisation catalogs/);
+      expect((await page.request.get("/api/catalog")).status()).toBe(200);
     });
-    expect(res.status()).toBe(403);
-    expect((await res.json()).error).toMatch(/cannot upload organisation catalogs/);
-    expect((await page.request.get("/api/catalog")).status()).toBe(200);
   });
 });

@@ -1,6 +1,6 @@
 import { test, expect } from "@playwright/test";
 import { readFileSync } from "node:fs";
-import { signIn } from "./support";
+import { signedInAs } from "./support";
 import { demoSiteName } from "./support-api";
 
 // The zone list CSV as the designer downloads it from the terminal sheet: a detector labelled like a spreadsheet
@@ -9,8 +9,9 @@ import { demoSiteName } from "./support-api";
 
 type SheetJson = { sheet: { boards: { rows: { spare: boolean; detectors?: { id: string; zone: number; label: string }[] }[] }[] } };
 
+test.use(signedInAs("designer"));
+
 test("a detector labelled =1+1 comes out of the zone list CSV as text", async ({ page }) => {
-  await signIn(page, "designer");
   const sites = (await (await page.request.get("/api/sites")).json()) as { sites: { id: number; name: string }[] };
   const site = sites.sites.find((s) => s.name === demoSiteName);
   expect(site, "the demo site").toBeTruthy();

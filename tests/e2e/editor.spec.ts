@@ -1,6 +1,6 @@
 import { test, expect, type Locator, type Page } from "@playwright/test";
 import { fileURLToPath } from "node:url";
-import { signIn } from "./support";
+import { openHome, signedInAs } from "./support";
 
 // The layout editor as a designer uses it: a schedule imported from a CSV file, a layout on a small panel,
 // detectors placed with the mouse, the keyboard and the "place here" fallback, an expansion board added
@@ -89,10 +89,10 @@ async function waitSaved(page: Page) {
 }
 
 test.describe.configure({ mode: "serial" });
+test.use(signedInAs("designer"));
 
 test("a designer imports a schedule, places detectors by mouse and keyboard, outgrows the panel, adds a board, and finds it all after a reload", async ({ page }) => {
   test.setTimeout(180_000);
-  await signIn(page, "designer");
   const siteId = await newSite(page, `Corner shop ${Date.now()}`);
   await importSchedule(page, siteId);
   await createLayout(page, siteId, "Shop option A", /^Compact 8 control panel/);
@@ -175,15 +175,13 @@ test("a designer imports a schedule, places detectors by mouse and keyboard, out
 
 test("a second browser saving the same layout meanwhile: the first gets the conflict and keeps its changes as a copy", async ({ page, browser }) => {
   test.setTimeout(120_000);
-  await signIn(page, "designer");
   const siteId = await newSite(page, `Conflict shop ${Date.now()}`);
   const csv = (await import("node:fs")).readFileSync(fixture("corner-shop.csv"), "utf8");
   expect((await page.request.post(`/api/sites/${siteId}/schedule/import`, { data: { mode: "confirm", csv } })).status()).toBe(200);
   const url = await createLayout(page, siteId, "Shared desk", /^Compact 8 control panel/);
 
-  const other = await browser.newContext();
+  const other = await browser.newContext(signedInAs("designer"));
   const second = await other.newPage();
-  await signIn(second, "designer");
   await second.goto(url);
   await placeWithButton(second, "Counter panic", "panel", 1);
   await waitSaved(second);
@@ -208,7 +206,6 @@ test("a second browser saving the same layout meanwhile: the first gets the conf
 
 test("a designer takes a hardware suggestion as a new layout, changes it, and restores the suggestion from the history", async ({ page }) => {
   test.setTimeout(120_000);
-  await signIn(page, "designer");
   const siteId = await newSite(page, `Suggested shop ${Date.now()}`);
   const csv = (await import("node:fs")).readFileSync(fixture("corner-shop.csv"), "utf8");
   expect((await page.request.post(`/api/sites/${siteId}/schedule/import`, { data: { mode: "confirm", csv } })).status()).toBe(200);
@@ -242,7 +239,6 @@ test("a designer takes a hardware suggestion as a new layout, changes it, and re
 
 test("with the server out of reach the editor says so and retries, and a reload meanwhile loses nothing", async ({ page }) => {
   test.setTimeout(120_000);
-  await signIn(page, "designer");
   const siteId = await newSite(page, `Offline shop ${Date.now()}`);
   const csv = (await import("node:fs")).readFileSync(fixture("corner-shop.csv"), "utf8");
   expect((await page.request.post(`/api/sites/${siteId}/schedule/import`, { data: { mode: "confirm", csv } })).status()).toBe(200);
@@ -271,7 +267,6 @@ test("with the server out of reach the editor says so and retries, and a reload 
 
 test("boards are re-ordered by their handle, with the mouse and with the keyboard", async ({ page }) => {
   test.setTimeout(120_000);
-  await signIn(page, "designer");
   await page.setViewportSize({ width: 1280, height: 1400 }); // both boards in view for the mouse
   const siteId = await newSite(page, `Board order ${Date.now()}`);
   const document = {
@@ -309,31 +304,34 @@ test("boards are re-ordered by their handle, with the mouse and with the keyboar
   expect(await order()).toEqual(["Control panel", "Keypad 1", "Expansion board 1"]);
 });
 
-test("an installer opens a layout read-only, and the API refuses the installer's save with 403", async ({ page }) => {
-  await signIn(page, "installer");
-  await page.getByTestId("site-list").getByText("Marrowbank Community Library").click();
-  await page.getByRole("link", { name: "Layouts", exact: true }).click();
-  await page.getByRole("link", { name: "One detector per input" }).click();
-  await expect(page.getByTestId("read-only")).toContainText("Your role (installer) cannot change layouts");
-  await expect(page.getByTestId("save-state")).toHaveText("Read-only");
-  await expect(page.getByTestId("fire-caution")).toContainText("authority having jurisdiction");
-  await expect(page.getByTestId("boards")).toContainText("Archive door");
-  // no drag, no controls
-  await expect(page.getByRole("button", { name: /^Place / })).toHaveCount(0);
-  await expect(page.getByRole("button", { name: "Add board" })).toHaveCount(0);
-  await expect(page.getByRole("button", { name: /^Take .* off its input$/ })).toHaveCount(0);
-  await expect(page.getByLabel("Standby profile")).toBeDisabled();
-  await expect(page.locator("[aria-roledescription=draggable]:not([aria-disabled=true])")).toHaveCount(0);
-  await page.getByRole("button", { name: "Archive door", exact: true }).focus();
-  await page.keyboard.press("Space");
-  await page.keyboard.press("ArrowDown");
-  await page.keyboard.press("Space");
-  await expect(page.getByTestId("editor-message")).toHaveText("");
+test.describe(() => {
+  test.use(signedInAs("installer"));
+  test("an installer opens a layout read-only, and the API refuses the installer's save with 403", async ({ page }) => {
+    await openHome(page);
+    await page.getByTestId("site-list").getByText("Marrowbank Community Library").click();
+    await page.getByRole("link", { name: "Layouts", exact: true }).click();
+    await page.getByRole("link", { name: "One detector per input" }).click();
+    await expect(page.getByTestId("read-only")).toContainText("Your role (installer) cannot change layouts");
+    await expect(page.getByTestId("save-state")).toHaveText("Read-only");
+    await expect(page.getByTestId("fire-caution")).toContainText("authority having jurisdiction");
+    await expect(page.getByTestId("boards")).toContainText("Archive door");
+    // no drag, no controls
+    await expect(page.getByRole("button", { name: /^Place / })).toHaveCount(0);
+    await expect(page.getByRole("button", { name: "Add board" })).toHaveCount(0);
+    await expect(page.getByRole("button", { name: /^Take .* off its input$/ })).toHaveCount(0);
+    await expect(page.getByLabel("Standby profile")).toBeDisabled();
+    await expect(page.locator("[aria-roledescription=draggable]:not([aria-disabled=true])")).toHaveCount(0);
+    await page.getByRole("button", { name: "Archive door", exact: true }).focus();
+    await page.keyboard.press("Space");
+    await page.keyboard.press("ArrowDown");
+    await page.keyboard.press("Space");
+    await expect(page.getByTestId("editor-message")).toHaveText("");
 
-  const layoutId = Number(new URL(page.url()).pathname.split("/").pop());
-  const current = await (await page.request.get(`/api/layouts/${layoutId}`)).json();
-  const res = await page.request.put(`/api/layouts/${layoutId}`, { data: { version: current.layout.version, document: current.document } });
-  expect(res.status()).toBe(403);
-  expect((await res.json()).error).toContain("Your role (installer) cannot change layouts");
-  await page.screenshot({ path: test.info().outputPath("read-only.png"), fullPage: false });
+    const layoutId = Number(new URL(page.url()).pathname.split("/").pop());
+    const current = await (await page.request.get(`/api/layouts/${layoutId}`)).json();
+    const res = await page.request.put(`/api/layouts/${layoutId}`, { data: { version: current.layout.version, document: current.document } });
+    expect(res.status()).toBe(403);
+    expect((await res.json()).error).toContain("Your role (installer) cannot change layouts");
+    await page.screenshot({ path: test.info().outputPath("read-only.png"), fullPage: false });
+  });
 });

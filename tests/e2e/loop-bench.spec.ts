@@ -1,10 +1,12 @@
 import { test, expect, type Page } from "@playwright/test";
-import { signIn } from "./support";
+import { openHome, signedInAs, signedOut } from "./support";
 
 const shot = (page: Page, name: string) => page.screenshot({ path: `test-results/loop-bench-${name}.png`, fullPage: true });
 
+test.use(signedInAs("installer"));
+
 test("a short at the detector end reads normal with the resistor at the panel, and short with the resistor at the detector", async ({ page }) => {
-  await signIn(page, "installer");
+  await openHome(page);
   await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Loop bench" }).click();
   await expect(page.getByRole("heading", { name: "Loop bench" })).toBeVisible();
 
@@ -33,23 +35,25 @@ test("a short at the detector end reads normal with the resistor at the panel, a
   await expect(page.getByTestId("verdict-short-detector")).toContainText("detected");
 });
 
-test("the bench is keyboard-operable: detector states, a shared input's decode table, resistor values", async ({ page }) => {
-  await signIn(page, "designer");
-  await page.goto("/loop-bench");
-  await page.getByLabel("Input type", { exact: true }).selectOption({ label: "5.6 kΩ input" });
-  await page.getByRole("radio", { name: "shared input", exact: true }).check();
-  await expect(page.getByTestId("decode-table")).toBeVisible();
-  await page.getByTestId("detector-state-0").getByRole("radio", { name: "active", exact: true }).focus();
-  await page.keyboard.press("Space");
-  await expect(page.getByTestId("panel-report")).toHaveText("detector A active");
-  await page.getByTestId("resistor-field-eol").getByRole("textbox").fill("5k1");
-  await expect(page.getByTestId("resistor-field-eol")).toContainText("The input type expects 5.6 kΩ");
-  await page.getByTestId("resistor-field-eol").getByRole("textbox").fill("5k");
-  await expect(page.getByTestId("nearest-preferred").first()).toContainText("Nearest E24: 4.7 kΩ or 5.1 kΩ");
-  await shot(page, "shared");
+test.describe(() => {
+  test.use(signedInAs("designer"));
+  test("the bench is keyboard-operable: detector states, a shared input's decode table, resistor values", async ({ page }) => {
+    await page.goto("/loop-bench");
+    await page.getByLabel("Input type", { exact: true }).selectOption({ label: "5.6 kΩ input" });
+    await page.getByRole("radio", { name: "shared input", exact: true }).check();
+    await expect(page.getByTestId("decode-table")).toBeVisible();
+    await page.getByTestId("detector-state-0").getByRole("radio", { name: "active", exact: true }).focus();
+    await page.keyboard.press("Space");
+    await expect(page.getByTestId("panel-report")).toHaveText("detector A active");
+    await page.getByTestId("resistor-field-eol").getByRole("textbox").fill("5k1");
+    await expect(page.getByTestId("resistor-field-eol")).toContainText("The input type expects 5.6 kΩ");
+    await page.getByTestId("resistor-field-eol").getByRole("textbox").fill("5k");
+    await expect(page.getByTestId("nearest-preferred").first()).toContainText("Nearest E24: 4.7 kΩ or 5.1 kΩ");
+    await shot(page, "shared");
+  });
 });
 
-test("POST /api/loops/analyze: 422 with a readable path for a negative length, 404 for an unknown input type, 401 signed out", async ({ page, request }) => {
+test("POST /api/loops/analyze: 422 with a readable path for a negative length, 404 for an unknown input type, 401 signed out", async ({ page, playwright }) => {
   const body = (lengthM: number, inputType = "input-2k2") => ({
     inputType,
     loop: {
@@ -61,11 +65,11 @@ test("POST /api/loops/analyze: 422 with a readable path for a negative length, 4
     },
   });
 
-  const out = await request.post("/api/loops/analyze", { data: body(30) });
+  const anonymous = await playwright.request.newContext({ storageState: signedOut });
+  const out = await anonymous.post("/api/loops/analyze", { data: body(30) });
   expect(out.status()).toBe(401);
   expect((await out.json()).error).toMatch(/sign in/i);
 
-  await signIn(page, "installer");
   const bad = await page.request.post("/api/loops/analyze", { data: body(-5) });
   expect(bad.status()).toBe(422);
   const err = await bad.json();
@@ -91,9 +95,10 @@ test("POST /api/loops/analyze: 422 with a readable path for a negative length, 4
   const types = await page.request.get("/api/loops/input-types");
   expect((await types.json()).inputTypes.map((t: { id: string }) => t.id)).toContain("input-2k2");
 
-  const doc = await request.get("/api/openapi.json");
+  const doc = await anonymous.get("/api/openapi.json");
   expect(doc.status()).toBe(200);
   const openapi = await doc.json();
   expect(openapi.openapi).toBe("3.1.0");
   expect(openapi.paths["/api/loops/analyze"].post.responses).toHaveProperty("422");
+  await anonymous.dispose();
 });

@@ -1,6 +1,6 @@
 import { test, expect, type Page } from "@playwright/test";
 import { fileURLToPath } from "node:url";
-import { signIn } from "./support";
+import { openHome, signedInAs } from "./support";
 
 // The device schedule page: add and edit with the shared form schema, sort, filter, bulk edit, import, export.
 
@@ -15,9 +15,10 @@ async function newSite(page: Page): Promise<number> {
 const rows = (page: Page) => page.getByTestId("schedule-table").locator("tbody tr");
 const labels = async (page: Page) => (await rows(page).locator("td:nth-child(2)").allTextContents()).map((s) => s.trim());
 
+test.use(signedInAs("designer"));
+
 test("a designer keeps a device schedule: add, edit, import, sort, filter, bulk edit, export, delete", async ({ page }) => {
   test.setTimeout(120_000);
-  await signIn(page, "designer");
   const siteId = await newSite(page);
   await page.goto(`/sites/${siteId}/schedule`);
   await expect(page.getByTestId("schedule-table")).toContainText("The schedule is empty");
@@ -95,17 +96,20 @@ test("a designer keeps a device schedule: add, edit, import, sort, filter, bulk 
   await expect(rows(page)).toHaveCount(9);
 });
 
-test("an installer reads the schedule without controls, and the API refuses a change with 403", async ({ page }) => {
-  await signIn(page, "installer");
-  await page.getByTestId("site-list").getByText("Marrowbank Community Library").click();
-  await page.getByRole("link", { name: "Device schedule" }).click();
-  await expect(rows(page)).toHaveCount(41);
-  await expect(page.getByTestId("fire-caution")).toBeVisible();
-  await expect(page.getByRole("button", { name: "Add detector" })).toHaveCount(0);
-  await expect(page.getByRole("button", { name: "Import CSV" })).toHaveCount(0);
-  await expect(page.getByRole("checkbox")).toHaveCount(0);
-  const siteId = Number(new URL(page.url()).pathname.split("/")[2]);
-  const res = await page.request.post(`/api/sites/${siteId}/schedule`, { data: { label: "X", catalogId: "motion-wall", area: "", room: "", cableM: 5, gauge: { awg: 22 }, supervision: "none" } });
-  expect(res.status()).toBe(403);
-  expect((await res.json()).error).toContain("Your role (installer) cannot edit device schedules");
+test.describe(() => {
+  test.use(signedInAs("installer"));
+  test("an installer reads the schedule without controls, and the API refuses a change with 403", async ({ page }) => {
+    await openHome(page);
+    await page.getByTestId("site-list").getByText("Marrowbank Community Library").click();
+    await page.getByRole("link", { name: "Device schedule" }).click();
+    await expect(rows(page)).toHaveCount(41);
+    await expect(page.getByTestId("fire-caution")).toBeVisible();
+    await expect(page.getByRole("button", { name: "Add detector" })).toHaveCount(0);
+    await expect(page.getByRole("button", { name: "Import CSV" })).toHaveCount(0);
+    await expect(page.getByRole("checkbox")).toHaveCount(0);
+    const siteId = Number(new URL(page.url()).pathname.split("/")[2]);
+    const res = await page.request.post(`/api/sites/${siteId}/schedule`, { data: { label: "X", catalogId: "motion-wall", area: "", room: "", cableM: 5, gauge: { awg: 22 }, supervision: "none" } });
+    expect(res.status()).toBe(403);
+    expect((await res.json()).error).toContain("Your role (installer) cannot edit device schedules");
+  });
 });

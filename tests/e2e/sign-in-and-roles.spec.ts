@@ -1,5 +1,5 @@
 import { test, expect } from "@playwright/test";
-import { demo, signIn, type DemoRole } from "./support";
+import { demo, mailPage, signIn, signedInAs, signedOut, type DemoRole } from "./support";
 
 test("signed-out visitors are sent to the sign-in page, the API answers 401", async ({ page, request }) => {
   await page.goto("/members");
@@ -41,33 +41,35 @@ for (const role of Object.keys(expectations) as DemoRole[]) {
   });
 }
 
-test("an admin invites a member by e-mail; the invitee sets a password from the outbox link and signs in", async ({ page, browser }) => {
-  await signIn(page, "admin");
-  await page.goto("/members");
-  const email = `new.installer.${Date.now()}@quillfen.example`;
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByRole("combobox", { name: "Invite as" }).selectOption("installer");
-  await page.getByRole("button", { name: "Send invitation" }).click();
-  await expect(page.getByRole("status")).toContainText(`Invitation sent to ${email}`);
+test.describe(() => {
+  test.use(signedInAs("admin"));
+  test("an admin invites a member by e-mail; the invitee sets a password from the mailed link and signs in", async ({ page, browser }) => {
+    await page.goto("/members");
+    const email = `new.installer.${Date.now()}@quillfen.example`;
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByRole("combobox", { name: "Invite as" }).selectOption("installer");
+    await page.getByRole("button", { name: "Send invitation" }).click();
+    await expect(page.getByRole("status")).toContainText(`Invitation sent to ${email}`);
 
-  const other = await browser.newContext();
-  const invitee = await other.newPage();
-  await invitee.goto("/dev/outbox");
-  const mail = invitee.getByTestId("outbox").locator("li").filter({ hasText: email }).first();
-  await expect(mail).toBeVisible();
-  await mail.getByRole("link", { name: /\/invite\// }).click();
-  await invitee.getByLabel("Your name").fill("New Installer");
-  await invitee.getByLabel("Password").fill("short");
-  await invitee.getByRole("button", { name: "Set password and join" }).click();
-  await expect(invitee.getByText("Use at least 10 characters")).toBeVisible();
-  await invitee.getByLabel("Password").fill("wire-and-meter-77");
-  await invitee.getByRole("button", { name: "Set password and join" }).click();
-  await invitee.getByRole("link", { name: "Sign in" }).click();
-  await invitee.getByLabel("E-mail").fill(email);
-  await invitee.getByLabel("Password").fill("wire-and-meter-77");
-  await invitee.getByRole("button", { name: "Sign in" }).click();
-  await expect(invitee.getByTestId("whoami")).toContainText("Installer");
-  await other.close();
+    const other = await browser.newContext({ storageState: signedOut });
+    const invitee = await other.newPage();
+    await invitee.goto(mailPage);
+    const mail = invitee.locator("#messages > li").filter({ hasText: email }).first();
+    await expect(mail).toBeVisible();
+    await mail.getByRole("link", { name: /\/invite\// }).click();
+    await invitee.getByLabel("Your name").fill("New Installer");
+    await invitee.getByLabel("Password").fill("short");
+    await invitee.getByRole("button", { name: "Set password and join" }).click();
+    await expect(invitee.getByText("Use at least 10 characters")).toBeVisible();
+    await invitee.getByLabel("Password").fill("wire-and-meter-77");
+    await invitee.getByRole("button", { name: "Set password and join" }).click();
+    await invitee.getByRole("link", { name: "Sign in" }).click();
+    await invitee.getByLabel("E-mail").fill(email);
+    await invitee.getByLabel("Password").fill("wire-and-meter-77");
+    await invitee.getByRole("button", { name: "Sign in" }).click();
+    await expect(invitee.getByTestId("whoami")).toContainText("Installer");
+    await other.close();
+  });
 });
 
 test("responses carry the security headers and the session cookie is httpOnly and SameSite", async ({ page, request }) => {

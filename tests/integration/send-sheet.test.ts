@@ -1,7 +1,3 @@
-import { execFileSync } from "node:child_process";
-import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
 import type { AddressInfo } from "node:net";
 import { simpleParser, type ParsedMail } from "mailparser";
 import { SMTPServer } from "smtp-server";
@@ -13,15 +9,14 @@ import { updateDetector } from "@/lib/server/schedules";
 import { sendSheetToInstaller, terminalSheetPdfCached } from "@/lib/server/send-sheet";
 import { ApiError } from "@/lib/server/errors";
 import { AuditEntry, Site } from "@/models";
+import { readPdf } from "@/tests/support/pdf-text";
 
 // The terminal sheet sent to the site's installer: through a local SMTP server started here, with the PDF attached.
 
 const received: { to: string[]; mail: ParsedMail }[] = [];
 let smtp: SMTPServer;
-let dir: string;
 
 beforeAll(async () => {
-  dir = mkdtempSync(join(tmpdir(), "lw-send-sheet-"));
   smtp = new SMTPServer({
     authOptional: true,
     disabledCommands: ["STARTTLS", "AUTH"],
@@ -40,7 +35,6 @@ beforeAll(async () => {
 
 afterAll(async () => {
   if (smtp) await new Promise<void>((resolve) => smtp.close(() => resolve()));
-  rmSync(dir, { recursive: true, force: true });
 });
 
 const status = (p: Promise<unknown>) => p.then(() => 200, (e) => (e instanceof ApiError ? e.status : 500));
@@ -63,12 +57,9 @@ describe("sending the terminal sheet", () => {
     expect(pdf.contentType).toBe("application/pdf");
     expect(pdf.filename).toBe(sent.fileName);
     expect(pdf.content.subarray(0, 5).toString("latin1")).toBe("%PDF-"); // ISO 32000-1, 7.5.2
-    const file = join(dir, "sent.pdf");
-    writeFileSync(file, pdf.content);
-    const text = execFileSync("/usr/bin/pdftotext", [file, "-"], { encoding: "utf8" });
-    expect(text).toContain("Front door");
-    const info = execFileSync("/usr/bin/pdfinfo", [file], { encoding: "utf8" });
-    expect(info).toMatch(/Page size:\s+612 x 792 pts/); // US Letter, 8.5 × 11 in at 72 pt/in
+    const read = await readPdf(pdf.content);
+    expect(read.text).toContain("Front door");
+    expect({ width: read.pages[0].width, height: read.pages[0].height }).toEqual({ width: 612, height: 792 }); // US Letter, 8.5 × 11 in at 72 pt/in
 
     const audit = await AuditEntry.findOne({ where: { action: "sheet.send", entityId: String(f.layout.id) } });
     expect(audit?.detail).toMatchObject({ to: f.actors.installer.email, revision: 1, approved: false });

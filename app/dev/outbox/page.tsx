@@ -1,12 +1,12 @@
 import { notFound } from "next/navigation";
-import { env } from "@/lib/server/env";
-import { listOutbox } from "@/lib/server/outbox";
+import { listOutbox, outboxAllowed } from "@/lib/server/outbox";
 
 export const dynamic = "force-dynamic";
 
-// Development only: what the local fake SMTP server received. Off unless LOOPWRIGHT_DEV_OUTBOX=1.
+// Development only: what the local fake SMTP server received. A 404 in a production build, without
+// LOOPWRIGHT_DEV_OUTBOX=1, and for anyone but a signed-in admin (see outboxAllowed).
 export default async function OutboxPage() {
-  if (env().LOOPWRIGHT_DEV_OUTBOX !== "1") notFound();
+  if (!(await outboxAllowed())) notFound();
   const mails = await listOutbox();
   return (
     <main className="mx-auto max-w-4xl p-6">

@@ -1,7 +1,3 @@
-import { execFileSync } from "node:child_process";
-import { mkdtempSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { shippedCatalog } from "@/lib/catalog/shipped";
 import { diagnoseLoopOf, diagnoseReading, type MeasuredReading } from "@/lib/commissioning/diagnose";
@@ -10,10 +6,9 @@ import { buildTerminalSheet } from "@/lib/sheet/build-sheet";
 import type { SheetInput } from "@/lib/sheet/sheet-types";
 import { midLayout, midSchedule } from "@/lib/sheet/testing/sample-layouts";
 import { commissioningReportPdf } from "@/lib/server/pdf/commissioning-report-pdf";
+import { readPdf, squash } from "@/tests/support/pdf-text";
 
-// Text extraction by poppler's pdftotext (Debian poppler-utils).
-const dir = mkdtempSync(join(tmpdir(), "lw-report-"));
-const squash = (s: string) => s.replace(/\s+/g, " ");
+// Read back by pdf.js (tests/support/pdf-text.ts), an independent reader of the PDF.
 
 describe("commissioning record PDF", { timeout: 60_000 }, () => {
   it("lists each loop's readings, verdicts and diagnoses, the photos and the caution, on A4 and US Letter", async () => {
@@ -28,13 +23,13 @@ describe("commissioning record PDF", { timeout: 60_000 }, () => {
     const report = commissioningProgress(sheet, readings);
     const meta = { siteName: "Test depot", layoutName: "Option A", revision: 2, generatedAt: "2026-12-01", caution: sheet.caution };
     const photos = [{ boardKey: "panel", input: 1, fileName: "door-eol.jpg", sizeBytes: 204800, takenBy: "Test installer", takenAt: "2026-12-01 10:12" }];
+    // ISO 216 A4 = 595.28 × 841.89 pt; US Letter = 8.5 × 11 in = 612 × 792 pt
     for (const [size, dims] of [
-      ["A4", "595.28 x 841.89"],
-      ["LETTER", "612 x 792"],
+      ["A4", { width: 595.28, height: 841.89 }],
+      ["LETTER", { width: 612, height: 792 }],
     ] as const) {
-      const file = join(dir, `${size}.pdf`);
-      writeFileSync(file, await commissioningReportPdf(report, meta, photos, size));
-      const text = squash(execFileSync("/usr/bin/pdftotext", ["-enc", "UTF-8", file, "-"], { encoding: "utf8" }));
+      const pdf = await readPdf(await commissioningReportPdf(report, meta, photos, size));
+      const text = squash(pdf.text);
       expect(text).toContain("Commissioning record — Test depot — Option A, revision 2");
       expect(text).toContain("0 of 5 loops passed; 1 failed");
       expect(text).toContain("Front door — FAILED");
@@ -43,7 +38,7 @@ describe("commissioning record PDF", { timeout: 60_000 }, () => {
       expect(text).toContain("the resistor is not at the end of the line");
       expect(text).toContain("door-eol.jpg (200 KiB");
       expect(text).toContain("local fire code and the authority having jurisdiction");
-      expect(execFileSync("/usr/bin/pdfinfo", [file], { encoding: "utf8" })).toContain(`Page size:       ${dims} pts`);
+      for (const page of pdf.pages) expect({ width: page.width, height: page.height }).toEqual(dims);
     }
   });
 });

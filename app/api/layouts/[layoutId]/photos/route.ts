@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { z } from "zod";
 import { ApiError } from "@/lib/server/errors";
-import { idParam, route, zodIssues } from "@/lib/server/route";
+import { idParam, readBodyLimited, route, zodIssues } from "@/lib/server/route";
 import { uploadPhoto } from "@/lib/server/commissioning";
 import { photoFieldsSchema } from "@/lib/commissioning/commissioning-schema";
 import { MAX_PHOTO_BYTES } from "@/lib/commissioning/photo-checks";
@@ -14,11 +14,10 @@ const tooLarge = () => new ApiError(413, `The photo is too large: the limit is $
 async function readForm(req: NextRequest): Promise<FormData> {
   const type = req.headers.get("content-type") ?? "";
   if (!/^multipart\/form-data\b/i.test(type)) throw new ApiError(415, "Send the photo as multipart/form-data with a field named file.");
-  if (Number(req.headers.get("content-length") ?? 0) > MAX_FORM_BYTES) throw tooLarge();
-  const bytes = new Uint8Array(await req.arrayBuffer());
-  if (bytes.length > MAX_FORM_BYTES) throw tooLarge();
+  // read as a stream and cut off at the limit: a chunked upload declares no length
+  const bytes = await readBodyLimited(req, MAX_FORM_BYTES, tooLarge);
   try {
-    return await new Response(bytes, { headers: { "content-type": type } }).formData();
+    return await new Response(bytes as BodyInit, { headers: { "content-type": type } }).formData();
   } catch {
     throw new ApiError(400, "The upload form could not be read (malformed multipart/form-data).");
   }

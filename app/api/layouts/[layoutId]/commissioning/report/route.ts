@@ -1,3 +1,4 @@
+import { attachmentHeader } from "@/lib/http/content-disposition";
 import { z } from "zod";
 import { ApiError } from "@/lib/server/errors";
 import { idParam, route } from "@/lib/server/route";
@@ -15,5 +16,5 @@ export const GET = route({ permission: "sheet:read", params, query }, async ({ a
   if (progress.totals.loops === 0 || left > 0)
     throw new ApiError(409, `The commissioning record is ready when every loop has passed: ${left} of ${progress.totals.loops} loop${progress.totals.loops === 1 ? "" : "s"} still to pass.`, undefined, { totals: progress.totals });
   const { pdf, fileName } = await commissioningReportPdfFor(actor, params.layoutId, query.size);
-  return new Response(new Uint8Array(pdf), { headers: { "content-type": "application/pdf", "content-disposition": `attachment; filename="${fileName}"`, "cache-control": "private, no-store" } });
+  return new Response(new Uint8Array(pdf), { headers: { "content-type": "application/pdf", "content-disposition": attachmentHeader(fileName), "cache-control": "private, no-store" } });
 });

@@ -1,3 +1,4 @@
+import { attachmentHeader } from "@/lib/http/content-disposition";
 import { z } from "zod";
 import { idParam, route } from "@/lib/server/route";
 import { terminalSheetPdfCached } from "@/lib/server/send-sheet";
@@ -9,5 +10,5 @@ const query = z.strictObject({ size: paperSizeQuery, revision: z.coerce.number()
 // GET /api/layouts/:layoutId/sheet/pdf — the terminal sheet as a PDF (?size=A4 or LETTER), the approved revision unless ?revision= says otherwise
 export const GET = route({ permission: "sheet:read", params, query }, async ({ actor, params, query }) => {
   const { pdf, fileName } = await terminalSheetPdfCached(actor, params.layoutId, { size: query.size, revision: query.revision });
-  return new Response(new Uint8Array(pdf), { headers: { "content-type": "application/pdf", "content-disposition": `attachment; filename="${fileName}"`, "cache-control": "private, no-store" } });
+  return new Response(new Uint8Array(pdf), { headers: { "content-type": "application/pdf", "content-disposition": attachmentHeader(fileName), "cache-control": "private, no-store" } });
 });

@@ -1,3 +1,4 @@
+import { attachmentHeader } from "@/lib/http/content-disposition";
 import { z } from "zod";
 import { notFound } from "@/lib/server/errors";
 import { idParam, route } from "@/lib/server/route";
@@ -11,5 +12,5 @@ export const GET = route({ permission: "sheet:read", params, query }, async ({ a
   const { layout } = await findLayoutForReview(actor, query.layoutId);
   if (layout.siteId !== params.siteId) throw notFound("That layout");
   const { csv, fileName } = await bomCsvFor(actor, query.layoutId, { revision: query.revision });
-  return new Response(csv, { headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="${fileName}"` } });
+  return new Response(csv, { headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": attachmentHeader(fileName) } });
 });

@@ -1,14 +1,18 @@
 import { NextResponse } from "next/server";
-import { env } from "@/lib/server/env";
-import { outboxAttachment } from "@/lib/server/outbox";
+import { attachmentHeader } from "@/lib/http/content-disposition";
+import { outboxAllowed, outboxAttachment } from "@/lib/server/outbox";
 
-// GET /dev/outbox/:mailId/attachments/:index — development only: download an attachment the fake SMTP server received
+export const dynamic = "force-dynamic";
+
+const notFound = () => NextResponse.json({ error: "Nothing was found at that address." }, { status: 404, headers: { "cache-control": "private, no-store" } });
+
+// GET /dev/outbox/:mailId/attachments/:index — development only (see outboxAllowed): an attachment the fake SMTP server received
 export async function GET(_req: Request, { params }: { params: Promise<{ mailId: string; index: string }> }) {
-  if (env().LOOPWRIGHT_DEV_OUTBOX !== "1") return NextResponse.json({ error: "Not found." }, { status: 404 });
+  if (!(await outboxAllowed())) return notFound();
   const { mailId, index } = await params;
   const a = await outboxAttachment(Number(mailId), Number(index));
-  if (!a) return NextResponse.json({ error: "Not found." }, { status: 404 });
+  if (!a) return notFound();
   return new NextResponse(new Uint8Array(Buffer.from(a.contentBase64, "base64")), {
-    headers: { "content-type": a.contentType, "content-disposition": `attachment; filename="${a.filename.replace(/[^\w.-]/g, "_")}"` },
+    headers: { "content-type": a.contentType, "content-disposition": attachmentHeader(a.filename), "x-content-type-options": "nosniff", "cache-control": "private, no-store" },
   });
 }

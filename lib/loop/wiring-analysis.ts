@@ -1,0 +1,32 @@
+// The conductor-level and Class A parts of a loop analysis, attached when the loop asks for them.
+import type { InputType } from "@/lib/catalog/schema";
+import type { FindingTarget } from "@/lib/findings";
+import { analyzeClassA, classAProblems } from "./class-a";
+import { analyzeConductors, conductorFindings, conductorProblems, type ConductorProblem } from "./conductors";
+import type { LoopModel } from "./loop-model";
+import type { LoopAnalysis, LoopSpec } from "./types";
+
+export function wiringProblems(loop: LoopSpec): ConductorProblem[] {
+  return [...conductorProblems(loop), ...classAProblems(loop)];
+}
+
+export function attachWiring(analysis: LoopAnalysis, loop: LoopSpec, inputType: InputType, m: LoopModel, target: FindingTarget): void {
+  if (loop.conductorFaults !== undefined) {
+    analysis.conductors = analyzeConductors(loop, inputType, m);
+    analysis.findings.push(...conductorFindings(analysis.conductors, loop.detectors.some((d) => d.lifeSafety) || inputType.lifeSafety, target));
+  }
+  if (loop.pathway === "class-a") {
+    analysis.classA = analyzeClassA(loop, inputType, m);
+    if (!analysis.classA.everyDeviceReported) {
+      const missed = analysis.classA.opens.find((o) => o.rest.reports.includes("normal") || o.devices.some((d) => !d.reported))!;
+      const dev = missed.devices.find((d) => !d.reported);
+      analysis.findings.push({
+        code: "class-a-device-lost",
+        severity: "error",
+        message: dev ? `After ${missed.label}, ${loop.detectors[dev.detector].label} active reads ${dev.reading.reports.join(" or ")} from either end, not active` : `${missed.rest.label} reads as normal`,
+        why: "A Class A loop must keep reporting every device after a single open, fed from both ends; this one loses a device, so it is not Class A.",
+        target,
+      });
+    }
+  }
+}
