@@ -1,8 +1,5 @@
-import { execFileSync } from "node:child_process";
-import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
-import { afterAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
+import { readPdf } from "../support/pdf-text";
 import { makeOrganisation, testDb } from "./support";
 import { createSite } from "@/lib/server/sites";
 import { listLayouts, loadLayoutForEditor } from "@/lib/server/layouts";
@@ -20,13 +17,9 @@ import { shippedCatalog } from "@/lib/catalog/shipped";
 process.env.NEXTAUTH_URL ??= "http://localhost:3000";
 process.env.NEXTAUTH_SECRET ??= "integration-test-secret-of-at-least-32-chars";
 
-const dir = mkdtempSync(join(tmpdir(), "lw-figures-"));
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
-// Text extraction by poppler's pdftotext (Debian poppler-utils), an independent reader of the PDF.
-function pdfText(buf: Buffer, name: string): string {
-  const file = join(dir, `${name}.pdf`);
-  writeFileSync(file, buf);
-  return execFileSync("/usr/bin/pdftotext", ["-layout", "-enc", "UTF-8", file, "-"], { encoding: "utf8" }).replace(/\s+/g, " ");
+// Text extraction by pdf.js, an independent reader of the PDF (not the library that wrote it).
+async function pdfText(buf: Buffer): Promise<string> {
+  return (await readPdf(buf)).text.replace(/\s+/g, " ");
 }
 
 describe("figures agree across the editor, the battery note and the PDF", { timeout: 180_000 }, () => {
@@ -41,7 +34,7 @@ describe("figures agree across the editor, the battery note and the PDF", { time
       const data = await loadLayoutForEditor(actors.designer, meta.id);
       const result = createSolver(data.schedule, data.catalog).solve(data.document);
       const { pdf } = await terminalSheetPdfFor(actors.designer, meta.id);
-      const text = pdfText(pdf, `layout-${meta.id}`);
+      const text = await pdfText(pdf);
       expect(result.supplies.length).toBeGreaterThan(0);
       for (const s of result.supplies) {
         const lines = Object.fromEntries(supplyLines(s).map((l) => [l.key, l]));
