@@ -1,10 +1,20 @@
-/** The caution every fire / life-safety screen carries. */
+import { Caution } from "@/components/ui/caution";
+
+/** The caution every fire / life-safety screen carries, once per page: a compact line that opens to the full text. */
 export function LifeSafetyCaution({ className = "" }: { className?: string }) {
   return (
-    <p role="note" data-testid="life-safety-caution" className={`rounded-md border border-warn bg-warn-soft px-3 py-2 text-sm text-ink ${className}`}>
-      <strong className="text-warn">Life safety.</strong> Fire detection design must follow the local fire code and the authority having jurisdiction, and be installed and certified
-      by licensed people. Standby battery sizing for a fire system follows the same code. Loopwright&apos;s figures are an aid, not an approval.
-    </p>
+    <Caution
+      testId="life-safety-caution"
+      className={className}
+      summary={
+        <>
+          <strong className="text-warn">Life safety:</strong> an aid, not an approval; the local fire code and the authority having jurisdiction decide.
+        </>
+      }
+    >
+      Fire detection design must follow the local fire code and the authority having jurisdiction, and be installed and certified by licensed people. Standby battery sizing for a
+      fire system follows the same code. Loopwright&apos;s figures are an aid, not an approval.
+    </Caution>
   );
 }
 

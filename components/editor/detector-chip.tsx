@@ -5,15 +5,17 @@ import type { KeyboardEvent } from "react";
 import { useEditor } from "@/components/editor/editor-context";
 import { detectorDragId } from "@/components/editor/editor-model";
 import { FindingMarker } from "@/components/editor/finding-marker";
+import { voltsText } from "@/lib/solver/supply-lines";
 import { isLifeSafety } from "@/lib/catalog/life-safety";
 import { unassign } from "@/lib/layout/operations";
 
 /** What a chip shows; also drawn in the drag overlay. */
 export function ChipFace({ detectorId }: { detectorId: string }) {
-  const { detectorsById, ix, zones } = useEditor();
+  const { detectorsById, ix, zones, result } = useEditor();
   const d = detectorsById.get(detectorId);
   const c = d ? ix.detectors.get(d.catalogId) : undefined;
   const zone = zones.get(detectorId);
+  const v = result.detectors.find((x) => x.detectorId === detectorId);
   return (
     <span className="flex min-w-0 flex-col text-left">
       <span className="flex items-start gap-1 font-medium leading-tight">
@@ -28,6 +30,11 @@ export function ChipFace({ detectorId }: { detectorId: string }) {
       <span className="truncate text-[11px] text-slate-500">
         {c?.name ?? d?.catalogId} · {d ? `${d.cableM} m` : ""}
       </span>
+      {v ? (
+        <span className={`text-[11px] ${v.ok ? "text-slate-500" : "font-semibold text-fault"}`} data-testid={`volts-${detectorId}`}>
+          {voltsText(v)}
+        </span>
+      ) : null}
     </span>
   );
 }

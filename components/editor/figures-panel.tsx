@@ -2,23 +2,13 @@
 
 import { useEditor } from "@/components/editor/editor-context";
 import { FindingMarker } from "@/components/editor/finding-marker";
-
-const mA = (v: number) => `${Math.round(v * 10) / 10} mA`;
-const ah = (v: number) => `${Math.round(v * 100) / 100} Ah`;
-
-function Bar({ value, max, label, warnNearFull = true }: { value: number; max: number; label: string; warnNearFull?: boolean }) {
-  const share = max > 0 ? Math.min(1, value / max) : value > 0 ? 1 : 0;
-  const over = value > max;
-  return (
-    <span className="mt-0.5 block h-1.5 w-full overflow-hidden rounded bg-slate-100" role="img" aria-label={label}>
-      <span className={`block h-full ${over ? "bg-fault" : warnNearFull && share > 0.85 ? "bg-warn" : "bg-signal"}`} style={{ width: `${share * 100}%` }} />
-    </span>
-  );
-}
+import { Bar, SupplyFiguresItem } from "@/components/editor/supply-figures";
+import { CHECK_EDITION, CUSTOM_PROFILE_ID } from "@/lib/solver/standby-profiles";
+import { voltsText } from "@/lib/solver/supply-lines";
 
 /** Capacity, bus, power and supervision figures of the live solve. */
 export function FiguresPanel() {
-  const { result, findingsAt, highlighted } = useEditor();
+  const { result, findingsAt, highlighted, detectorsById } = useEditor();
   const t = result.totals;
   return (
     <section id="layout-figures" aria-labelledby="figures-heading" data-testid="figures" className={`rounded-lg border border-line bg-white p-3 text-xs ${highlighted === "layout-figures" ? "ring-4 ring-warn" : ""}`}>
@@ -77,41 +67,27 @@ export function FiguresPanel() {
         <p className="text-slate-600">
           {result.battery.standbyH} h standby then {result.battery.alarmMin} min alarm, × {result.battery.safetyFactor.toFixed(2)}
           {result.battery.source ? ` (${result.battery.source})` : ""}
+          {result.battery.profileId !== CUSTOM_PROFILE_ID ? `. ${CHECK_EDITION}` : ""}
         </p>
       ) : null}
       <ul className="mt-1 flex flex-col gap-2">
-        {result.supplies.map((s) => {
-          const domId = `supply-${s.supplyKey}`;
-          return (
-            <li key={s.supplyKey} id={domId} data-testid={domId} className={highlighted === domId ? "rounded ring-4 ring-warn" : ""}>
-              <span className="flex items-center gap-1 font-medium">
-                {s.name} <FindingMarker domId={domId} findings={findingsAt.get(domId)} />
-              </span>
-              <span className="flex justify-between">
-                <span>At rest</span>
-                <span>
-                  {mA(s.loadRestMa)} of {mA(s.ratingMa)}
-                </span>
-              </span>
-              <Bar value={s.loadRestMa} max={s.ratingMa} label={`${s.name}: ${mA(s.loadRestMa)} at rest of ${mA(s.ratingMa)}`} />
-              <span className="flex justify-between">
-                <span>In alarm</span>
-                <span>
-                  {mA(s.loadAlarmMa)} of {mA(s.ratingMa)}
-                </span>
-              </span>
-              <Bar value={s.loadAlarmMa} max={s.ratingMa} label={`${s.name}: ${mA(s.loadAlarmMa)} in alarm of ${mA(s.ratingMa)}`} />
-              <span className="flex justify-between">
-                <span>Battery needed</span>
-                <span className={s.batteryNeededAh > s.maxBatteryAh ? "font-semibold text-fault" : ""}>
-                  {ah(s.batteryNeededAh)} of {ah(s.maxBatteryAh)} max
-                </span>
-              </span>
-              <Bar value={s.batteryNeededAh} max={s.maxBatteryAh} label={`${s.name}: battery ${ah(s.batteryNeededAh)} needed of ${ah(s.maxBatteryAh)}`} />
-            </li>
-          );
-        })}
+        {result.supplies.map((s) => (
+          <SupplyFiguresItem key={s.supplyKey} s={s} findings={findingsAt.get(`supply-${s.supplyKey}`)} highlighted={highlighted === `supply-${s.supplyKey}`} />
+        ))}
       </ul>
+      {result.detectors.length ? (
+        <details className="mt-3" data-testid="figure-voltages">
+          <summary className="cursor-pointer font-semibold">Voltage at powered detectors ({result.detectors.length})</summary>
+          <ul className="mt-1 flex flex-col gap-0.5">
+            {result.detectors.map((v) => (
+              <li key={v.detectorId} className={`flex justify-between gap-2 ${v.ok ? "" : "font-semibold text-fault"}`}>
+                <span className="truncate">{detectorsById.get(v.detectorId)?.label ?? "Unknown detector"}</span>
+                <span className="shrink-0">{voltsText(v)}</span>
+              </li>
+            ))}
+          </ul>
+        </details>
+      ) : null}
     </section>
   );
 }

@@ -1,5 +1,6 @@
 "use client";
 
+import { Caution } from "@/components/ui/caution";
 import type { ReactNode } from "react";
 import { formatOhms, LIFE_SAFETY_CAUTION } from "@/lib/loop";
 import { LoopSchematic } from "@/components/loop-schematic/loop-schematic";
@@ -28,12 +29,9 @@ export function BenchResults({ bench }: { bench: Bench }) {
   return (
     <div className="grid min-w-0 content-start gap-4">
       {bench.lifeSafety ? (
-        <div role="note" className="rounded-lg border border-warn bg-warn-soft p-3 text-sm" data-testid="life-safety-caution">
-          <p className="font-semibold text-warn">Life-safety devices</p>
-          <p className="mt-1">
-            {LIFE_SAFETY_CAUTION} Installation and certification are for licensed people.
-          </p>
-        </div>
+        <Caution testId="life-safety-caution" summary={<><strong className="text-warn">Life-safety devices:</strong> an aid, not an approval; the local fire code and the authority having jurisdiction decide.</>}>
+          {LIFE_SAFETY_CAUTION} Installation and certification are for licensed people.
+        </Caution>
       ) : null}
 
       <section className="overflow-x-auto rounded-lg border border-line bg-white p-3 shadow-sm">

@@ -1,5 +1,6 @@
-// The engine's findings, worst first, each with its plain explanation.
-import { severityRank, type Finding } from "@/lib/findings";
+// The engine's findings, worst first and what can be acted on before information, each with its plain explanation.
+import type { Finding } from "@/lib/findings";
+import { orderFindings } from "@/lib/findings-grouping";
 
 const SEVERITY = {
   error: { word: "error", cls: "bg-fault text-white" },
@@ -9,7 +10,7 @@ const SEVERITY = {
 
 export function FindingsList({ findings }: { findings: readonly Finding[] }) {
   if (findings.length === 0) return <p className="text-sm text-slate-600">No findings: this loop is supervised as intended.</p>;
-  const sorted = [...findings].sort((a, b) => severityRank[a.severity] - severityRank[b.severity]);
+  const sorted = orderFindings(findings);
   return (
     <ul className="grid gap-2" data-testid="findings">
       {sorted.map((f, i) => (

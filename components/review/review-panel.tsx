@@ -1,5 +1,6 @@
 "use client";
 
+import { Caution } from "@/components/ui/caution";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -177,10 +178,10 @@ export function ReviewPanel({ initial, summary, boards, canComment, lifeSafety }
           </Card>
         ) : null}
         {lifeSafety ? (
-          <p role="note" data-testid="life-safety-caution" className="rounded-md border border-warn bg-warn-soft px-3 py-2 text-sm">
-            <strong className="text-warn">Life safety.</strong> This layout has smoke, heat or other life-safety devices. Their design must follow the local fire code and the authority
-            having jurisdiction, and be installed and certified by licensed people. Approval here is a design review step: Loopwright&apos;s figures are an aid, not an approval.
-          </p>
+          <Caution testId="life-safety-caution" summary={<><strong className="text-warn">Life safety:</strong> an aid, not an approval; the local fire code and the authority having jurisdiction decide.</>}>
+            This layout has smoke, heat or other life-safety devices. Their design must follow the local fire code and the authority having jurisdiction, and be installed and
+            certified by licensed people. Approval here is a design review step: Loopwright&apos;s figures are an aid, not an approval.
+          </Caution>
         ) : null}
       </div>
 

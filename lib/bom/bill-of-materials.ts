@@ -4,12 +4,13 @@ import { PANEL_KEY, type LayoutDocument } from "@/lib/layout/schema";
 import { formatOhms } from "@/lib/resistors/format-ohms";
 import type { Schedule } from "@/lib/schedule/schema";
 import { solveLayout, type SolveResult } from "@/lib/solver";
+import { STANDARD_BATTERY_AH } from "@/lib/solver/battery";
 import { isLifeSafety } from "@/lib/solver/resolve";
 
 // The bill of materials of a layout: hardware, detectors, resistors and standby batteries, priced from the catalog.
 
-/** Sealed lead-acid standby battery sizes the trade stocks, Ah (common practice, no published source). */
-export const COMMON_BATTERY_AH = [7, 12, 17, 18] as const;
+/** Sealed lead-acid standby battery sizes the trade stocks, Ah: the solver's list, so the bill and the battery note agree. */
+export const COMMON_BATTERY_AH = STANDARD_BATTERY_AH;
 
 export type BomKind = "panel" | "expansion" | "keypad" | "supply" | "detector" | "resistor" | "battery";
 

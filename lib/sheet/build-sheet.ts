@@ -164,5 +164,6 @@ export function buildTerminalSheet(layout: LayoutDocument, schedule: Schedule, c
     measuringNote: MEASURING_NOTE,
     unplaced,
     problems,
+    supplies: result.supplies,
   };
 }

@@ -1,3 +1,4 @@
+import type { SupplyFigures } from "@/lib/solver/types";
 import type { ContactType, DetectorCategory, Report, WiringScheme } from "@/lib/catalog/schema";
 import type { BoardKind } from "@/lib/layout/schema";
 import type { DetectorState, Fault, Placement, ResistorUse } from "@/lib/loop/types";
@@ -140,4 +141,6 @@ export interface TerminalSheet {
   unplaced: { id: string; label: string }[];
   /** Layout-wide errors (e.g. an unknown panel) that leave the sheet incomplete. */
   problems: string[];
+  /** Each supply's figures from the same solve as the screens: loads, where the current goes, the battery to fit. */
+  supplies: SupplyFigures[];
 }

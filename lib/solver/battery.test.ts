@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { batteryAh } from "@/lib/solver/battery";
+import { batteryAh, batteryPickText, pickBattery } from "@/lib/solver/battery";
+import { fmtUp } from "@/lib/solver/format";
 import { resolveStandby, safetyFactors, standbyProfile, standbyProfiles } from "@/lib/solver/standby-profiles";
 
 describe("batteryAh", () => {
@@ -37,26 +38,72 @@ describe("batteryAh", () => {
 describe("standby profiles", () => {
   it("carry the NFPA 72 figures with their source", () => {
     // NFPA 72, secondary power: 24 h standby then 5 min alarm (15 min for voice evacuation)
-    expect(standbyProfile("nfpa72-fire")).toMatchObject({ standbyH: 24, alarmMin: 5, source: "NFPA 72 (secondary power supply)", lifeSafety: true, defaultSafetyFactor: 1.25 });
-    expect(standbyProfile("nfpa72-voice")).toMatchObject({ standbyH: 24, alarmMin: 15, source: "NFPA 72 (secondary power supply)", lifeSafety: true });
+    expect(standbyProfile("nfpa72-fire")).toMatchObject({ standbyH: 24, alarmMin: 5, source: expect.stringMatching(/^NFPA 72, chapter 10, secondary power supply/), lifeSafety: true, defaultSafetyFactor: 1.25 });
+    expect(standbyProfile("nfpa72-voice")).toMatchObject({ standbyH: 24, alarmMin: 15, source: expect.stringMatching(/^NFPA 72, chapter 10/), lifeSafety: true });
   });
-  it("mark the intruder hours as from memory", () => {
-    // EN 50131-6 style: 12 h for grades 1–2, 30 h and 60 h for higher grades (from memory)
+  it("name EN 50131-6 for the intruder hours", () => {
+    // EN 50131-6: 12 h for grades 1–2, 30 h and 60 h for grades 3–4 (from memory)
     expect(["intruder-grade-2", "intruder-grade-3-30h", "intruder-grade-3-60h"].map((id) => standbyProfile(id)?.standbyH)).toEqual([12, 30, 60]);
     for (const id of ["intruder-grade-2", "intruder-grade-3-30h", "intruder-grade-3-60h"]) {
-      expect(standbyProfile(id)?.label).toMatch(/from memory/);
+      expect(standbyProfile(id)?.label).toMatch(/EN 50131-6/);
+      expect(standbyProfile(id)?.source).toMatch(/^EN 50131-6/);
       expect(standbyProfile(id)?.defaultSafetyFactor).toBe(1.2);
     }
   });
-  it("say which safety factor is which, and that neither has a published source", () => {
+  it("send the reader to their authority's edition, and keep code-only provenance notes off the screen", () => {
+    // what a profile or factor shows on screen: its label, source and note
+    for (const p of standbyProfiles.filter((x) => x.id !== "custom")) expect(p.note).toContain("Check against the edition your authority uses.");
+    for (const f of safetyFactors) expect(f.source).toContain("Check against the edition your authority uses.");
+    const screen = [...standbyProfiles.flatMap((p) => [p.label, p.source, p.note]), ...safetyFactors.flatMap((f) => [f.label, f.source])].join("\n");
+    expect(screen).not.toMatch(/from memory|no published source|style,/i);
+  });
+  it("say which safety factor is which, and that no clause of a standard sets either", () => {
     expect(safetyFactors.map((s) => s.value)).toEqual([1.25, 1.2]);
     expect(safetyFactors[0].label).toMatch(/fire/);
     expect(safetyFactors[1].label).toMatch(/intruder/);
-    for (const s of safetyFactors) expect(s.source).toBe("common practice, no published source");
+    // both are common practice, no published source: the screen says "trade practice, not a clause of a standard"
+    for (const s of safetyFactors) expect(s.source).toMatch(/trade practice, not a clause of a standard/);
   });
   it("use a custom profile's own figures", () => {
     expect(resolveStandby({ standbyProfileId: "custom", customStandbyH: 72, customAlarmMin: 30 })).toMatchObject({ standbyH: 72, alarmMin: 30 });
     expect(resolveStandby({ standbyProfileId: "nfpa72-fire", customStandbyH: 72 })).toMatchObject({ standbyH: 24, alarmMin: 5 });
     expect(new Set(standbyProfiles.map((p) => p.id)).size).toBe(standbyProfiles.length);
+  });
+});
+
+describe("rounding up and standard batteries", () => {
+  it("rounds \"at least\" figures up, never down", () => {
+    expect(fmtUp(13.64)).toBe("13.7");
+    expect(fmtUp(13.67)).toBe("13.7");
+    expect(fmtUp(13.7)).toBe("13.7"); // no rounding up of an exact figure
+    expect(fmtUp(4.224)).toBe("4.23");
+    expect(fmtUp(12)).toBe("12");
+    fc.assert(fc.property(fc.double({ min: 0.01, max: 1000, noNaN: true }), (x) => {
+        expect(Number(fmtUp(x))).toBeGreaterThanOrEqual(x - 1e-9);
+      }),
+    );
+  });
+  it("picks the fewest standard batteries that hold the need within the charger", () => {
+    // standard 12 V sizes 7, 12, 17, 18 Ah (common practice, no published source)
+    expect(pickBattery(5.2, 18, 13.8)).toMatchObject({ sizeAh: 7, count: 1, totalAh: 7 });
+    expect(pickBattery(13.64, 18, 13.8)).toMatchObject({ sizeAh: 17, count: 1 });
+    expect(pickBattery(20, 40, 13.8)).toMatchObject({ sizeAh: 12, count: 2, parallel: 2, totalAh: 24 });
+    expect(pickBattery(20, 18, 13.8)).toBeNull();
+    expect(pickBattery(9, 7, 13.8)).toBeNull();
+    expect(pickBattery(10, 18, 27.6)).toMatchObject({ sizeAh: 12, count: 2, series: 2, nominalVolts: 24 });
+    fc.assert(
+      fc.property(fc.double({ min: 0.1, max: 60, noNaN: true }), fc.constantFrom(7, 17, 18, 26, 40, 65), (need, max) => {
+        const p = pickBattery(need, max, 13.8);
+        if (p) {
+          expect(p.totalAh).toBeGreaterThanOrEqual(need - 1e-9);
+          expect(p.totalAh).toBeLessThanOrEqual(max);
+        }
+      }),
+    );
+  });
+  it("says the pick in words", () => {
+    expect(batteryPickText(pickBattery(13.64, 18, 13.8)!)).toBe("one 12 V 17 Ah battery");
+    expect(batteryPickText(pickBattery(20, 40, 13.8)!)).toBe("two 12 V 12 Ah batteries, in parallel (24 Ah)");
+    expect(batteryPickText(pickBattery(10, 18, 27.6)!)).toBe("two 12 V 12 Ah batteries, 2 in series for 24 V");
   });
 });

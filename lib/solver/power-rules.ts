@@ -1,12 +1,13 @@
 import type { Finding } from "@/lib/findings";
 import { PANEL_KEY, type LayoutPower } from "@/lib/layout/schema";
 import { conductorOhms } from "@/lib/loop";
-import { batteryAh } from "@/lib/solver/battery";
-import { fmt } from "@/lib/solver/format";
+import { batteryAh, batteryPickText, pickBattery, STANDARD_BATTERY_AH } from "@/lib/solver/battery";
+import { fmt, fmtUp } from "@/lib/solver/format";
+import { attachBreakdown } from "@/lib/solver/supply-breakdown";
 import type { Detector } from "@/lib/catalog/schema";
 import type { InputOutcome } from "@/lib/solver/loop-rules";
 import type { PlacedDetector, Resolved, ResolvedBoard } from "@/lib/solver/resolve";
-import { resolveStandby } from "@/lib/solver/standby-profiles";
+import { CHECK_EDITION, resolveStandby } from "@/lib/solver/standby-profiles";
 import type { DetectorVoltage, SolveResult, SupplyFigures } from "@/lib/solver/types";
 
 // Current from each supply against its rating, standby battery, and the voltage left at each powered detector.
@@ -71,14 +72,14 @@ export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutP
     supplies.push(s);
     bySupply.set(s.supplyKey, s);
   };
-  add({ supplyKey: PANEL_KEY, name: "Control panel auxiliary output", kind: "panel", volts: panel.supplyVolts, ratingMa: panel.auxOutputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: panel.ownStandbyMa, ownAlarmMa: panel.ownAlarmMa, batteryNeededAh: 0, maxBatteryAh: panel.maxBatteryAh, powers: [] });
+  add({ supplyKey: PANEL_KEY, name: "Control panel auxiliary output", kind: "panel", volts: panel.supplyVolts, ratingMa: panel.auxOutputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: panel.ownStandbyMa, ownAlarmMa: panel.ownAlarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: panel.maxBatteryAh, powers: [] });
   for (const b of r.boards) {
     if (!b.entry || !b.board) continue;
     if (b.entry.kind === "supply")
-      add({ supplyKey: b.key, name: b.name, kind: "supply-board", volts: b.entry.entry.outputVolts, ratingMa: b.entry.entry.outputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: b.entry.entry.standbyMa, ownAlarmMa: b.entry.entry.alarmMa, batteryNeededAh: 0, maxBatteryAh: b.entry.entry.maxBatteryAh, powers: [] });
+      add({ supplyKey: b.key, name: b.name, kind: "supply-board", volts: b.entry.entry.outputVolts, ratingMa: b.entry.entry.outputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: b.entry.entry.standbyMa, ownAlarmMa: b.entry.entry.alarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: b.entry.entry.maxBatteryAh, powers: [] });
     else if (b.entry.kind === "expansion" && b.entry.entry.ownSupply)
       // A board's own supply has no voltage of its own in the catalog: taken as the panel's (common practice, no published source).
-      add({ supplyKey: b.key, name: `${b.name} own supply`, kind: "own-supply", volts: panel.supplyVolts, ratingMa: b.entry.entry.ownSupply.outputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: b.entry.entry.standbyMa, ownAlarmMa: b.entry.entry.alarmMa, batteryNeededAh: 0, maxBatteryAh: b.entry.entry.ownSupply.maxBatteryAh, powers: [] });
+      add({ supplyKey: b.key, name: `${b.name} own supply`, kind: "own-supply", volts: panel.supplyVolts, ratingMa: b.entry.entry.ownSupply.outputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: b.entry.entry.standbyMa, ownAlarmMa: b.entry.entry.alarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: b.entry.entry.ownSupply.maxBatteryAh, powers: [] });
   }
 
   // Where each board's detectors draw from.
@@ -135,15 +136,17 @@ export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutP
         why: "Past its rating the output's protection trips or its voltage sags, and everything on it can drop out. Move boards to a power supply or choose a larger one.",
         target,
       });
-    const restMa = s.ownRestMa + s.loadRestMa;
-    const alarmMa = s.ownAlarmMa + s.loadAlarmMa;
+    const restMa = (s.batteryRestMa = s.ownRestMa + s.loadRestMa);
+    const alarmMa = (s.batteryAlarmMa = s.ownAlarmMa + s.loadAlarmMa);
     s.batteryNeededAh = batteryAh({ restMa, alarmMa, standbyH, alarmMin, safetyFactor: sf });
-    const working = `${fmt(standbyH)} h × ${fmt(restMa)} mA + ${fmt(alarmMin)} min × ${fmt(alarmMa)} mA = ${fmt(s.batteryNeededAh / sf)} Ah, × ${fmt(sf)}`;
+    s.batteryPick = pickBattery(s.batteryNeededAh, s.maxBatteryAh, s.volts);
+    // The same labels as the figures panel: "battery load at rest" is own draw plus output load.
+    const working = `${fmt(standbyH)} h × ${fmt(restMa)} mA battery load at rest + ${fmt(alarmMin)} min × ${fmt(alarmMa)} mA battery load in alarm = ${fmt(s.batteryNeededAh / sf)} Ah, × ${fmt(sf)}`;
     if (s.batteryNeededAh > s.maxBatteryAh)
       out.push({
         code: "battery-too-large",
         severity: "error",
-        message: `${s.name} needs a ${fmt(s.batteryNeededAh)} Ah standby battery (${working}); it can charge at most ${fmt(s.maxBatteryAh)} Ah`,
+        message: `${s.name} needs a standby battery of at least ${fmtUp(s.batteryNeededAh)} Ah (${working}); it can charge at most ${fmt(s.maxBatteryAh)} Ah`,
         why: "A battery larger than the charger is rated for does not recharge in time after a mains failure. Split the load onto another supply.",
         target,
       });
@@ -151,8 +154,8 @@ export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutP
       out.push({
         code: "battery-needed",
         severity: "note",
-        message: `${s.name}: standby battery of at least ${fmt(s.batteryNeededAh)} Ah (${working}); it can charge up to ${fmt(s.maxBatteryAh)} Ah`,
-        why: `Sized for ${profile?.label ?? "24 h and 5 min"}${profile ? ` (${profile.source})` : ""}. Use the next standard battery size up.`,
+        message: `${s.name}: standby battery of at least ${fmtUp(s.batteryNeededAh)} Ah, ${s.batteryPick ? `fit ${batteryPickText(s.batteryPick)}` : "no standard battery set fits its charger"} (${working}); it can charge up to ${fmt(s.maxBatteryAh)} Ah`,
+        why: `Sized for ${profile?.label ?? "24 h and 5 min"}${profile ? ` (${profile.source}). ${CHECK_EDITION}` : "."} ${s.batteryPick ? `Standard sizes are ${STANDARD_BATTERY_AH.join(", ")} Ah.` : "Split the load onto another supply, or choose one whose charger takes a larger battery."}`,
         target,
       });
   }
@@ -165,6 +168,8 @@ export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutP
       why: "Standby and alarm periods, derating and charger limits for fire systems are set by the local fire code and the authority having jurisdiction; have the calculation checked under licensed practice. Loopwright is an aid, not an approval.",
       target: { kind: "layout" },
     });
+
+  attachBreakdown(r, supplies, feedOf);
 
   // Voltage at each powered detector after the drop on its cable.
   const detectors: DetectorVoltage[] = [];

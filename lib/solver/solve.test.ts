@@ -86,11 +86,14 @@ describe("power rules", () => {
     expect(panel).toMatchObject({ loadRestMa: 60, loadAlarmMa: 80, ownRestMa: 80, ownAlarmMa: 150, maxBatteryAh: 18 });
     expect(panel.batteryNeededAh).toBeCloseTo(4.224, 3);
     expect(find(r.findings, "battery-needed")[0].message).toBe(
-      "Control panel auxiliary output: standby battery of at least 4.22 Ah (24 h × 140 mA + 5 min × 230 mA = 3.38 Ah, × 1.25); it can charge up to 18 Ah",
+      "Control panel auxiliary output: standby battery of at least 4.23 Ah, fit one 12 V 7 Ah battery (24 h × 140 mA battery load at rest + 5 min × 230 mA battery load in alarm = 3.38 Ah, × 1.25); it can charge up to 18 Ah",
     );
+    // the battery load is own draw plus output load, and the breakdown adds up to it line by line
+    expect(panel).toMatchObject({ batteryRestMa: 140, batteryAlarmMa: 230, batteryPick: { sizeAh: 7, count: 1 } });
+    expect(panel.breakdown.map((l) => [l.kind, l.restMa, l.alarmMa])).toEqual([["own", 80, 150], ...schedule.map(() => ["detector", 15, 20])]);
     // a fire profile always carries the fire-code caution
     expect(find(r.findings, "battery-fire-caution")[0].why).toMatch(/authority having jurisdiction/);
-    expect(r.battery).toEqual({ profileId: "nfpa72-fire", source: "NFPA 72 (secondary power supply)", standbyH: 24, alarmMin: 5, safetyFactor: 1.25 });
+    expect(r.battery).toEqual({ profileId: "nfpa72-fire", source: "NFPA 72, chapter 10, secondary power supply (10.6.7 in recent editions)", standbyH: 24, alarmMin: 5, safetyFactor: 1.25 });
   });
   it("has no fire caution for an intruder profile without life-safety devices", () => {
     const schedule = pirs(2);
@@ -124,6 +127,13 @@ describe("power rules", () => {
     expect(by.panel).toMatchObject({ loadRestMa: 0, loadAlarmMa: 0 });
     expect(by.b1).toMatchObject({ kind: "own-supply", loadRestMa: 320, loadAlarmMa: 480, ownRestMa: 40, ownAlarmMa: 50, ratingMa: 1000 });
     expect(by.s1).toMatchObject({ kind: "supply-board", loadRestMa: 30 + 15, loadAlarmMa: 40 + 20, ownRestMa: 25, powers: ["b2"] });
+    // each supply's breakdown names what draws on it and sums to its battery load
+    expect(by.s1.breakdown.map((l) => [l.kind, l.key, l.restMa])).toEqual([["own", "s1", 25], ["board", "b2", 30], ["detector", "x1", 15]]);
+    expect(by.b1.breakdown.filter((l) => l.kind === "detector")).toHaveLength(8);
+    for (const s of r.supplies) {
+      expect(s.breakdown.reduce((a, l) => a + l.restMa, 0)).toBeCloseTo(s.batteryRestMa, 9);
+      expect(s.breakdown.reduce((a, l) => a + l.alarmMa, 0)).toBeCloseTo(s.batteryAlarmMa, 9);
+    }
     expect(codes(r.findings)).not.toContain("supply-overloaded");
   });
   it("is an error to power a board from something that is not a supply", () => {

@@ -2,6 +2,7 @@ import type { WiringScheme } from "@/lib/catalog/schema";
 import type { Finding } from "@/lib/findings";
 import type { Fault, LoopAnalysis } from "@/lib/loop/types";
 import type { BoardKind, InputRef, LayoutDocument } from "@/lib/layout/schema";
+import type { BatteryPick } from "@/lib/solver/battery";
 
 export interface BoardFigures {
   boardKey: string;
@@ -39,6 +40,17 @@ export interface BusFigures {
   maxCableM: number;
 }
 
+/** One line of where a supply's current goes. */
+export interface PowerDraw {
+  /** "own": the supply's (or panel's, or board's) own draw; "sounder" once the catalog has sounders. */
+  kind: "own" | "board" | "keypad" | "detector" | "sounder";
+  /** The board key, the detector id, or the supply key for its own draw. */
+  key: string;
+  name: string;
+  restMa: number;
+  alarmMa: number;
+}
+
 export interface SupplyFigures {
   /** "panel" for the panel's auxiliary output, else the board key. */
   supplyKey: string;
@@ -52,8 +64,15 @@ export interface SupplyFigures {
   /** The supply's (or board's, or panel's) own consumption, carried by its battery. */
   ownRestMa: number;
   ownAlarmMa: number;
+  /** What the battery carries: own draw plus load. The battery note and every screen use these two. */
+  batteryRestMa: number;
+  batteryAlarmMa: number;
+  /** Own draw first, then each board and keypad it powers, then each powered detector; sums to batteryRestMa / batteryAlarmMa. */
+  breakdown: PowerDraw[];
   batteryNeededAh: number;
   maxBatteryAh: number;
+  /** Standard batteries that hold batteryNeededAh within maxBatteryAh; null when none do. */
+  batteryPick: BatteryPick | null;
   /** Boards it powers (besides itself). */
   powers: string[];
 }
