@@ -1,4 +1,5 @@
 import type { ReadingVerdict } from "@/lib/commissioning/diagnose";
+import { FaultRanking } from "@/components/loop-bench/fault-finder-panel";
 
 /** The instant diagnosis of a typed reading: pass or fail, and what a failure most likely means. */
 export function VerdictView({ v, testId }: { v: ReadingVerdict; testId: string }) {
@@ -13,6 +14,12 @@ export function VerdictView({ v, testId }: { v: ReadingVerdict; testId: string }
           {d.text}
         </p>
       ))}
+      {v.ranking?.length ? (
+        <div className="mt-2 border-t border-fault/30 pt-2">
+          <p className="text-sm font-semibold">What fits this reading best</p>
+          <FaultRanking ranking={v.ranking} limit={3} testId={`${testId}-ranking`} />
+        </div>
+      ) : null}
     </div>
   );
 }

@@ -3,6 +3,7 @@
 // reads and the panel reports. The engine is pure, so it runs here on every change.
 import type { InputType } from "@/lib/catalog/schema";
 import { BenchResults } from "./bench-results";
+import { FaultFinderPanel } from "./fault-finder-panel";
 import { CableControls, ResistorControls } from "./resistor-cable-controls";
 import { useBench } from "./use-bench";
 import { DetectorFaultControls, InputWiringControls } from "./wiring-controls";
@@ -17,6 +18,7 @@ export function LoopBench({ inputTypes }: { inputTypes: InputType[] }) {
         <DetectorFaultControls bench={bench} />
         <ResistorControls bench={bench} />
         <CableControls bench={bench} />
+        <FaultFinderPanel loop={bench.loop} inputType={bench.inputType} />
       </div>
       {/* results */}
       <BenchResults bench={bench} />

@@ -96,8 +96,20 @@ export const panelSchema = z.strictObject({
   maxBatteryAh: z.number().positive(),
   supplyVolts: z.number().positive().max(60),
   minDeviceVolts: z.number().positive().max(60),
+  /** Battery voltage at the end of the standby period; default `defaultEndOfDischargeVolts(supplyVolts)`. */
+  endOfDischargeVolts: z.number().positive().max(60).optional(),
 });
 export type Panel = z.infer<typeof panelSchema>;
+
+/**
+ * Lead-acid standby batteries: float at 2.3 V per cell (13.8 V on a 12 V battery), end of discharge at
+ * 1.75 V per cell (10.5 V) at the low rates of alarm standby (typical practice, from memory). A supply
+ * without its own figure is taken as lead-acid at that ratio of its charging voltage.
+ */
+export const END_OF_DISCHARGE_RATIO = 1.75 / 2.3;
+export function defaultEndOfDischargeVolts(chargingVolts: number): number {
+  return chargingVolts * END_OF_DISCHARGE_RATIO;
+}
 
 export const ownSupplySchema = z.strictObject({ outputMa: milliamps, maxBatteryAh: z.number().positive() });
 
@@ -131,6 +143,8 @@ export const powerSupplySchema = z.strictObject({
   alarmMa: milliamps,
   takesBusAddress: z.boolean(),
   outputVolts: z.number().positive().max(60),
+  /** Battery voltage at the end of the standby period; default `defaultEndOfDischargeVolts(outputVolts)`. */
+  endOfDischargeVolts: z.number().positive().max(60).optional(),
 });
 export type PowerSupply = z.infer<typeof powerSupplySchema>;
 

@@ -124,3 +124,19 @@ describe("diagnosis rules", () => {
     expect(restingResistorOhms(diagnoseLoopOf(row("fire1", 1)))).toBe(5700);
   });
 });
+
+describe("the fault finder in the diagnosis", () => {
+  it("ranks what a failed rest reading means: a 3.3 kΩ resistor in place of 4.7 kΩ on the front door", () => {
+    // 3.3 kΩ + 2 × 25 m × 0.053 Ω/m (22 AWG, ASTM B258) + two closed contacts ≈ 3.303 kΩ
+    const v = diagnoseReading(door, "rest", ohms(3303));
+    expect(v.verdict).toBe("fail");
+    expect(v.ranking![0]).toMatchObject({ kind: "wrong-value", label: "A 3.3 kΩ end-of-line resistor fitted instead of 4.7 kΩ" });
+  });
+  it("puts a short at about 10 m first for 1.06 Ω at rest, and gives no ranking on a pass", () => {
+    // d = R / (2 r) = 1.06 / (2 × 0.053) = 10 m on 22 AWG (ASTM B258), the rest of the loop in parallel adds under 0.1 %
+    const v = diagnoseReading(door, "rest", ohms(1.06));
+    expect(v.ranking![0].kind).toBe("short-at-distance");
+    expect(v.ranking![0].distance!.metres).toBeCloseTo(10, 0);
+    expect(diagnoseReading(door, "rest", ohms(4703)).ranking).toBeUndefined();
+  });
+});

@@ -1,6 +1,8 @@
 import type { Catalog, ContactType, WiringScheme } from "@/lib/catalog/schema";
 import { conductorOhmsPerM } from "@/lib/loop/cable";
-import type { CableGauge, Placement } from "@/lib/loop/types";
+import { CONTACT_OHMS, LOOP_TEMP_MAX_C, LOOP_TEMP_MIN_C } from "@/lib/solver/loop-rules";
+import { findFaults, type Explanation, type MeasuredReadings } from "@/lib/loop/fault-finder";
+import type { CableGauge, LoopSpec, Placement } from "@/lib/loop/types";
 import { closestPreferred } from "@/lib/resistors/e-series";
 import { formatOhms } from "@/lib/resistors/format-ohms";
 import type { ExpectedReading, SheetInput, TestKey } from "@/lib/sheet/sheet-types";
@@ -21,6 +23,8 @@ export interface DiagnoseLoop {
   /** Fitted values by role. */
   resistors: { role: string; ohms: number }[];
   gauge?: CableGauge;
+  /** The loop as the engine sees it, for ranking what a failed reading means (the fault finder). */
+  spec?: LoopSpec;
 }
 
 export interface UsualValue {
@@ -67,6 +71,8 @@ export interface ReadingVerdict {
   diagnoses: Diagnosis[];
   /** One line for the record. */
   summary: string;
+  /** Failed readings on a loop with `spec`: the fault finder's explanations, best fit first. */
+  ranking?: Explanation[];
 }
 
 const diag = (code: DiagnosisCode, text: string): Diagnosis => ({ code, text, source: TRADE_RULE_SOURCE });
@@ -177,7 +183,8 @@ export function diagnoseReading(loop: DiagnoseLoop, test: TestKey, reading: Meas
     if (!out.length) out.push(diag("open-unexpected", `${rt} where ${et} was expected: check the wiring against the core map.`));
   }
   const why = out[0] ? ` ${out[0].text}` : "";
-  return { test, verdict: "fail", readingText: rt, expectedText: et, matches, diagnoses: out, summary: `Fail: ${rt}, expected ${et}.${why}` };
+  const ranking = loop.spec ? rankFaults(loop.spec, test, reading) : undefined;
+  return { test, verdict: "fail", readingText: rt, expectedText: et, matches, diagnoses: out, summary: `Fail: ${rt}, expected ${et}.${why}`, ...(ranking ? { ranking } : {}) };
 }
 
 function wrongResistor(loop: DiagnoseLoop, test: TestKey, r: number, e: DiagnoseLoop["expected"][number], rest: DiagnoseLoop["expected"][number] | undefined, restOhms: number | null, usual: UsualValue[]): Diagnosis {
@@ -195,9 +202,38 @@ function wrongResistor(loop: DiagnoseLoop, test: TestKey, r: number, e: Diagnose
   );
 }
 
+/** The fault finder's reading for a test: at rest, first detector active, or the far end shorted. */
+const FINDER_READING: Partial<Record<TestKey, keyof MeasuredReadings>> = { rest: "restOhms", active: "activeOhms", "active-a": "activeOhms", short: "farEndShortedOhms" };
+
+/** The explanations the fault finder ranks for one failed reading, when the test is one it knows. */
+export function rankFaults(spec: LoopSpec, test: TestKey, reading: MeasuredReading): Explanation[] | undefined {
+  const key = FINDER_READING[test];
+  if (!key) return undefined;
+  return findFaults(spec, undefined, { [key]: reading.kind === "open" ? Infinity : reading.ohms });
+}
+
+/** The engine's loop description of a terminal sheet row. */
+export function loopSpecOfRow(row: SheetInput): LoopSpec | undefined {
+  if (!row.detectors.length) return undefined;
+  const v = (role: string) => row.resistors.find((r) => r.role === role)?.ohms;
+  const a = v("shared-a");
+  const b = v("shared-b");
+  return {
+    scheme: row.scheme,
+    placement: row.placement,
+    detectors: row.detectors.map((d) => ({ label: d.label, contact: d.contact, tamper: d.tamper, lifeSafety: d.lifeSafety })),
+    eolOhms: v("eol"),
+    alarmOhms: v("alarm"),
+    sharedOhms: a !== undefined && b !== undefined ? [a, b] : undefined,
+    tolerancePct: row.resistors[0]?.tolerancePct ?? 5,
+    cable: { gauge: row.cable.gauge, lengthM: row.cable.lengthM, tempMinC: LOOP_TEMP_MIN_C, tempMaxC: LOOP_TEMP_MAX_C },
+    contactOhms: CONTACT_OHMS,
+  };
+}
+
 /** The diagnosis view of a terminal sheet row. */
 export function diagnoseLoopOf(row: SheetInput): DiagnoseLoop {
-  return { scheme: row.scheme, placement: row.placement, contact: row.detectors[0]?.contact ?? "NC", expected: row.expected, resistors: row.resistors, gauge: row.cable.gauge };
+  return { scheme: row.scheme, placement: row.placement, contact: row.detectors[0]?.contact ?? "NC", expected: row.expected, resistors: row.resistors, gauge: row.cable.gauge, spec: loopSpecOfRow(row) };
 }
 
 /** Every input type's resistor values with the panel families that use it, for naming a resistor from another family's stock. */

@@ -66,6 +66,8 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
   const vLo = new Float64Array(4);
   const vHi = new Float64Array(4);
   const vNom = new Float64Array(4);
+  const vLo0 = new Float64Array(4);
+  const vHi0 = new Float64Array(4);
   for (const states of combos) {
     const code = encodeStates(states);
     const exp0 = expectedFor(m, code);
@@ -73,6 +75,9 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
     evalFaults(m, code, rcLo, eLo, aLo, saLo, sbLo, vLo);
     evalFaults(m, code, rcHi, eHi, aHi, saHi, sbHi, vHi);
     evalFaults(m, code, rcNom, m.eol, m.alarm, m.sa, m.sb, vNom);
+    // The same rows on a zero-length cable: the longest run starts from readings in their band there.
+    evalFaults(m, code, 0, eLo, aLo, saLo, sbLo, vLo0);
+    evalFaults(m, code, 0, eHi, aHi, saHi, sbHi, vHi0);
     for (let f = 0; f < 4; f++) {
       const minOhms = vLo[f];
       const maxOhms = vHi[f];
@@ -97,8 +102,11 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
         label: f === 0 ? sl : `${FAULT_WORDS[fault]} (${sl})`,
       });
       masks.push(mask);
-      if (iLo === iHi && (mask & ~acceptableFor(expected)) === 0 && maxOhms < Infinity)
-        cableRows.push({ code, fault: f, maxOhms, edgeOhms: cb.to[iHi] });
+      const hi0 = vHi0[f];
+      if (hi0 < Infinity) {
+        const b0 = bandIndex(cb, hi0);
+        if (b0 === bandIndex(cb, vLo0[f]) && (cb.masks[b0] & ~acceptableFor(expected)) === 0) cableRows.push({ code, fault: f, maxAtZeroOhms: hi0, edgeOhms: cb.to[b0] });
+      }
     }
   }
 
@@ -145,7 +153,8 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
       const r = rows[i];
       const others = decodeRows.filter((_, kk) => kk !== k).reduce((acc, j) => acc | masks[j], 0);
       const report = r.reports.length === 1 ? r.reports[0] : cb.reports[bandIndex(cb, r.nominalOhms!)];
-      return { states: r.states, minOhms: r.minOhms, maxOhms: r.maxOhms, report, unique: r.reports.length === 1 && (masks[i] & others) === 0 };
+      // Unique means told apart and read as itself: a state landing alone in another state's band is not.
+      return { states: r.states, minOhms: r.minOhms, maxOhms: r.maxOhms, report, unique: r.reports.length === 1 && report === r.expected && (masks[i] & others) === 0 };
     });
   }
   const findings: Finding[] = buildFindings({ loop, inputType, model: m, rows, masks, analysis }, target);

@@ -100,14 +100,16 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
   }
   if (activeNormal)
     push(out, target, "active-reads-normal", "error", reads(activeNormal), "A detector going into alarm must change what the panel reads; here the alarm is lost and nothing is reported.");
+  const alarmAsFault = activeWrong !== null && activeWrong.reports.some((x) => x === "short" || x === "open" || x === "trouble");
   if (activeWrong)
     push(out, target, "active-misread",
-      "warning",
+      lifeSafety && alarmAsFault ? "error" : "warning",
       `${reads(activeWrong)}, not ${REPORT_WORDS[activeWrong.expected]}`,
       activeWrong.reports.includes("short")
         ? "The detector's alarm looks like a shorted cable to this input, so it may be reported as a fault instead of an alarm, and a real short looks like an alarm."
         : "The panel reports the detector's alarm as something else, so whoever responds is told the wrong thing.",
     );
+  if (activeWrong && lifeSafety && alarmAsFault) out[out.length - 1].why += ` On a life-safety loop a fire alarm reported as a wiring fault delays the response to a fire. ${LIFE_SAFETY_CAUTION}`;
   if (tamperNormal) push(out, target, "tamper-reads-normal", "error", reads(tamperNormal), "Opening the detector's cover must be reported; here it reads as normal, so the detector can be interfered with unseen.");
   if (tamperWrong)
     push(out, target, "tamper-misread",
@@ -119,7 +121,7 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
   // Faults.
   const shortDefeat = (["short-panel", "short-detector"] as const).filter((f) => analysis.faults[f] === "defeat");
   if (shortDefeat.length) {
-    const r = worst(faultRows(rows, shortDefeat[0]), (x) => x.reports.includes("normal"));
+    const r = silencingShort(rows, shortDefeat);
     const why =
       scheme === "none"
         ? "With no end-of-line resistor the panel can't tell a shorted pair from closed contacts: shorting the cable silences every detector on it without a report."
@@ -177,20 +179,12 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
   if (thin)
     push(out, target, "margin-thin", "note", `${reads(thin)}, only ${formatOhms(thin.marginOhms)} from a band edge`, "A small margin leaves little room for a contact that ages, a joint that corrodes or a hotter cable run.");
 
-  // States the panel can't tell apart (pairs with different expected reports and a shared report).
+  // States the panel can't tell apart, grouped by the kinds of situation involved (an alarm and a cut, …).
   if (analysis.indistinguishable.length) {
-    // one example per pair of expected reports
-    const seen: number[] = [];
-    const pairs: string[] = [];
-    for (const [i, j] of analysis.indistinguishable) {
-      const key = REPORT_BIT[rows[i].expected] * 1024 + REPORT_BIT[rows[j].expected];
-      if (seen.includes(key)) continue;
-      seen.push(key);
-      if (pairs.length < 4) pairs.push(`${rows[i].label} and ${rows[j].label}`);
-    }
+    const groups = indistinguishableGroups(rows, analysis.indistinguishable);
     push(out, target, "readings-indistinguishable",
       "note",
-      `The panel can't tell apart: ${pairs.join("; ")}${seen.length > pairs.length ? "; …" : ""}`,
+      `The panel can't tell apart: ${groups.map((g) => `${g.words} (${g.count === 1 ? "" : `${g.count} cases, `}e.g. ${g.example})`).join("; ")}`,
       "These situations give the same report, so the panel — and whoever answers it — can't know which one happened.",
     );
   }
@@ -235,7 +229,13 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
       `The loop's conductors measure up to ${formatOhms(cable.maxOhms)} at ${loop.cable.tempMaxC} °C; the input accepts at most ${formatOhms(inputType.maxLoopOhms)} (longest run ${Math.floor(analysis.maxCableByLoopOhmsM ?? 0)} m)`,
       "Beyond its loop-resistance limit the input can't measure the resistors reliably, whatever the bands say; use a heavier gauge or a shorter run.",
     );
-  if (analysis.maxCableM !== null && analysis.maxCableM < loop.cable.lengthM * 1.25 && !restWrong)
+  if (analysis.maxCableM !== null && analysis.maxCableM < loop.cable.lengthM)
+    push(out, target, "cable-over-limit",
+      "error",
+      `Readings leave their bands beyond ${Math.floor(analysis.maxCableM)} m; this run is already ${loop.cable.lengthM} m`,
+      "The cable's own resistance has moved a reading into the wrong band; use a heavier gauge or a shorter run.",
+    );
+  else if (analysis.maxCableM !== null && analysis.maxCableM < loop.cable.lengthM * 1.25 && !restWrong)
     push(out, target, "cable-near-limit",
       "warning",
       `Readings leave their bands beyond ${Math.floor(analysis.maxCableM)} m; this run is ${loop.cable.lengthM} m`,
@@ -254,6 +254,12 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
         "error",
         `The four states of this shared input don't decode uniquely: ${ambiguous.map((d) => `${describeDecode(d.states, names)} reads ${formatOhmsRange(d.minOhms, d.maxOhms)}`).join("; ")}`,
         "A shared input tells its two detectors apart only by the reading; when two states can give the same report, the panel can't say which detector is active.",
+      );
+    for (const [r, other] of sharedMisreads(rows, masks))
+      push(out, target, "shared-state-misread",
+        "error",
+        `${describeDecode(r.states, names)} reads as ${describeDecode(other.states, names)}: ${reads(r)}`,
+        `The panel decodes a shared input by which band the reading falls in; this combination lands in the band of another, so the panel reports ${describeDecode(other.states, names)} when ${describeDecode(r.states, names)}.`,
       );
     const lost = sharedLosses(ctx, names);
     analysis.sharedLost = lost;
@@ -282,7 +288,64 @@ const FAULT_SHORT_WORDS = { "short-panel": "a short at the panel end", "short-de
 
 function describeDecode(states: readonly string[], names: readonly string[]): string {
   const a = states.map((s, i) => (s === "active" ? names[i] : null)).filter(Boolean);
-  return a.length === 0 ? "both at rest" : a.length === 2 ? "both active" : `${a[0]} active`;
+  const t = states.map((s, i) => (s === "tamper" ? names[i] : null)).filter(Boolean);
+  const act = a.length === 0 ? (t.length ? "" : "both at rest") : a.length === 2 ? "both active" : `${a[0]} active`;
+  const tam = t.length === 0 ? "" : `${t.join(" and ")} tamper open`;
+  return act && tam ? `${act}, ${tam}` : act || tam;
+}
+
+/** Shared input, no fault: every state combination whose reading can land in the band of another combination. */
+function sharedMisreads(rows: readonly Reading[], masks: readonly number[]): Array<[Reading, Reading]> {
+  const out: Array<[Reading, Reading]> = [];
+  for (let i = 0; i < rows.length; i += 4) {
+    const r = rows[i];
+    for (let j = 0; j < rows.length; j += 4) {
+      const o = rows[j];
+      if (j === i || o.expected === r.expected || !(masks[i] & REPORT_BIT[o.expected])) continue;
+      if (out.some(([a, b]) => a === r && b.expected === o.expected)) continue;
+      out.push([r, o]);
+    }
+  }
+  return out;
+}
+
+/** The short to quote in a defeat: one at the detector end while a detector is in alarm silences that alarm. */
+function silencingShort(rows: readonly Reading[], defeats: readonly Reading["fault"][]): Reading {
+  const normal = (x: Reading) => x.reports.includes("normal");
+  const alarm = (x: Reading) => x.expected === "short" && x.states.includes("active") && normal(x);
+  const order: Reading["fault"][] = defeats.includes("short-detector") ? ["short-detector", ...defeats.filter((f) => f !== "short-detector")] : [...defeats];
+  for (const f of order) {
+    const hit = rows.find((x) => x.fault === f && alarm(x));
+    if (hit) return hit;
+  }
+  return worst(faultRows(rows, order[0]), normal);
+}
+
+function situation(r: Reading): string {
+  if (r.fault !== "none") return SITUATION_WORDS[r.fault];
+  if (r.expected === "normal") return "all at rest";
+  if (r.expected === "open") return "a tamper";
+  return "an alarm";
+}
+
+const SITUATION_WORDS = { "short-panel": "a short at the panel end", "short-detector": "a short at the detector end", cut: "a cut conductor" } as const;
+const SITUATION_ORDER = ["all at rest", "an alarm", "a tamper", "a short at the detector end", "a short at the panel end", "a cut conductor"];
+
+/** Pairs grouped by the two kinds of situation they mix up, in a fixed order, each with a count and the first example. */
+function indistinguishableGroups(rows: readonly Reading[], pairs: readonly [number, number][]): { words: string; count: number; example: string }[] {
+  const groups = new Map<string, { a: number; b: number; count: number; example: string }>();
+  for (const [i, j] of pairs) {
+    let a = SITUATION_ORDER.indexOf(situation(rows[i]));
+    let b = SITUATION_ORDER.indexOf(situation(rows[j]));
+    if (a > b) [a, b] = [b, a];
+    const key = `${a}:${b}`;
+    const g = groups.get(key);
+    if (g) g.count++;
+    else groups.set(key, { a, b, count: 1, example: `${rows[i].label} and ${rows[j].label}` });
+  }
+  return [...groups.values()]
+    .sort((x, y) => x.a - y.a || x.b - y.b)
+    .map((g) => ({ words: g.a === g.b ? `${SITUATION_ORDER[g.a]} and another ${SITUATION_ORDER[g.a].replace(/^(a|an|all at) /, "")}` : `${SITUATION_ORDER[g.a]} and ${SITUATION_ORDER[g.b]}`, count: g.count, example: g.example }));
 }
 
 /** What a shared input loses against one detector per input, from this loop's own readings. */

@@ -1,4 +1,5 @@
-// The longest one-way run before any reading that is in its band now leaves it.
+// The longest one-way run: the length at which the first reading that is in its band on a zero-length cable
+// leaves it. It does not depend on the run entered, so a run already past it gets the true, shorter figure.
 // Every reading is non-decreasing in conductor resistance (series–parallel network of positive resistors),
 // so each row has one crossing length; the slope is at most (conductors × Ω/m), which gives a lower bound
 // that is exact for series-only paths. Otherwise: bracket by doubling, then Illinois regula falsi.
@@ -10,8 +11,8 @@ export const CABLE_SEARCH_CAP_M = 1e7;
 export interface CableRow {
   code: Uint8Array;
   fault: number;
-  /** Current maximum reading. */
-  maxOhms: number;
+  /** Highest reading on a zero-length cable (parts at the top of their tolerance). */
+  maxAtZeroOhms: number;
   /** Upper edge of the band it must stay in. */
   edgeOhms: number;
 }
@@ -27,10 +28,10 @@ export function maxCableRun(m: LoopModel, rows: readonly CableRow[], partHi: num
   let limit = Infinity;
   for (const row of rows) {
     const edge = row.edgeOhms;
-    if (!(row.maxOhms < edge) || edge === Infinity) continue;
+    if (!(row.maxAtZeroOhms < edge) || edge === Infinity) continue;
     if (limit < Infinity && evalReading(m, row.code, row.fault, r * limit, eol, alarm, sa, sb) < edge) continue; // crosses later than the current limit, if at all
     if (limit === Infinity && evalReading(m, row.code, row.fault, r * CABLE_SEARCH_CAP_M, eol, alarm, sa, sb) < edge) continue; // never crosses
-    let a = m.lengthM + (edge - row.maxOhms) / (m.conductors * r);
+    let a = (edge - row.maxAtZeroOhms) / (m.conductors * r);
     let fa = evalReading(m, row.code, row.fault, r * a, eol, alarm, sa, sb);
     if (fa >= edge * (1 - 1e-12)) {
       if (a < limit) limit = a;

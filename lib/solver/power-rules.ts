@@ -1,6 +1,7 @@
 import type { Finding } from "@/lib/findings";
 import { PANEL_KEY, type LayoutPower } from "@/lib/layout/schema";
-import { conductorOhms } from "@/lib/loop";
+import { conductorOhms, LIFE_SAFETY_CAUTION } from "@/lib/loop";
+import { defaultEndOfDischargeVolts } from "@/lib/catalog/schema";
 import { batteryAh, batteryPickText, pickBattery, STANDARD_BATTERY_AH } from "@/lib/solver/battery";
 import { fmt, fmtUp } from "@/lib/solver/format";
 import { attachBreakdown } from "@/lib/solver/supply-breakdown";
@@ -36,7 +37,22 @@ function voltageAt(d: PlacedDetector, p: NonNullable<Detector["power"]>, feed: S
   const dropV = (p.alarmMa / 1000) * cableOhms;
   const minVolts = Math.max(p.minVolts, panelMinVolts);
   const v = feed.volts - dropV;
-  const fig: DetectorVoltage = { detectorId: d.sched.id, supplyKey: feed.supplyKey, supplyVolts: feed.volts, currentMa: p.alarmMa, cableOhms, dropV, volts: v, minVolts, ok: v >= minVolts };
+  const endV = feed.endVolts - dropV;
+  const fig: DetectorVoltage = {
+    detectorId: d.sched.id,
+    supplyKey: feed.supplyKey,
+    supplyVolts: feed.volts,
+    currentMa: p.alarmMa,
+    cableOhms,
+    dropV,
+    volts: v,
+    minVolts,
+    ok: v >= minVolts,
+    endSupplyVolts: feed.endVolts,
+    endVolts: endV,
+    endMinVolts: p.minVolts,
+    okOnBattery: endV >= p.minVolts,
+  };
   let finding: Finding | null = null;
   if (!fig.ok) {
     const limit = p.minVolts >= panelMinVolts ? `its minimum of ${volts(p.minVolts)} V` : `the panel's minimum device voltage of ${volts(panelMinVolts)} V`;
@@ -45,6 +61,14 @@ function voltageAt(d: PlacedDetector, p: NonNullable<Detector["power"]>, feed: S
       severity: "error",
       message: `${d.sched.label} gets ${volts(v)} V: ${volts(feed.volts)} V less ${volts(dropV)} V dropped over ${fmt(d.sched.cableM)} m of cable (${fmt(p.alarmMa)} mA × ${fmt(cableOhms)} Ω out and back), below ${limit}`,
       why: "A detector below its working voltage may not report, or may report false alarms. Use a thicker cable, a shorter run, or a power supply closer to it.",
+      target: { kind: "detector", detectorId: d.sched.id },
+    };
+  } else if (!fig.okOnBattery) {
+    finding = {
+      code: "detector-voltage-low-on-battery",
+      severity: "error",
+      message: `${d.sched.label} gets ${volts(endV)} V at the end of the standby period: the battery's ${volts(feed.endVolts)} V less ${volts(dropV)} V dropped over ${fmt(d.sched.cableM)} m of cable (${fmt(p.alarmMa)} mA × ${fmt(cableOhms)} Ω out and back), below its minimum of ${volts(p.minVolts)} V (it gets ${volts(v)} V on mains)`,
+      why: `On a mains failure the detector runs from the standby battery, whose voltage falls as it discharges; by the end of the standby period this detector is below its working voltage and may not report. Use a thicker cable, a shorter run, or a power supply closer to it.${d.cat.lifeSafety ? ` ${LIFE_SAFETY_CAUTION}` : ""}`,
       target: { kind: "detector", detectorId: d.sched.id },
     };
   }
@@ -72,14 +96,14 @@ export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutP
     supplies.push(s);
     bySupply.set(s.supplyKey, s);
   };
-  add({ supplyKey: PANEL_KEY, name: "Control panel auxiliary output", kind: "panel", volts: panel.supplyVolts, ratingMa: panel.auxOutputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: panel.ownStandbyMa, ownAlarmMa: panel.ownAlarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: panel.maxBatteryAh, powers: [] });
+  add({ supplyKey: PANEL_KEY, name: "Control panel auxiliary output", kind: "panel", volts: panel.supplyVolts, endVolts: panel.endOfDischargeVolts ?? defaultEndOfDischargeVolts(panel.supplyVolts), ratingMa: panel.auxOutputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: panel.ownStandbyMa, ownAlarmMa: panel.ownAlarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: panel.maxBatteryAh, powers: [] });
   for (const b of r.boards) {
     if (!b.entry || !b.board) continue;
     if (b.entry.kind === "supply")
-      add({ supplyKey: b.key, name: b.name, kind: "supply-board", volts: b.entry.entry.outputVolts, ratingMa: b.entry.entry.outputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: b.entry.entry.standbyMa, ownAlarmMa: b.entry.entry.alarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: b.entry.entry.maxBatteryAh, powers: [] });
+      add({ supplyKey: b.key, name: b.name, kind: "supply-board", volts: b.entry.entry.outputVolts, endVolts: b.entry.entry.endOfDischargeVolts ?? defaultEndOfDischargeVolts(b.entry.entry.outputVolts), ratingMa: b.entry.entry.outputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: b.entry.entry.standbyMa, ownAlarmMa: b.entry.entry.alarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: b.entry.entry.maxBatteryAh, powers: [] });
     else if (b.entry.kind === "expansion" && b.entry.entry.ownSupply)
       // A board's own supply has no voltage of its own in the catalog: taken as the panel's (common practice, no published source).
-      add({ supplyKey: b.key, name: `${b.name} own supply`, kind: "own-supply", volts: panel.supplyVolts, ratingMa: b.entry.entry.ownSupply.outputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: b.entry.entry.standbyMa, ownAlarmMa: b.entry.entry.alarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: b.entry.entry.ownSupply.maxBatteryAh, powers: [] });
+      add({ supplyKey: b.key, name: `${b.name} own supply`, kind: "own-supply", volts: panel.supplyVolts, endVolts: panel.endOfDischargeVolts ?? defaultEndOfDischargeVolts(panel.supplyVolts), ratingMa: b.entry.entry.ownSupply.outputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: b.entry.entry.standbyMa, ownAlarmMa: b.entry.entry.alarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: b.entry.entry.ownSupply.maxBatteryAh, powers: [] });
   }
 
   // Where each board's detectors draw from.
@@ -179,7 +203,7 @@ export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutP
       const p = d.cat.power;
       if (!p) continue;
       let c = voltageCache.get(d.sched.id);
-      if (!c || c.fig.supplyKey !== feed.supplyKey || c.fig.supplyVolts !== feed.volts || c.panelMinVolts !== panel.minDeviceVolts || c.catId !== d.cat.id) {
+      if (!c || c.fig.supplyKey !== feed.supplyKey || c.fig.supplyVolts !== feed.volts || c.fig.endSupplyVolts !== feed.endVolts || c.panelMinVolts !== panel.minDeviceVolts || c.catId !== d.cat.id) {
         c = voltageAt(d, p, feed, panel.minDeviceVolts);
         voltageCache.set(d.sched.id, c);
       }

@@ -57,6 +57,8 @@ export interface SupplyFigures {
   name: string;
   kind: "panel" | "supply-board" | "own-supply";
   volts: number;
+  /** Battery voltage at the end of the standby period (on battery, mains failed). */
+  endVolts: number;
   ratingMa: number;
   /** Current drawn from the output by what it powers. */
   loadRestMa: number;
@@ -87,7 +89,14 @@ export interface DetectorVoltage {
   dropV: number;
   volts: number;
   minVolts: number;
+  /** At the supply's charging voltage. */
   ok: boolean;
+  /** Worst case: the supply's battery at the end of its standby discharge, less the same drop. */
+  endSupplyVolts: number;
+  endVolts: number;
+  /** The device's own minimum (the panel's minimum device voltage is a figure for mains). */
+  endMinVolts: number;
+  okOnBattery: boolean;
 }
 
 export interface LoopSummary {
