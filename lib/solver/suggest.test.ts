@@ -175,15 +175,17 @@ describe("suggestHardware", () => {
       fc.property(fc.array(detector, { minLength: 1, maxLength: 4 }), fc.boolean(), (ds, allowShared) => {
         const schedule = ds.map((d, i) => det(`x${i}`, d.kind, { cableM: d.cableM, area: d.area, supervision: d.shareOk ? "shared-ok" : "double-eol" }));
         const s = suggestHardware(schedule, tinyCatalog, { allowShared });
-        const power: LayoutPower = s.found ? s.layout.power : { standbyProfileId: "intruder-grade-2", safetyFactor: 1.2 };
+        // Optimality is the property here. Proving that no layout exists at all would need the brute force without a
+        // price bound, whose supply-feeding choices grow as 5^boards (minutes to hours per case); the refusal has its own tests.
+        fc.pre(s.found);
+        if (!s.found) return;
+        const power: LayoutPower = s.layout.power;
         // pairs where the schedule allows sharing (the solver itself rejects a pair with a life-safety device)
         const share = (id: string) => allowShared && schedule.find((d) => d.id === id)!.supervision === "shared-ok";
         // search up to and including the suggestion's cost: brute force must find that cost and nothing cheaper
-        const brute = cheapestByBruteForce(schedule, tinyCatalog, power, s.found ? s.cost + 0.001 : Infinity, share);
-        if (s.found) {
-          expect(s.result.counts.error).toBe(0);
-          expect(brute?.cost).toBe(s.cost);
-        } else expect(brute).toBeNull();
+        const brute = cheapestByBruteForce(schedule, tinyCatalog, power, s.cost + 0.001, share);
+        expect(s.result.counts.error).toBe(0);
+        expect(brute?.cost).toBe(s.cost);
       }),
       { numRuns: 25 },
     );
