@@ -1,5 +1,6 @@
 import type { InputType } from "@/lib/catalog/schema";
 import type { Finding, FindingTarget } from "@/lib/findings";
+import { loopSpecKey } from "@/lib/loop/loop-key";
 import type { AnalyzeLoop, Fault, LoopAnalysis, LoopSpec } from "@/lib/loop/types";
 import { inputContentFindings } from "@/lib/solver/capacity-rules";
 import { listNames } from "@/lib/solver/format";
@@ -37,12 +38,9 @@ export function loopSpecFor(ri: Pick<ResolvedInput, "input" | "detectors">, inpu
 /** Text with its length in front, so joined keys cannot run into each other whatever the text holds. */
 const part = (s: string) => `${s.length}:${s}`;
 
-/** Everything the loop analysis depends on, as one string. */
+/** Everything the loop analysis depends on, as one string: the input type and the loop's canonical key. */
 export function loopKey(type: InputType, spec: LoopSpec): string {
-  const g = "awg" in spec.cable.gauge ? `a${spec.cable.gauge.awg}` : `m${spec.cable.gauge.mm2}`;
-  let k = `${part(type.id)}|${spec.scheme}|${spec.placement}|${spec.eolOhms}|${spec.alarmOhms}|${spec.sharedOhms}|${spec.tolerancePct}|${g}|${spec.cable.lengthM}|${spec.cable.tempMinC}|${spec.cable.tempMaxC}|${spec.contactOhms}|${spec.pathway ?? "class-b"}`;
-  for (const d of spec.detectors) k += `|${part(d.label)}${d.contact}${d.tamper ? 1 : 0}${d.lifeSafety ? 1 : 0}`;
-  return k;
+  return `${part(type.id)}|${loopSpecKey(spec)}`;
 }
 
 /** Everything an input's outcome depends on, given a fixed schedule and catalog. */
