@@ -113,7 +113,7 @@ export function ReadingPanel({
           </p>
         </div>
       ) : null}
-      {reading.row === null ? <p className="mt-3 text-xs text-slate-500">This mix of states is worked out for the bench only; the table lists the combinations the analysis checks.</p> : null}
+      {reading.row === null && faultWords === undefined ? <p className="mt-3 text-xs text-slate-500">This mix of states is worked out for the bench only; the table lists the combinations the analysis checks.</p> : null}
 
       {bands ? (
         <div className="mt-4">
