@@ -1,11 +1,14 @@
-// Loop engine speed on a 1,000-detector layout, and a sample checked against the ngspice referee.
-// Prints figures; targets (layout < 10 ms median, ≥ 1000× faster per loop than the referee) are not asserted.
+// Loop engine speed on a 1,000-detector layout, with and without conductor-level faults, and the same loops
+// against the ngspice referee (eecircuit-engine), per loop on the same rows, with the reports compared.
+// Prints figures against the targets (whole layout, input-pair faults, under 3 ms median; at least 5,000×
+// faster per loop than ngspice); nothing is asserted.
 import { Simulation } from "eecircuit-engine";
 import { analyzeLoop } from "@/lib/loop/analyze-loop";
 import { reportsOf } from "@/lib/loop/loop-bands";
+import { LoopAnalysisMemo } from "@/lib/loop/loop-key";
 import { buildLoopNetlist, ohmsFromResult, type SpiceCase } from "@/lib/loop/spice-netlist";
 import { testInputType } from "@/lib/loop/test-support/input-types";
-import type { LoopDetector, LoopSpec } from "@/lib/loop/types";
+import type { ConductorReading, LoopAnalysis, LoopDetector, LoopSpec } from "@/lib/loop/types";
 
 function rng(seed: number) {
   let s = seed >>> 0;
@@ -53,79 +56,139 @@ const median = (xs: number[]) => {
   return s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
 };
 
-export async function run(): Promise<void> {
-  const loops = generateLayoutLoops(1000);
-  const detectors = loops.reduce((n, l) => n + l.detectors.length, 0);
-  const rows = loops.reduce((n, l) => n + analyzeLoop(l, testInputType).rows.length, 0);
-  for (let i = 0; i < 30; i++) for (const l of loops) analyzeLoop(l, testInputType); // warm up
-  const times: number[] = [];
-  for (let k = 0; k < 60; k++) {
+/** Median wall time of `fn` over `runs` runs after `warm` unmeasured ones, ms. */
+function timeIt(fn: (k: number) => void, runs: number, warm: number): { median: number; min: number; max: number } {
+  for (let k = 0; k < warm; k++) fn(k);
+  const t: number[] = [];
+  for (let k = 0; k < runs; k++) {
     const t0 = performance.now();
-    for (const l of loops) analyzeLoop(l, testInputType);
-    times.push(performance.now() - t0);
+    fn(k);
+    t.push(performance.now() - t0);
   }
-  const layoutMs = median(times);
-  const perLoopUs = (layoutMs * 1000) / loops.length;
-  console.log(`layout: ${loops.length} loops, ${detectors} detectors, ${rows} readings`);
-  console.log(`engine: median ${layoutMs.toFixed(2)} ms per layout (min ${Math.min(...times).toFixed(2)}, max ${Math.max(...times).toFixed(2)}), ${perLoopUs.toFixed(2)} µs per loop  [target < 10 ms]`);
+  return { median: median(t), min: Math.min(...t), max: Math.max(...t) };
+}
 
-  // Referee on a sample: one netlist per loop holding every row at the low end, high end and nominal.
-  const sample = loops.filter((_, i) => i % Math.ceil(loops.length / 50) === 0).slice(0, 50);
-  // The engine on the same sample, in steady state: whole sample per run, median over runs, per loop.
-  const sampleTimes: number[] = [];
-  for (let k = 0; k < 300; k++) {
-    const e0 = performance.now();
-    for (const loop of sample) analyzeLoop(loop, testInputType);
-    sampleTimes.push((performance.now() - e0) / sample.length);
-  }
-  const sim = new Simulation();
-  const t0 = performance.now();
-  await sim.start();
-  const startMs = performance.now() - t0;
-  let compared = 0;
-  let readingMismatch = 0;
-  let reportMismatch = 0;
-  let worstRel = 0;
-  const spiceTimes: number[] = [];
+const ms = (x: number) => `${x.toFixed(2)} ms`;
+const met = (ok: boolean) => (ok ? "met" : "NOT met");
+
+/** The same loops with every conductor fault enumerated (the engine enumerates "all" up to 8 detectors). */
+const withConductorFaults = (l: LoopSpec): LoopSpec => ({ ...l, conductorFaults: l.detectors.length <= 8 ? "all" : undefined });
+
+interface RowCase {
+  row: Omit<ConductorReading, never>;
+  base: Omit<SpiceCase, "tempC" | "partFactor">;
+}
+
+/** Every row of an analysis (input-pair rows, and each conductor fault's rows) with how to build it in SPICE. */
+function rowCases(a: LoopAnalysis): RowCase[] {
+  const out: RowCase[] = a.rows.map((r) => ({ row: r, base: { states: r.states, fault: r.fault } }));
+  for (const f of a.conductors?.faults ?? []) for (const r of f.rows) out.push({ row: r, base: { states: r.states, fault: "none", conductorFault: f.fault } });
+  return out;
+}
+
+interface Agreement {
+  rows: number;
+  compared: number;
+  readingMismatch: number;
+  reportMismatch: number;
+  worstRel: number;
+  spiceMs: number[];
+}
+
+async function referee(sim: Simulation, sample: LoopSpec[]): Promise<Agreement> {
+  const g: Agreement = { rows: 0, compared: 0, readingMismatch: 0, reportMismatch: 0, worstRel: 0, spiceMs: [] };
   for (const loop of sample) {
     const a = analyzeLoop(loop, testInputType);
     const tol = loop.tolerancePct / 100;
-    const mid = (loop.cable.tempMinC + loop.cable.tempMaxC) / 2;
-    const cases: SpiceCase[] = a.rows.flatMap((r) => [
-      { states: r.states, fault: r.fault, tempC: loop.cable.tempMinC, partFactor: 1 - tol },
-      { states: r.states, fault: r.fault, tempC: loop.cable.tempMaxC, partFactor: 1 + tol },
-      { states: r.states, fault: r.fault, tempC: mid, partFactor: 1 },
+    const rows = rowCases(a);
+    g.rows += rows.length;
+    const cases: SpiceCase[] = rows.flatMap(({ base }) => [
+      { ...base, tempC: loop.cable.tempMinC, partFactor: 1 - tol },
+      { ...base, tempC: loop.cable.tempMaxC, partFactor: 1 + tol },
     ]);
     const s0 = performance.now();
     const { netlist, probes } = buildLoopNetlist(loop, cases, testInputType);
     sim.setNetList(netlist);
     const result = await sim.runSim();
     const spice = probes.map((p) => ohmsFromResult(result, p));
-    spiceTimes.push(performance.now() - s0);
+    g.spiceMs.push(performance.now() - s0);
     const bands = testInputType.bands[loop.scheme]!;
-    a.rows.forEach((r, i) => {
-      const [lo, hi] = [spice[3 * i], spice[3 * i + 1]];
-      const loS = lo > 1e9 ? Infinity : lo;
-      const hiS = hi > 1e9 ? Infinity : hi;
+    rows.forEach(({ row: r }, i) => {
+      // an open reads through the 1e12 Ω stand-ins only
+      const loS = spice[2 * i] > 1e9 ? Infinity : spice[2 * i];
+      const hiS = spice[2 * i + 1] > 1e9 ? Infinity : spice[2 * i + 1];
       for (const [e, s] of [
         [r.minOhms, loS],
         [r.maxOhms, hiS],
       ]) {
         if (e === Infinity || s === Infinity) {
-          if (e !== s) readingMismatch++;
+          if (e !== s) g.readingMismatch++;
           continue;
         }
-        compared++;
+        g.compared++;
         const rel = Math.abs(e - s) / Math.abs(e || 1);
-        worstRel = Math.max(worstRel, rel);
-        if (rel > 1e-4) readingMismatch++;
+        g.worstRel = Math.max(g.worstRel, rel);
+        if (rel > 1e-4) g.readingMismatch++;
       }
-      if (reportsOf(bands, loS, hiS).join() !== r.reports.join()) reportMismatch++;
+      if (reportsOf(bands, loS, hiS).join() !== r.reports.join()) g.reportMismatch++;
     });
   }
-  const spicePerLoopMs = median(spiceTimes);
-  const enginePerLoopUs = median(sampleTimes) * 1000;
-  console.log(`referee: ngspice (eecircuit-engine) start ${startMs.toFixed(0)} ms; ${sample.length} loops, median ${spicePerLoopMs.toFixed(2)} ms per loop`);
-  console.log(`sample engine: median ${enginePerLoopUs.toFixed(2)} µs per loop; per-loop speed ratio ${((spicePerLoopMs * 1000) / enginePerLoopUs).toFixed(0)}×  [target ≥ 1000×]`);
-  console.log(`agreement: ${compared} finite readings compared, worst relative difference ${worstRel.toExponential(2)}, ${readingMismatch} readings beyond 0.01 %, ${reportMismatch} rows whose reports differ`);
+  return g;
+}
+
+export async function run(): Promise<void> {
+  const loops = generateLayoutLoops(1000);
+  const faulty = loops.map(withConductorFaults);
+  const detectors = loops.reduce((n, l) => n + l.detectors.length, 0);
+  const rows = loops.reduce((n, l) => n + analyzeLoop(l, testInputType).rows.length, 0);
+  const cRows = faulty.reduce((n, l) => n + (analyzeLoop(l, testInputType).conductors?.faults.reduce((m, f) => m + f.rows.length, 0) ?? 0), 0);
+  console.log(`layout: ${loops.length} loops, ${detectors} detectors; ${rows} input-pair rows, ${cRows} more with every conductor fault`);
+
+  // Cold: every loop analysed from scratch. Warm: the editor's re-solve after one edit, through the canonical-key
+  // memo (one loop changed per pass, so one analysis and ${loops.length - 1} look-ups).
+  const cold = timeIt(() => {
+    for (const l of loops) analyzeLoop(l, testInputType);
+  }, 60, 20);
+  const memo = new LoopAnalysisMemo();
+  const warm = timeIt(
+    (k) => {
+      const edited = k % loops.length;
+      for (let i = 0; i < loops.length; i++) memo.analyze(i === edited ? { ...loops[i], cable: { ...loops[i].cable, lengthM: loops[i].cable.lengthM + 1 + k } } : loops[i], testInputType);
+      memo.endGeneration();
+    },
+    200,
+    20,
+  );
+  const coldC = timeIt(() => {
+    for (const l of faulty) analyzeLoop(l, testInputType);
+  }, 7, 2);
+  console.log(`engine, input-pair faults, cold (every loop analysed): median ${ms(cold.median)} per layout (min ${ms(cold.min)}, max ${ms(cold.max)})  [target < 3 ms: ${met(cold.median < 3)}]`);
+  console.log(`engine, input-pair faults, re-solve after one edit (canonical-key memo): median ${ms(warm.median)} per layout (min ${ms(warm.min)}, max ${ms(warm.max)})  [target < 3 ms: ${met(warm.median < 3)}]`);
+  console.log(`engine, with every conductor fault, cold: median ${ms(coldC.median)} per layout (min ${ms(coldC.min)}, max ${ms(coldC.max)})`);
+
+  // Referee on a sample of the same loops: one netlist per loop holding every row at the low and high end.
+  const sample = loops.filter((_, i) => i % Math.ceil(loops.length / 40) === 0).slice(0, 40);
+  const sampleC = sample.map(withConductorFaults);
+  const perLoop = (ls: LoopSpec[], runs: number) =>
+    (timeIt(() => {
+      for (const l of ls) analyzeLoop(l, testInputType);
+    }, runs, 5).median *
+      1000) /
+    ls.length;
+  const engineUs = perLoop(sample, 300);
+  const engineCUs = perLoop(sampleC, 15);
+  const sim = new Simulation();
+  const t0 = performance.now();
+  await sim.start();
+  console.log(`referee: ngspice (eecircuit-engine) started in ${(performance.now() - t0).toFixed(0)} ms; ${sample.length} loops of the layout`);
+  for (const [what, ls, us] of [
+    ["input-pair faults", sample, engineUs],
+    ["with every conductor fault", sampleC, engineCUs],
+  ] as const) {
+    const g = await referee(sim, ls);
+    const spiceMs = median(g.spiceMs);
+    const ratio = (spiceMs * 1000) / us;
+    console.log(`${what}: ${g.rows} rows; ngspice median ${ms(spiceMs)} per loop, engine ${us.toFixed(2)} µs per loop: ${ratio.toFixed(0)}× faster  [target ≥ 5000×: ${met(ratio >= 5000)}]`);
+    console.log(`  agreement: ${g.compared} finite readings compared, worst relative difference ${g.worstRel.toExponential(2)}, ${g.readingMismatch} beyond 0.01 %, ${g.reportMismatch} rows whose reports differ`);
+  }
 }

@@ -30,10 +30,10 @@ export const withTamper = (s: BenchSettings, tamper: boolean): BenchSettings => 
 export const withSharedOhms = (s: BenchSettings, k: 0 | 1, ohms: number | null): BenchSettings => ({ ...s, sharedOhms: k === 0 ? [ohms, s.sharedOhms[1]] : [s.sharedOhms[0], ohms] });
 
 /** A row of the states table taken as the current states and fault (states it does not give are kept). */
-export const withRow = (s: BenchSettings, states: readonly (DetectorState | undefined)[], fault: Fault): BenchSettings => ({ ...s, states: s.states.map((x, i) => states[i] ?? x), fault });
+export const withRow = (s: BenchSettings, states: readonly (DetectorState | undefined)[], fault: Fault): BenchSettings => ({ ...s, states: s.states.map((x, i) => states[i] ?? x), fault, conductor: null });
 
 /** The lesson of the bench: the resistor at the panel and a short at the detector end, every detector at rest. */
 export function resistorAtPanelShort(s: BenchSettings, t: InputType): BenchSettings {
   const wired = s.scheme === "none" ? withScheme(s, t, t.schemes.find((x) => x !== "none") ?? s.scheme) : s;
-  return { ...wired, placement: "at-panel", fault: "short-detector", states: s.states.map(() => "rest") };
+  return { ...wired, placement: "at-panel", fault: "short-detector", conductor: null, states: s.states.map(() => "rest") };
 }

@@ -6,6 +6,7 @@ import { formatOhms, LIFE_SAFETY_CAUTION } from "@/lib/loop";
 import { LoopSchematic } from "@/components/loop-schematic/loop-schematic";
 import { resistorAtPanelShort, withRow } from "./bench-actions";
 import { CableSummary } from "./cable-summary";
+import { ConductorVerdict } from "./conductor-verdict";
 import { DecodeTable } from "./decode-table";
 import { FindingsList } from "./findings-list";
 import { ReadingPanel } from "./reading-panel";
@@ -25,7 +26,7 @@ function Card({ title, children, testId, className = "" }: { title: string; chil
 
 /** What the loop as wired reads and reports: the schematic, the reading, the verdicts, every state, findings, parts. */
 export function BenchResults({ bench }: { bench: Bench }) {
-  const { s, update, inputType, loop, analysis, states, reading } = bench;
+  const { s, update, inputType, loop, analysis, states, reading, conductor } = bench;
   return (
     <div className="grid min-w-0 content-start gap-4">
       {bench.lifeSafety ? (
@@ -36,10 +37,11 @@ export function BenchResults({ bench }: { bench: Bench }) {
 
       <section className="overflow-x-auto rounded-lg border border-line bg-white p-3 shadow-sm">
         <h2 className="sr-only">The loop as wired</h2>
-        <LoopSchematic loop={loop} states={states} fault={s.fault} inputType={inputType} readingText={reading ? formatOhms(reading.nominalOhms) : "–"} className="w-full" />
+        <LoopSchematic loop={loop} states={states} fault={s.fault} inputType={inputType} readingText={reading ? formatOhms(reading.nominalOhms) : "–"} className="w-full" conductorFault={s.conductor ? (conductor?.fault ?? null) : undefined} />
       </section>
 
-      <ReadingPanel reading={reading} fault={s.fault} placement={s.placement} bands={inputType.bands[s.scheme]} tolerancePct={s.tolerancePct} tempMinC={s.tempMinC} tempMaxC={s.tempMaxC} />
+      <ReadingPanel reading={reading} fault={s.fault} faultWords={conductor && conductor.verdict !== "no-effect" ? conductor.label : undefined} placement={s.placement} bands={inputType.bands[s.scheme]} tolerancePct={s.tolerancePct} tempMinC={s.tempMinC} tempMaxC={s.tempMaxC} />
+      {conductor ? <ConductorVerdict result={conductor} detectors={loop.detectors} /> : null}
 
       {analysis.valid !== false ? <Verdicts faults={analysis.faults} /> : null}
 

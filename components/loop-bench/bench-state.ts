@@ -2,6 +2,7 @@
 // Pure: the bench runs the engine in the browser on every change.
 import type { ContactType, InputType, Report, WiringScheme } from "@/lib/catalog/schema";
 import { analyzeLoop, readingAt, reportsOf, rowLabel, type DetectorState, type Fault, type LoopAnalysis, type LoopSpec, type Placement } from "@/lib/loop";
+import { conductorFaultOf, type ConductorChoice } from "./conductor-choice";
 
 export const MAX_DETECTORS = 4;
 export const MAX_LENGTH_M = 1000;
@@ -26,6 +27,8 @@ export interface BenchSettings {
   /** One per possible detector; only the first detectorCount count. */
   states: DetectorState[];
   fault: Fault;
+  /** A fault on the cable's cores instead of the input-pair fault (which is then "none"). */
+  conductor: ConductorChoice | null;
 }
 
 export { SCHEME_WORDS, PLACEMENT_WORDS } from "@/lib/vocabulary/words";
@@ -70,13 +73,15 @@ export function toLoopSpec(s: BenchSettings): LoopSpec {
   if (s.scheme === "single-eol" || s.scheme === "double-eol" || s.scheme === "shared") loop.eolOhms = s.eolOhms ?? undefined;
   if (s.scheme === "double-eol") loop.alarmOhms = s.alarmOhms ?? undefined;
   if (s.scheme === "shared" && s.sharedOhms[0] !== null && s.sharedOhms[1] !== null) loop.sharedOhms = [s.sharedOhms[0], s.sharedOhms[1]];
+  const cf = conductorFaultOf(s.conductor, loop);
+  if (cf) loop.conductorFaults = [cf];
   return loop;
 }
 
 /** The contact type whose loop reads normal at rest on this input type and scheme (NC unless only NO does). */
 export function defaultContact(t: InputType, scheme: WiringScheme, base: BenchSettings): ContactType {
   for (const contact of ["NC", "NO"] as const) {
-    const a = analyzeLoop(toLoopSpec({ ...base, scheme, contact, placement: "at-detector", states: base.states.map(() => "rest"), fault: "none" }), t);
+    const a = analyzeLoop(toLoopSpec({ ...base, scheme, contact, placement: "at-detector", states: base.states.map(() => "rest"), fault: "none", conductor: null }), t);
     if (a.valid !== false && a.rows[0]?.reports.length === 1 && a.rows[0].reports[0] === "normal") return contact;
   }
   return "NC";
@@ -103,6 +108,7 @@ export function settingsFor(t: InputType, keep?: Partial<BenchSettings>): BenchS
     tempMaxC: keep?.tempMaxC ?? 40,
     states: Array.from({ length: MAX_DETECTORS }, () => "rest" as DetectorState),
     fault: "none",
+    conductor: keep?.conductor ?? null,
   };
   return { ...base, contact: defaultContact(t, scheme, base) };
 }

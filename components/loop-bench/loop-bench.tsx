@@ -3,6 +3,7 @@
 // reads and the panel reports. The engine is pure, so it runs here on every change.
 import type { InputType } from "@/lib/catalog/schema";
 import { BenchResults } from "./bench-results";
+import { ConductorFaultControls } from "./conductor-fault-controls";
 import { FaultFinderPanel } from "./fault-finder-panel";
 import { CableControls, ResistorControls } from "./resistor-cable-controls";
 import { useBench } from "./use-bench";
@@ -16,6 +17,7 @@ export function LoopBench({ inputTypes }: { inputTypes: InputType[] }) {
       <div className="grid content-start gap-4">
         <InputWiringControls bench={bench} inputTypes={inputTypes} />
         <DetectorFaultControls bench={bench} />
+        <ConductorFaultControls bench={bench} />
         <ResistorControls bench={bench} />
         <CableControls bench={bench} />
         <FaultFinderPanel loop={bench.loop} inputType={bench.inputType} />

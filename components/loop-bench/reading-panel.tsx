@@ -28,9 +28,12 @@ export function ReadingPanel({
   tolerancePct,
   tempMinC,
   tempMaxC,
+  faultWords,
 }: {
   reading: CurrentReading | null;
   fault: Fault;
+  /** A conductor fault in force instead of `fault`, in words. */
+  faultWords?: string;
   placement: Placement;
   bands: readonly Band[] | undefined;
   tolerancePct: number;
@@ -45,8 +48,9 @@ export function ReadingPanel({
       </section>
     );
   const { reports, expected } = reading;
-  const defeat = fault !== "none" && reports.includes("normal");
-  const tamperUnseen = fault === "none" && expected === "open" && reports.includes("normal");
+  const faultText = faultWords ?? (fault !== "none" ? FAULT_WORDS[fault] : null);
+  const defeat = faultText !== null && reports.includes("normal");
+  const tamperUnseen = faultText === null && expected === "open" && reports.includes("normal");
   const wrong = reports.filter((r) => !acceptableReport(expected, r));
   const misread = !defeat && !tamperUnseen && wrong.length === reports.length;
   const uncertain = reports.length > 1 && !defeat;
@@ -80,7 +84,7 @@ export function ReadingPanel({
 
       {defeat ? (
         <div role="alert" data-testid="defeat-warning" className="mt-4 rounded-md border border-fault bg-fault-soft p-3 text-sm">
-          <p className="font-semibold text-fault">Defeat: {FAULT_WORDS[fault]} reads as normal.</p>
+          <p className="font-semibold text-fault">Defeat: {faultText} reads as normal.</p>
           <p className="mt-1">
             The panel can&apos;t see this fault: every detector beyond it is silenced and nothing is reported.
             {placement === "at-panel" ? " The resistor sits at the input terminals, so the panel reads it whatever happens on the cable." : ""}
@@ -109,7 +113,7 @@ export function ReadingPanel({
           </p>
         </div>
       ) : null}
-      {reading.row === null ? <p className="mt-3 text-xs text-slate-500">This mix of states is worked out for the bench only; the table lists the combinations the analysis checks.</p> : null}
+      {reading.row === null && faultWords === undefined ? <p className="mt-3 text-xs text-slate-500">This mix of states is worked out for the bench only; the table lists the combinations the analysis checks.</p> : null}
 
       {bands ? (
         <div className="mt-4">

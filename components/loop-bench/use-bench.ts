@@ -2,20 +2,28 @@
 
 import { useMemo, useState } from "react";
 import type { InputType } from "@/lib/catalog/schema";
-import { analyzeLoop, conductorOhmsPerM } from "@/lib/loop";
-import { currentReading, settingsFor, toLoopSpec, type BenchSettings } from "@/components/loop-bench/bench-state";
+import { analyzeLoop, conductorFaultReading, conductorOhmsPerM, type ConductorFaultResult, type DetectorState, type LoopAnalysis, type LoopSpec } from "@/lib/loop";
+import { currentReading, settingsFor, toLoopSpec, type BenchSettings, type CurrentReading } from "@/components/loop-bench/bench-state";
 
 // The bench's settings and everything derived from them; the engine is pure, so it runs on every change.
+
+/** The chosen conductor fault's reading for the current states: its analysed row, or worked out for a mix it doesn't list. */
+function conductorCurrent(result: ConductorFaultResult, loop: LoopSpec, t: InputType, states: readonly DetectorState[]): CurrentReading {
+  const row = result.rows.find((r) => r.states.every((x, i) => x === states[i])) ?? conductorFaultReading(loop, t, result.fault, states);
+  return { minOhms: row.minOhms, maxOhms: row.maxOhms, nominalOhms: row.nominalOhms ?? row.minOhms, reports: row.reports, uncertain: row.uncertain, expected: row.expected, label: row.label ?? result.label, row: null };
+}
 
 export function useBench(inputTypes: InputType[]) {
   const first = inputTypes.find((t) => t.schemes.includes("single-eol")) ?? inputTypes[0];
   const [s, setS] = useState<BenchSettings>(() => settingsFor(first));
   const inputType = inputTypes.find((t) => t.id === s.inputTypeId) ?? first;
   const loop = useMemo(() => toLoopSpec(s), [s]);
-  const analysis = useMemo(() => analyzeLoop(loop, inputType), [loop, inputType]);
+  const analysis: LoopAnalysis = useMemo(() => analyzeLoop(loop, inputType), [loop, inputType]);
   const n = loop.detectors.length;
   const states = s.states.slice(0, n);
-  const reading = analysis.valid === false ? null : currentReading(analysis, loop, inputType, states, s.fault);
+  /** The conductor fault in force, once its cores are chosen. */
+  const conductor = analysis.valid !== false ? (analysis.conductors?.faults[0] ?? null) : null;
+  const reading = analysis.valid === false ? null : conductor ? conductorCurrent(conductor, loop, inputType, states) : currentReading(analysis, loop, inputType, states, s.fault);
 
   /** Change the settings: a patch of fields, or a function of the previous settings. */
   const update = (change: Partial<BenchSettings> | ((prev: BenchSettings) => BenchSettings)) => setS((prev) => (typeof change === "function" ? change(prev) : { ...prev, ...change }));
@@ -33,6 +41,7 @@ export function useBench(inputTypes: InputType[]) {
     analysis,
     states,
     reading,
+    conductor,
     lifeSafety: s.lifeSafety || inputType.lifeSafety,
     gaugeText: s.gauge.unit === "awg" ? `${s.gauge.value} AWG` : `${s.gauge.value} mm²`,
     conductors: loop.placement === "loop-back" && loop.scheme !== "none" ? 4 : 2,

@@ -91,7 +91,7 @@ export function DetectorFaultControls({ bench }: { bench: Bench }) {
         value={s.fault}
         columns={1}
         options={(["none", "short-panel", "short-detector", "cut"] as const).map((f) => ({ value: f, label: FAULT_CHOICES[f] }))}
-        onChange={(fault) => update({ fault })}
+        onChange={(fault) => update({ fault, conductor: null })}
         testId="fault"
       />
     </Section>

@@ -3,8 +3,9 @@
 // Pure and props-driven (the loop bench and the terminal sheet both draw it).
 import { useId } from "react";
 import type { InputType } from "@/lib/catalog/schema";
-import type { DetectorState, Fault, LoopSpec } from "@/lib/loop";
-import { FAULT_WORDS, statesLabel } from "@/lib/loop";
+import type { ConductorFault, DetectorState, Fault, LoopSpec } from "@/lib/loop";
+import { CORE_COLOURS, coresOf, FAULT_WORDS, statesLabel } from "@/lib/loop";
+import { CoreOverlay } from "./core-overlay";
 import { PLACEMENT_WORDS, SCHEME_WORDS } from "@/lib/vocabulary/words";
 import { schematicModel, type ContactEl, type ParallelEl, type ResistorEl, type Rung, type SeriesEl } from "./schematic-model";
 import { ContactH, ContactV, Dot, FAULT, INK, MUTED, ResistorH, ResistorV, WARN } from "./symbols";
@@ -19,6 +20,8 @@ export interface LoopSchematicProps {
   /** Shown at the panel's meter, e.g. "2.32 kΩ". */
   readingText?: string;
   className?: string;
+  /** Draw the cable's cores by colour, with this conductor fault on them (null: the cores, no fault). */
+  conductorFault?: ConductorFault | null;
 }
 
 const W_CONTACT = 90;
@@ -81,7 +84,7 @@ function describe(loop: LoopSpec, states: readonly DetectorState[], fault: Fault
   return `${SCHEME_WORDS[loop.scheme]} loop, ${where}, ${loop.detectors.length} detector${loop.detectors.length > 1 ? "s" : ""} (${statesLabel(loop.detectors, states)}), ${f}; cable ${loop.cable.lengthM} m of ${gaugeText(loop)}.`;
 }
 
-export function LoopSchematic({ loop, states: given, fault = "none", inputType, readingText, className }: LoopSchematicProps) {
+export function LoopSchematic({ loop, states: given, fault = "none", inputType, readingText, className, conductorFault }: LoopSchematicProps) {
   const uid = useId();
   const states = loop.detectors.map((_, i) => given?.[i] ?? "rest");
   const m = schematicModel(loop, states, inputType);
@@ -200,11 +203,13 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
       <text x={PX + CABLE_W / 2} y={midY + 10} textAnchor="middle" fontSize={12} fill={MUTED}>
         {gaugeText(loop)} · {m.conductors} conductors
       </text>
-      {["c1", "c2", "c3", "c4"].slice(0, m.conductors).map((c, i) => (
-        <text key={c} x={PX + 6} y={[yA, yB, yC, yD][i] - 4} fontSize={10} fill={MUTED}>
-          {c}
-        </text>
-      ))}
+      {conductorFault === undefined
+        ? ["c1", "c2", "c3", "c4"].slice(0, m.conductors).map((c, i) => (
+            <text key={c} x={PX + 6} y={[yA, yB, yC, yD][i] - 4} fontSize={10} fill={MUTED}>
+              {c}
+            </text>
+          ))
+        : null}
 
       {/* the loop-back pair: out to the far end and back to the resistor at the panel */}
       {loopBack && lastRung?.kind === "loop-back" ? (
@@ -252,6 +257,11 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
           </g>
         );
       })}
+
+      {/* the cores by colour: yellow out, blue back; on a loop-back cable green returns to the resistor, white goes out to blue */}
+      {conductorFault !== undefined && coresOf(loop) !== "four-core-alarm-tamper" ? (
+        <CoreOverlay cores={CORE_COLOURS[coresOf(loop)].map((colour) => ({ colour, y: { yellow: yA, blue: yB, white: yC, green: yD }[colour] }))} x0={PX} x1={CX} lengthM={loop.cable.lengthM} fault={conductorFault} />
+      ) : null}
 
       {/* injected fault */}
       {shortX !== null ? (

@@ -27,6 +27,8 @@ export const layoutBoardSchema = z.strictObject({
 export type LayoutBoard = z.infer<typeof layoutBoardSchema>;
 
 export const placementSchema = z.enum(["at-detector", "at-panel", "loop-back"]);
+/** NFPA 72 pathway class: "class-a" wires the loop out past every detector and back to the input's return terminals. */
+export const pathwaySchema = z.enum(["class-b", "class-a"]);
 
 const ohms = z.number().positive().finite();
 
@@ -43,6 +45,8 @@ export const layoutInputSchema = z.strictObject({
   eolOhms: ohms.optional(),
   alarmOhms: ohms.optional(),
   sharedOhms: z.tuple([ohms, ohms]).optional(),
+  /** Absent means Class B (the loop ends at the last detector). */
+  pathway: pathwaySchema.optional(),
 });
 export type LayoutInput = z.infer<typeof layoutInputSchema>;
 

@@ -5,8 +5,7 @@
 // feeding terminal. After an open the panel reports the fault, switches the end of the line out and feeds the
 // loop from both ends (common practice, no published source), so each side reads like a line with no end.
 import type { InputType } from "@/lib/catalog/schema";
-import { REPORT_BIT } from "./loop-bands";
-import { compileBands } from "./loop-bands";
+import { acceptableFor, compileBands, REPORT_BIT } from "./loop-bands";
 import { bandRow, type ConductorProblem } from "./conductors";
 import { conductorAt, SCHEME_DOUBLE, STATE_ACTIVE, type LoopModel } from "./loop-model";
 import { Circuit, resistanceBetween } from "./nodal";
@@ -75,13 +74,22 @@ export function analyzeClassA(loop: LoopSpec, inputType: InputType, m: LoopModel
   const opens: ClassAOpen[] = [];
   let every = true;
   const colours: CoreColour[] = ["yellow", "blue"];
+  const restStates: DetectorState[] = new Array(n).fill("rest");
+  const atRest = new Uint8Array(n);
   for (const core of [0, 1] as const)
     for (let s = 0; s <= n; s++) {
       const open = { core, segment: s };
       const label = `the ${colours[core]} core open ${segmentWords(loop, s)}`;
-      const restStates: DetectorState[] = new Array(n).fill("rest");
-      const rest = read(new Uint8Array(n), "panel", open, restStates, `${label} (all at rest)`, "open");
-      if (rest.mask & REPORT_BIT.normal) every = false;
+      const rest = read(atRest, "panel", open, restStates, `${label} (all at rest)`, "open");
+      // The panel must see the open as a fault (open or trouble) to switch to feeding from both ends; an open
+      // that reads as an alarm (an input whose band above normal is "active") is not reported as an open.
+      const openReported = (rest.mask & ~acceptableFor("open")) === 0;
+      if (!openReported) every = false;
+      // A side can only report an alarm when, with every detector at rest, it doesn't already read active:
+      // past the open a side reads ∞, which such an input also calls active, detector or no detector.
+      const quiet = (feed: "out" | "return") => (read(atRest, feed, open, restStates, label, "active").mask & REPORT_BIT.active) === 0;
+      const outQuiet = quiet("out");
+      const backQuiet = quiet("return");
       const devices: ClassAOpen["devices"] = [];
       for (let i = 0; i < n; i++) {
         const st = new Uint8Array(n);
@@ -90,12 +98,12 @@ export function analyzeClassA(loop: LoopSpec, inputType: InputType, m: LoopModel
         const rowLabel = `${label} (${statesLabel(loop.detectors, states)})`;
         const out = read(st, "out", open, states, `${rowLabel}, fed from the out terminals`, "active");
         const back = read(st, "return", open, states, `${rowLabel}, fed from the return terminals`, "active");
-        const side = out.mask === REPORT_BIT.active ? "out" : back.mask === REPORT_BIT.active ? "return" : null;
+        const side = outQuiet && out.mask === REPORT_BIT.active ? "out" : backQuiet && back.mask === REPORT_BIT.active ? "return" : null;
         if (side === null) every = false;
         devices.push({ detector: i, side, reading: side === "return" ? back.row : out.row, reported: side !== null });
       }
       const atM = s < n ? ((s + 0.5) * L) / n : 1.5 * L;
-      opens.push({ core: colours[core], atM, label, rest: rest.row, devices });
+      opens.push({ core: colours[core], atM, label, rest: rest.row, openReported, devices });
     }
   return { everyDeviceReported: every, opens };
 }

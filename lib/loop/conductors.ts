@@ -8,10 +8,10 @@
 import type { InputType, Report } from "@/lib/catalog/schema";
 import type { Finding, FindingTarget } from "@/lib/findings";
 import { acceptableFor, bandIndex, compileBands, marginOf, REPORT_BIT, reportsBetween, type CompiledBands } from "./loop-bands";
-import { conductorAt, encodeStates, enumerateStates, SCHEME_DOUBLE, SCHEME_NONE, SCHEME_SHARED, SCHEME_SINGLE, PLACE_PANEL, STATE_ACTIVE, STATE_TAMPER, type LoopModel } from "./loop-model";
+import { compileLoop, conductorAt, encodeStates, enumerateStates, SCHEME_DOUBLE, SCHEME_NONE, SCHEME_SHARED, SCHEME_SINGLE, PLACE_PANEL, STATE_ACTIVE, STATE_TAMPER, type LoopModel } from "./loop-model";
 import { Circuit, resistanceBetween } from "./nodal";
 import { statesLabel } from "./row-labels";
-import type { CableCores, ConductorAnalysis, ConductorFault, ConductorFaultResult, ConductorReading, ConductorVerdict, CoreColour, LoopPart, LoopSpec } from "./types";
+import type { CableCores, ConductorAnalysis, DetectorState, ConductorFault, ConductorFaultResult, ConductorReading, ConductorVerdict, CoreColour, LoopPart, LoopSpec } from "./types";
 
 /** Core colours per cable (common practice, no published source): alarm pair yellow and blue, second pair green and white. */
 export const CORE_COLOURS: Record<CableCores, CoreColour[]> = {
@@ -333,15 +333,21 @@ export function analyzeConductors(loop: LoopSpec, inputType: InputType, m: LoopM
   const lo = 1 - m.tol;
   const hi = 1 + m.tol;
   const base = combos.map((k) => conductorReading(m, cores, k.code, mid, 1, null));
+  // A core to earth carries no current on a floating loop (no return through earth): the reading is the loop's own.
+  let unfaulted: { lo: number; hi: number }[] | null = null;
   const results: ConductorFaultResult[] = faults.map((f) => {
     const label = conductorFaultLabel(f, loop);
     const expected = expectedOf(f);
     const rows: ConductorReading[] = [];
     let verdict: ConductorVerdict = "detected";
     let unchanged = true;
+    if (f.kind === "earth") unfaulted ??= combos.map((k) => ({ lo: conductorReading(m, cores, k.code, m.tMin, lo, null), hi: conductorReading(m, cores, k.code, m.tMax, hi, null) }));
     combos.forEach((k, i) => {
-      const nominal = conductorReading(m, cores, k.code, mid, 1, f);
-      const { row, mask } = bandRow(cb, k.states, conductorReading(m, cores, k.code, m.tMin, lo, f), conductorReading(m, cores, k.code, m.tMax, hi, f), nominal, expected, `${label} (${k.label})`);
+      const earth = f.kind === "earth" ? unfaulted![i] : null;
+      const nominal = earth ? base[i] : conductorReading(m, cores, k.code, mid, 1, f);
+      const minOhms = earth ? earth.lo : conductorReading(m, cores, k.code, m.tMin, lo, f);
+      const maxOhms = earth ? earth.hi : conductorReading(m, cores, k.code, m.tMax, hi, f);
+      const { row, mask } = bandRow(cb, k.states, minOhms, maxOhms, nominal, expected, `${label} (${k.label})`);
       rows.push(row);
       if (!same(nominal, base[i])) unchanged = false;
       if (mask & REPORT_BIT.normal) verdict = "defeat";
@@ -352,6 +358,16 @@ export function analyzeConductors(loop: LoopSpec, inputType: InputType, m: LoopM
     return { fault: f, label, verdict, rows };
   });
   return { cores, colours: CORE_COLOURS[cores], faults: results };
+}
+
+/** One conductor fault's reading for any mix of detector states (the bench shows mixes the analysis doesn't list). */
+export function conductorFaultReading(loop: LoopSpec, inputType: InputType, fault: ConductorFault, states: readonly DetectorState[]): ConductorReading {
+  const m = compileLoop(loop, inputType);
+  const cores = coresOf(loop);
+  const code = encodeStates(states);
+  const at = (tempC: number, f: number) => conductorReading(m, cores, code, tempC, f, fault);
+  const label = `${conductorFaultLabel(fault, loop)} (${statesLabel(loop.detectors, states)})`;
+  return bandRow(compileBands(inputType.bands[loop.scheme]!), [...states], at(m.tMin, 1 - m.tol), at(m.tMax, 1 + m.tol), at((m.tMin + m.tMax) / 2, 1), expectedOf(fault), label).row;
 }
 
 /** Findings for conductor faults: each defeat, and earth faults nobody watches. */

@@ -2,6 +2,7 @@
 export type * from "./types";
 
 export { analyzeLoop } from "./analyze-loop";
+export { loopSpecKey, LoopAnalysisMemo } from "./loop-key";
 export { readingAt, enumerateStates, FAULTS, type ReadingParams } from "./loop-model";
 export { reportOf, reportsOf } from "./loop-bands";
 export { loopProblems, loopShapeProblems, inputTypeProblems, fittedValues, type LoopProblem } from "./loop-problems";
@@ -9,7 +10,7 @@ export { rowsMatchingReading } from "./meter-reading";
 export { LIFE_SAFETY_CAUTION } from "./loop-findings";
 export { statesLabel, rowLabel, REPORT_WORDS, FAULT_WORDS } from "./row-labels";
 export { loopJsonReplacer, loopJsonReviver } from "./loop-json";
-export { CORE_COLOURS, CABLE_CORES_WORDS, coresOf, conductorFaultLabel, enumerateConductorFaults, positionWords } from "./conductors";
+export { CORE_COLOURS, CABLE_CORES_WORDS, coresOf, conductorFaultLabel, conductorFaultReading, enumerateConductorFaults, positionWords } from "./conductors";
 export { classAProblems } from "./class-a";
 
 export {

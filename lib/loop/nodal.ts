@@ -38,29 +38,47 @@ export function resistanceBetween(c: Circuit, from = 1, to = 0): number {
   const g = find(parent, to);
   if (s === g) return 0;
 
-  // The nodes reachable from the driven terminal through finite resistors.
-  const adj: number[][] = Array.from({ length: n }, () => []);
-  for (let e = 0; e < c.r.length; e++) {
+  // Each finite resistor's end nodes after merging the shorts, once (edges inside one merged node drop out).
+  const m = c.r.length;
+  const ea = new Int32Array(m);
+  const eb = new Int32Array(m);
+  const deg = new Int32Array(n + 1);
+  for (let e = 0; e < m; e++) {
+    ea[e] = eb[e] = -1;
     if (c.r[e] === 0) continue;
     const x = find(parent, c.a[e]);
     const y = find(parent, c.b[e]);
     if (x === y) continue;
-    adj[x].push(e);
-    adj[y].push(e);
+    ea[e] = x;
+    eb[e] = y;
+    deg[x + 1]++;
+    deg[y + 1]++;
   }
+  // Adjacency in one flat array (compressed rows), for the search below.
+  for (let i = 0; i < n; i++) deg[i + 1] += deg[i];
+  const adj = new Int32Array(deg[n]);
+  const fill = deg.slice(0, n);
+  for (let e = 0; e < m; e++)
+    if (ea[e] >= 0) {
+      adj[fill[ea[e]]++] = eb[e];
+      adj[fill[eb[e]]++] = ea[e];
+    }
+  // The nodes reachable from the driven terminal through finite resistors.
   const index = new Int32Array(n).fill(-1);
   const seen = new Uint8Array(n);
-  const stack = [s];
+  const stack = new Int32Array(n);
+  let top = 0;
+  stack[top++] = s;
   seen[s] = 1;
   let k = 0;
-  while (stack.length) {
-    const x = stack.pop()!;
+  while (top > 0) {
+    const x = stack[--top];
     if (x !== g) index[x] = k++;
-    for (const e of adj[x]) {
-      const y = find(parent, c.a[e]) === x ? find(parent, c.b[e]) : find(parent, c.a[e]);
+    for (let q = deg[x]; q < deg[x + 1]; q++) {
+      const y = adj[q];
       if (!seen[y]) {
         seen[y] = 1;
-        stack.push(y);
+        stack[top++] = y;
       }
     }
   }
@@ -69,13 +87,11 @@ export function resistanceBetween(c: Circuit, from = 1, to = 0): number {
   // G v = i, with the return terminal at 0 V.
   const G = new Float64Array(k * k);
   const rhs = new Float64Array(k);
-  for (let e = 0; e < c.r.length; e++) {
-    const ohms = c.r[e];
-    if (ohms === 0) continue;
-    const x = find(parent, c.a[e]);
-    const y = find(parent, c.b[e]);
-    if (x === y || !seen[x]) continue;
-    const gg = 1 / ohms;
+  for (let e = 0; e < m; e++) {
+    const x = ea[e];
+    if (x < 0 || !seen[x]) continue;
+    const y = eb[e];
+    const gg = 1 / c.r[e];
     const ix = index[x];
     const iy = index[y];
     if (ix >= 0) G[ix * k + ix] += gg;

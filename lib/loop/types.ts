@@ -97,6 +97,8 @@ export interface ClassAOpen {
   label: string;
   /** The loop at rest read from the out terminals, as the panel first sees the open. */
   rest: ConductorReading;
+  /** The rest reading is open or trouble, so the panel knows to feed the loop from both ends. */
+  openReported: boolean;
   devices: { detector: number; side: "out" | "return" | null; reading: ConductorReading; reported: boolean }[];
 }
 

@@ -18,12 +18,12 @@ export function attachWiring(analysis: LoopAnalysis, loop: LoopSpec, inputType: 
   if (loop.pathway === "class-a") {
     analysis.classA = analyzeClassA(loop, inputType, m);
     if (!analysis.classA.everyDeviceReported) {
-      const missed = analysis.classA.opens.find((o) => o.rest.reports.includes("normal") || o.devices.some((d) => !d.reported))!;
-      const dev = missed.devices.find((d) => !d.reported);
+      const missed = analysis.classA.opens.find((o) => !o.openReported || o.devices.some((d) => !d.reported))!;
+      const dev = missed.openReported ? missed.devices.find((d) => !d.reported) : undefined;
       analysis.findings.push({
         code: "class-a-device-lost",
         severity: "error",
-        message: dev ? `After ${missed.label}, ${loop.detectors[dev.detector].label} active reads ${dev.reading.reports.join(" or ")} from either end, not active` : `${missed.rest.label} reads as normal`,
+        message: dev ? `After ${missed.label}, ${loop.detectors[dev.detector].label} active reads ${dev.reading.reports.join(" or ")} from either end, not active` : `${missed.rest.label} reads ${missed.rest.reports.join(" or ")}, not as an open or trouble`,
         why: "A Class A loop must keep reporting every device after a single open, fed from both ends; this one loses a device, so it is not Class A.",
         target,
       });

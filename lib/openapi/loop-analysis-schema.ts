@@ -86,6 +86,7 @@ export const classAJsonSchema = z
         atM: z.number().nonnegative().meta({ description: "Metres along the route out and back." }),
         label: z.string(),
         rest: conductorReadingJsonSchema,
+        openReported: z.boolean().meta({ description: "The open reads as open or trouble at rest, so the panel knows to feed from both ends." }),
         devices: z.array(
           z.strictObject({
             detector: z.number().int().nonnegative(),

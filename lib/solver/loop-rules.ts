@@ -1,5 +1,6 @@
 import type { InputType } from "@/lib/catalog/schema";
 import type { Finding, FindingTarget } from "@/lib/findings";
+import { loopSpecKey } from "@/lib/loop/loop-key";
 import type { AnalyzeLoop, Fault, LoopAnalysis, LoopSpec } from "@/lib/loop/types";
 import { inputContentFindings } from "@/lib/solver/capacity-rules";
 import { listNames } from "@/lib/solver/format";
@@ -30,18 +31,16 @@ export function loopSpecFor(ri: Pick<ResolvedInput, "input" | "detectors">, inpu
   if (input.eolOhms !== undefined) spec.eolOhms = input.eolOhms;
   if (input.alarmOhms !== undefined) spec.alarmOhms = input.alarmOhms;
   if (input.sharedOhms !== undefined) spec.sharedOhms = input.sharedOhms;
+  if (input.pathway === "class-a") spec.pathway = "class-a";
   return spec;
 }
 
 /** Text with its length in front, so joined keys cannot run into each other whatever the text holds. */
 const part = (s: string) => `${s.length}:${s}`;
 
-/** Everything the loop analysis depends on, as one string. */
+/** Everything the loop analysis depends on, as one string: the input type and the loop's canonical key. */
 export function loopKey(type: InputType, spec: LoopSpec): string {
-  const g = "awg" in spec.cable.gauge ? `a${spec.cable.gauge.awg}` : `m${spec.cable.gauge.mm2}`;
-  let k = `${part(type.id)}|${spec.scheme}|${spec.placement}|${spec.eolOhms}|${spec.alarmOhms}|${spec.sharedOhms}|${spec.tolerancePct}|${g}|${spec.cable.lengthM}|${spec.cable.tempMinC}|${spec.cable.tempMaxC}|${spec.contactOhms}`;
-  for (const d of spec.detectors) k += `|${part(d.label)}${d.contact}${d.tamper ? 1 : 0}${d.lifeSafety ? 1 : 0}`;
-  return k;
+  return `${part(type.id)}|${loopSpecKey(spec)}`;
 }
 
 /** Everything an input's outcome depends on, given a fixed schedule and catalog. */
@@ -50,7 +49,7 @@ export function inputKey(ri: ResolvedInput): string {
   if (c && sameInput(c, ri)) return c.key;
   const key = buildInputKey(ri);
   const { input } = ri;
-  keyCache.set(input, { key, boardKey: input.boardKey, n: input.input, name: ri.board.name, typeId: ri.board.inputTypeId, scheme: input.scheme, placement: input.placement, eol: input.eolOhms, alarm: input.alarmOhms, shared: input.sharedOhms && [...input.sharedOhms], count: input.detectorIds.length, ids: ri.detectors.map((d) => d.sched.id) });
+  keyCache.set(input, { key, boardKey: input.boardKey, n: input.input, name: ri.board.name, typeId: ri.board.inputTypeId, scheme: input.scheme, placement: input.placement, pathway: input.pathway, eol: input.eolOhms, alarm: input.alarmOhms, shared: input.sharedOhms && [...input.sharedOhms], count: input.detectorIds.length, ids: ri.detectors.map((d) => d.sched.id) });
   return key;
 }
 
@@ -64,6 +63,7 @@ interface KeyEntry {
   typeId: string | null;
   scheme: string;
   placement: string;
+  pathway: string | undefined;
   eol: number | undefined;
   alarm: number | undefined;
   shared: number[] | undefined;
@@ -75,7 +75,7 @@ const keyCache = new WeakMap<object, KeyEntry>();
 function sameInput(c: KeyEntry, ri: ResolvedInput): boolean {
   const { input } = ri;
   if (c.boardKey !== input.boardKey || c.n !== input.input || c.name !== ri.board.name || c.typeId !== ri.board.inputTypeId) return false;
-  if (c.scheme !== input.scheme || c.placement !== input.placement || c.eol !== input.eolOhms || c.alarm !== input.alarmOhms || c.count !== input.detectorIds.length) return false;
+  if (c.scheme !== input.scheme || c.placement !== input.placement || c.pathway !== input.pathway || c.eol !== input.eolOhms || c.alarm !== input.alarmOhms || c.count !== input.detectorIds.length) return false;
   if ((c.shared === undefined) !== (input.sharedOhms === undefined) || (c.shared && (c.shared[0] !== input.sharedOhms![0] || c.shared[1] !== input.sharedOhms![1]))) return false;
   if (c.ids.length !== ri.detectors.length) return false;
   for (let i = 0; i < c.ids.length; i++) if (c.ids[i] !== ri.detectors[i].sched.id) return false;
@@ -84,7 +84,7 @@ function sameInput(c: KeyEntry, ri: ResolvedInput): boolean {
 
 function buildInputKey(ri: ResolvedInput): string {
   const { input } = ri;
-  let k = `${part(input.boardKey)}|${input.input}|${part(ri.board.name)}|${part(ri.board.inputTypeId ?? "")}|${input.scheme}|${input.placement}|${input.eolOhms}|${input.alarmOhms}|${input.sharedOhms}|${input.detectorIds.length}`;
+  let k = `${part(input.boardKey)}|${input.input}|${part(ri.board.name)}|${part(ri.board.inputTypeId ?? "")}|${input.scheme}|${input.placement}|${input.pathway ?? "class-b"}|${input.eolOhms}|${input.alarmOhms}|${input.sharedOhms}|${input.detectorIds.length}`;
   for (const d of ri.detectors) k += `|${part(d.sched.id)}`;
   return k;
 }
@@ -123,7 +123,7 @@ export function inputOutcome(ri: ResolvedInput, analyze: AnalyzeLoop, loopMemo: 
     }
     if (d.sched.cableM > longestCableM) longestCableM = d.sched.cableM;
   }
-  const fig: InputFigures = { boardKey: input.boardKey, input: input.input, detectorIds: ri.detectors.map((d) => d.sched.id), scheme: input.scheme, inputTypeId: ri.board.inputTypeId, longestCableM, loop: null, covered: false };
+  const fig: InputFigures = { boardKey: input.boardKey, input: input.input, detectorIds: ri.detectors.map((d) => d.sched.id), scheme: input.scheme, inputTypeId: ri.board.inputTypeId, pathway: input.pathway ?? "class-b", longestCableM, loop: null, covered: false };
 
   if (input.scheme === "shared")
     for (const d of ri.detectors)
@@ -186,6 +186,7 @@ export function inputOutcome(ri: ResolvedInput, analyze: AnalyzeLoop, loopMemo: 
       else if (f.severity === "warning") warnings++;
     }
     fig.loop = { faults: analysis.faults, maxCableM: analysis.maxCableM, uncertain: analysis.rows.some((row) => row.uncertain), errors, warnings };
+    if (analysis.classA) fig.loop.classAEveryDeviceReported = analysis.classA.everyDeviceReported;
     fig.covered = isCovered(analysis);
     if (input.scheme === "shared") {
       const lost = FAULT_KINDS.filter((f) => analysis.faults[f] !== "detected") as Fault[];

@@ -25,6 +25,8 @@ export interface SuggestOptions {
   busCableM?: number;
   /** Keypads the system needs (default 1 where the panel's family has a keypad in the catalog, else 0). */
   minKeypads?: number;
+  /** NFPA 72 pathway for the inputs of life-safety detectors: "class-a" where the site asks for it (default Class B). */
+  pathway?: "class-b" | "class-a";
   /** Stop after this many hardware candidates (default 200,000). */
   maxCandidates?: number;
 }
@@ -148,13 +150,18 @@ export function suggestHardware(schedule: Schedule, catalog: Catalog, opts: Sugg
   // Which input types take each detector alone, and each candidate pair on a shared input: no errors from the loop engine,
   // and life-safety devices only on input types rated for them.
   const types = catalog.inputTypes;
+  const classA = opts.pathway === "class-a";
+  /** A life-safety detector's input is Class A where the site asks for it; every other input stays Class B. */
+  const pathwayOf = (dets: PlacedDetector[]): Pick<LayoutInput, "pathway"> => (classA && dets.some((d) => isLifeSafety(d.cat)) ? { pathway: "class-a" } : {});
   const accepts = (dets: PlacedDetector[], type: InputType): boolean => {
     const life = dets.some((d) => isLifeSafety(d.cat));
     if (life && (!type.lifeSafety || dets.length > 1)) return false;
     const scheme = dets.length === 2 ? "shared" : defaultScheme(type, dets[0].sched.supervision);
     if (!type.schemes.includes(scheme) || (dets.length === 1 && scheme === "shared")) return false;
-    const input: LayoutInput = { boardKey: PANEL_KEY, input: 1, detectorIds: dets.map((d) => d.sched.id), scheme, placement: "at-detector" };
-    return !analyzeLoop(loopSpecFor({ input, detectors: dets }, type), type).findings.some((f) => f.severity === "error");
+    const input: LayoutInput = { boardKey: PANEL_KEY, input: 1, detectorIds: dets.map((d) => d.sched.id), scheme, placement: "at-detector", ...pathwayOf(dets) };
+    const a = analyzeLoop(loopSpecFor({ input, detectors: dets }, type), type);
+    if (input.pathway === "class-a" && a.classA?.everyDeviceReported !== true) return false;
+    return !a.findings.some((f) => f.severity === "error");
   };
   const classKeys = new Map<string, number>();
   const classAccepts: boolean[][] = [];
@@ -170,7 +177,11 @@ export function suggestHardware(schedule: Schedule, catalog: Catalog, opts: Sugg
     return c;
   };
   const singles: Unit[] = placed.map((d) => ({ dets: [d], area: d.sched.area, room: d.sched.room, cls: classOf([d]) }));
-  for (const u of singles) if (!classAccepts[u.cls].some(Boolean)) return { found: false, reason: `${u.dets[0].sched.label} fits no input type in the catalog (its loop has errors on every one)`, candidatesTried: 0 };
+  for (const u of singles)
+    if (!classAccepts[u.cls].some(Boolean)) {
+      const why = pathwayOf(u.dets).pathway === "class-a" ? "has no input type in the catalog that carries it as a Class A loop (a Class A loop needs normally open contacts and an input that reports every device after a single open)" : "fits no input type in the catalog (its loop has errors on every one)";
+      return { found: false, reason: `${u.dets[0].sched.label} ${why}`, candidatesTried: 0 };
+    }
 
   // Pairs: shareable detectors, within an area first (by room, then cable), then leftovers across areas.
   const pairs: Unit[] = [];
@@ -328,7 +339,7 @@ export function suggestHardware(schedule: Schedule, catalog: Catalog, opts: Sugg
           rest = rest.slice(take.length);
           for (const u of take) {
             const ids = u.dets.map((d) => d.sched.id);
-            inputs.push({ boardKey: fit.key, input: fit.next++, detectorIds: ids, scheme: ids.length === 2 ? "shared" : defaultScheme(type, u.dets[0].sched.supervision), placement: "at-detector" });
+            inputs.push({ boardKey: fit.key, input: fit.next++, detectorIds: ids, scheme: ids.length === 2 ? "shared" : defaultScheme(type, u.dets[0].sched.supervision), placement: "at-detector", ...pathwayOf(u.dets) });
             fit.free--;
           }
         }

@@ -105,12 +105,15 @@ export interface LoopSummary {
   uncertain: boolean;
   errors: number;
   warnings: number;
+  /** Class A inputs only: every device still reports after any single open (NFPA 72 Class A). */
+  classAEveryDeviceReported?: boolean;
 }
 
 export interface InputFigures extends InputRef {
   detectorIds: string[];
   scheme: WiringScheme;
   inputTypeId: string | null;
+  pathway: "class-b" | "class-a";
   longestCableM: number;
   loop: LoopSummary | null;
   /** A short and a cut are both reported as themselves. */

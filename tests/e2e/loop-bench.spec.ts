@@ -102,3 +102,38 @@ test("POST /api/loops/analyze: 422 with a readable path for a negative length, 4
   expect(openapi.paths["/api/loops/analyze"].post.responses).toHaveProperty("422");
   await anonymous.dispose();
 });
+
+test("a four-core loop-back: shorting two chosen cores changes the verdict and the schematic", async ({ page }) => {
+  await page.goto("/loop-bench");
+  await page.getByLabel("Input type", { exact: true }).selectOption({ label: "2.2 kΩ input" });
+  await page.getByRole("radio", { name: "single end-of-line", exact: true }).check();
+  await page.getByRole("radio", { name: "loop-back resistor", exact: true }).check();
+  const schematic = page.getByTestId("loop-schematic");
+  await expect(page.getByTestId("panel-report")).toHaveText("normal");
+  await expect(schematic.locator('[data-part="conductor-fault"]')).toHaveCount(0);
+
+  await page.getByTestId("conductor-kind").getByRole("radio", { name: "short between two cores", exact: true }).check();
+  // the four cores are drawn by colour on the schematic and offered by colour
+  await expect(schematic.locator('[data-part="cores"] [data-core]')).toHaveCount(4);
+  await page.getByTestId("core-green").click();
+  await page.getByTestId("core-white").click();
+  await page.getByTestId("conductor-position").getByRole("radio", { name: "at the detector end", exact: true }).check();
+  // green and white close the loop-back resistor at the detector: a short there bypasses it, a few ohms of cable
+  await expect(page.getByTestId("panel-report")).toHaveText("short");
+  await expect(schematic.locator('[data-part="conductor-fault"]')).toHaveAttribute("data-cores", "green white");
+  await expect(page.getByTestId("conductor-result")).toContainText(/a short between the green and white cores at the detector end/i);
+  // at rest it reads as a short; with the contact open the loop reads open, which this input reports as an alarm
+  await expect(page.getByTestId("conductor-verdict")).toHaveText("mistaken");
+  await shot(page, "cores-green-white");
+
+  // yellow and green at the detector end join the two sides of the contact: the alarm is masked
+  await page.getByTestId("core-white").click();
+  await page.getByTestId("core-yellow").click();
+  await expect(page.getByTestId("core-yellow")).toHaveAttribute("aria-pressed", "true");
+  await page.getByTestId("detector-state-0").getByRole("radio", { name: "active", exact: true }).check();
+  await expect(schematic.locator('[data-part="conductor-fault"]')).toHaveAttribute("data-cores", "green yellow");
+  await expect(page.getByTestId("conductor-verdict")).toHaveText("defeat");
+  await expect(page.getByTestId("panel-report")).toHaveText("normal");
+  await expect(page.getByTestId("defeat-warning")).toContainText("a short between the green and yellow cores at the detector end reads as normal");
+  await shot(page, "cores-yellow-green");
+});
