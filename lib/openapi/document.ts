@@ -254,6 +254,9 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
     put: ["saveLayout", { tag: "layouts", summary: "Save a revision", description: "409 `{ error, currentVersion }` when `version` is stale; 422 on references to hardware or detectors that do not exist.", permission: "layout:write", pathParams: [layoutId], body: "LayoutSave", ok: object("The saved revision with its findings summary."), errors: [409] }],
     delete: ["deleteLayout", { tag: "layouts", summary: "Delete a draft layout and its revisions", description: "409 for a layout with an approved or commissioned revision or commissioning records: archive it instead.", permission: "layout:write", pathParams: [layoutId], ok: object("Deleted."), errors: [409] }],
   },
+  "/api/layouts/{layoutId}/redraft": {
+    post: ["redraftLayout", { tag: "layouts", summary: "Start a new draft revision from the schedule as it is now", description: "For a layout whose schedule changed since approval; detectors deleted from the schedule leave their inputs. 409 without an approved revision.", permission: "layout:write", pathParams: [layoutId], body: "LayoutRestore", ok: object("The new draft with its document and the detectors dropped."), errors: [409] }],
+  },
   "/api/layouts/{layoutId}/archive": {
     post: ["archiveLayout", { tag: "layouts", summary: "Archive a layout or bring it back", description: "An archived layout stays readable (sheet, commissioning record, history) and is not changed.", permission: "layout:write", pathParams: [layoutId], body: "LayoutArchive", ok: object("{ layout }.") }],
   },

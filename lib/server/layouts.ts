@@ -303,6 +303,28 @@ export async function deleteLayout(actor: Actor, layoutId: number): Promise<{ de
   return { deleted: true };
 }
 
+/**
+ * A new draft revision from the current one, re-solved against the live schedule: what the designer does when
+ * the schedule has changed since approval. Detectors deleted from the schedule leave their inputs.
+ */
+export async function redraftFromSchedule(actor: Actor, layoutId: number, expectVersion?: number): Promise<LayoutView & { dropped: string[] }> {
+  ensureCan(actor, "layout:write");
+  const l = await findLayoutWithCurrent(actor, layoutId);
+  assertNotArchived(l);
+  const review = await LayoutReview.findByPk(layoutId, { attributes: ["layoutId", "approvedRevision", "commissionedRevision"] });
+  if (!hasApprovalOf(review)) throw conflict(`“${l.name}” has no approved revision: a draft already reads the live schedule.`, { code: "no-approval" });
+  const [schedule, catalog] = await Promise.all([loadSchedule(l.siteId), catalogFor(actor.organisationId)]);
+  const live = new Set(schedule.map((d) => d.id));
+  const current = layoutDocumentSchema.parse(l.current.document);
+  const dropped = current.inputs.flatMap((i) => i.detectorIds.filter((d) => !live.has(d)));
+  const document: LayoutDocument = { ...current, inputs: current.inputs.map((i) => ({ ...i, detectorIds: i.detectorIds.filter((d) => live.has(d)) })).filter((i) => i.detectorIds.length > 0) };
+  checkReferences(document, schedule, catalog);
+  const summary = solveForSave(document, schedule, catalog);
+  const note = `New draft from the schedule as it is now${dropped.length ? ` (${dropped.length} deleted detector${dropped.length === 1 ? "" : "s"} taken off their inputs)` : ""}`;
+  const { layout } = await writeRevision(actor, l, { expectVersion: expectVersion ?? l.version, document, summary, note, action: "layout.redraft", detail: { from: l.currentRevision, dropped } });
+  return { layout, document, dropped };
+}
+
 /** Archive a layout (it stays readable: its sheet, commissioning record and history), or bring it back. */
 export async function setLayoutArchived(actor: Actor, layoutId: number, archived: boolean): Promise<{ layout: LayoutMeta }> {
   ensureCan(actor, "layout:write");

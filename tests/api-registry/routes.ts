@@ -157,6 +157,16 @@ export const routes: RouteEntry[] = [
   },
   {
     method: "POST",
+    path: "/api/layouts/[layoutId]/redraft",
+    access: "layout:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "POST", url: `/api/layouts/${(await ctx.fixtures.approvedLayout()).layoutId}/redraft`, json: {} }),
+    requiredKeys: [],
+  },
+  {
+    method: "POST",
     path: "/api/layouts/[layoutId]/archive",
     access: "layout:write",
     body: "json",
