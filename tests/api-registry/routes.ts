@@ -409,7 +409,8 @@ export const routes: RouteEntry[] = [
     orgScoped: true,
     build: async (ctx) => {
       const d = await ctx.fixtures.newDetector();
-      return { method: "DELETE", url: `/api/sites/${d.siteId}/schedule`, json: { ids: [d.detectorId] } };
+      // an approved fixture layout may place the new detector: confirm, as the schedule page does after the warning
+      return { method: "DELETE", url: `/api/sites/${d.siteId}/schedule`, json: { ids: [d.detectorId], confirmApproved: true } };
     },
     requiredKeys: ["ids"],
   },
@@ -435,7 +436,7 @@ export const routes: RouteEntry[] = [
     orgScoped: true,
     build: async (ctx) => {
       const d = await ctx.fixtures.newDetector();
-      return { method: "DELETE", url: `/api/sites/${d.siteId}/schedule/${d.detectorId}` };
+      return { method: "DELETE", url: `/api/sites/${d.siteId}/schedule/${d.detectorId}?confirmApproved=1` };
     },
   },
   {
