@@ -27,6 +27,9 @@ export class Layout extends Model<InferAttributes<Layout>, InferCreationAttribut
   declare currentRevision: number;
   declare version: number;
   declare createdBy: number | null;
+  /** Archived layouts stay readable; an approved or commissioned layout is archived, never deleted. */
+  declare archivedAt: CreationOptional<Date | null>;
+  declare archivedBy: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -73,6 +76,8 @@ export function initDesignModels(sequelize: Sequelize) {
       currentRevision: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
       version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
       createdBy: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+      archivedAt: { type: DataTypes.DATE, allowNull: true },
+      archivedBy: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
       ...stamps,
     },
     { sequelize, modelName: "Layout", tableName: "layouts" },

@@ -5,13 +5,15 @@ import { initCatalogModels } from "./catalog";
 
 export { OrganisationCatalog } from "./catalog";
 import { initReviewModels } from "./review";
-export { CommissioningPhoto, CommissioningReading, LayoutComment, LayoutDecision, LayoutReview } from "./review";
+export { CommissioningPhoto, CommissioningReading, LayoutComment, LayoutDecision, LayoutReview, RevisionSnapshot } from "./review";
 import { initDesignModels } from "./design";
 export { Layout, LayoutRevision, ScheduleDetectorRecord } from "./design";
 
 export class Organisation extends Model<InferAttributes<Organisation>, InferCreationAttributes<Organisation>> {
   declare id: CreationOptional<number>;
   declare name: string;
+  /** One person may both send a layout for review and approve it (off by default). */
+  declare allowSoloApproval: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -108,7 +110,7 @@ const stamps = { createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE } as const
  * modelName is explicit: the production build minifies class names, and Sequelize would otherwise name models after them.
  */
 export function initModels(sequelize: Sequelize) {
-  Organisation.init({ id, name: { type: DataTypes.STRING(200), allowNull: false }, ...stamps }, { sequelize, modelName: "Organisation", tableName: "organisations" });
+  Organisation.init({ id, name: { type: DataTypes.STRING(200), allowNull: false }, allowSoloApproval: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false }, ...stamps }, { sequelize, modelName: "Organisation", tableName: "organisations" });
   User.init(
     { id, email: { type: DataTypes.STRING(254), allowNull: false, unique: true }, name: { type: DataTypes.STRING(200), allowNull: false }, passwordHash: { type: DataTypes.STRING(100), allowNull: true }, sessionVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 }, ...stamps },
     { sequelize, modelName: "User", tableName: "users" },

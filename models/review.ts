@@ -14,7 +14,21 @@ export class LayoutReview extends Model<InferAttributes<LayoutReview>, InferCrea
   declare approvedAt: Date | null;
   declare commissionedBy: number | null;
   declare commissionedAt: Date | null;
+  /** Approved without a second review (the organisation allows one person to submit and approve). */
+  declare approvedSolo: CreationOptional<boolean>;
   declare updatedAt: CreationOptional<Date>;
+}
+
+/** The schedule and catalog a revision was solved against, frozen when it was sent for review (schema: migrations/20261203-0301-frozen-approval.ts). */
+export class RevisionSnapshot extends Model<InferAttributes<RevisionSnapshot>, InferCreationAttributes<RevisionSnapshot>> {
+  declare layoutId: number;
+  declare revision: number;
+  declare schedule: unknown;
+  declare catalog: unknown;
+  declare catalogVersion: number | null;
+  declare catalogSha256: string;
+  declare takenAt: Date;
+  declare takenBy: number | null;
 }
 
 export class LayoutComment extends Model<InferAttributes<LayoutComment>, InferCreationAttributes<LayoutComment>> {
@@ -89,6 +103,7 @@ export function initReviewModels(sequelize: Sequelize) {
       approvedAt: { type: DataTypes.DATE, allowNull: true },
       commissionedBy: userRef(),
       commissionedAt: { type: DataTypes.DATE, allowNull: true },
+      approvedSolo: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
       updatedAt: DataTypes.DATE,
     },
     { sequelize, modelName: "LayoutReview", tableName: "layout_reviews", createdAt: false },
@@ -146,7 +161,21 @@ export function initReviewModels(sequelize: Sequelize) {
     },
     { sequelize, modelName: "CommissioningPhoto", tableName: "commissioning_photos", updatedAt: false },
   );
-  const { User } = sequelize.models;
+  RevisionSnapshot.init(
+    {
+      layoutId: { ...ref(), primaryKey: true },
+      revision: { ...ref(), primaryKey: true },
+      schedule: { type: DataTypes.JSON, allowNull: false },
+      catalog: { type: DataTypes.JSON, allowNull: false },
+      catalogVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+      catalogSha256: { type: DataTypes.CHAR(64), allowNull: false },
+      takenAt: { type: DataTypes.DATE, allowNull: false },
+      takenBy: userRef(),
+    },
+    { sequelize, modelName: "RevisionSnapshot", tableName: "layout_revision_snapshots", timestamps: false },
+  );
+  const { User, Layout } = sequelize.models;
+  Layout.hasOne(LayoutReview, { foreignKey: "layoutId", as: "reviewRecord" });
   LayoutComment.belongsTo(User, { foreignKey: "authorId", as: "author" });
   LayoutDecision.belongsTo(User, { foreignKey: "decidedBy", as: "decider" });
   CommissioningReading.belongsTo(User, { foreignKey: "recordedBy", as: "recorder" });

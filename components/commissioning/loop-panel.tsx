@@ -1,15 +1,16 @@
 "use client";
 
 import { useMemo } from "react";
-import { diagnoseLoopOf, diagnoseReading, type UsualValue } from "@/lib/commissioning/diagnose";
+import { diagnoseLoopOf, diagnoseReading, type MeasuredReading, type UsualValue } from "@/lib/commissioning/diagnose";
 import type { LoopProgress } from "@/lib/commissioning/progress";
 import { parseMeterReading } from "@/lib/commissioning/reading-schema";
 import type { PhotoView } from "@/lib/server/commissioning";
-import type { SheetInput } from "@/lib/sheet/sheet-types";
+import type { SheetInput, TestKey } from "@/lib/sheet/sheet-types";
 import type { QueuedReading } from "@/components/commissioning/reading-queue";
 import { LoopFacts } from "@/components/commissioning/loop-facts";
 import { PhotoBox } from "@/components/commissioning/photo-box";
 import { TestCard } from "@/components/commissioning/test-card";
+import { LoopHistory } from "@/components/commissioning/loop-history";
 
 interface LoopPanelProps {
   layoutId: number;
@@ -32,6 +33,8 @@ const NAV_BUTTON = "min-h-12 rounded-md border border-line bg-white px-3 font-me
 /** One loop open: its facts, a card per test on the sheet, its photos. */
 export function LoopPanel({ layoutId, row, progress, usualValues, waiting, photos, canRecord, onRecord, onPhoto, onBack, onPrev, onNext }: LoopPanelProps) {
   const loop = useMemo(() => diagnoseLoopOf(row), [row]);
+  // The same lib/commissioning code the server judges with, run here: the phone needs no signal for it.
+  const judge = (test: TestKey, r: MeasuredReading) => (row.expected.some((e) => e.test === test) ? diagnoseReading(loop, test, r, { usualValues }) : null);
   return (
     <section aria-label={`Input ${row.input}`} data-testid="loop-panel" className="flex flex-col gap-3">
       <div className="flex items-center justify-between gap-2">
@@ -60,6 +63,7 @@ export function LoopPanel({ layoutId, row, progress, usualValues, waiting, photo
               const r = parseMeterReading(text);
               return r ? diagnoseReading(loop, e.test, r, { usualValues }) : null;
             }}
+            judge={(r) => judge(e.test, r)}
             latest={tests?.latest ?? null}
             earlier={tests?.earlier ?? []}
             waiting={waiting.filter((w) => w.test === e.test).length}
@@ -68,6 +72,8 @@ export function LoopPanel({ layoutId, row, progress, usualValues, waiting, photo
           />
         );
       })}
+
+      <LoopHistory progress={progress} waiting={waiting} judge={judge} />
 
       <PhotoBox layoutId={layoutId} row={row} photos={photos} canRecord={canRecord} onPhoto={onPhoto} />
     </section>

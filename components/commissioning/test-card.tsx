@@ -1,16 +1,20 @@
 "use client";
 
 import { useState } from "react";
-import type { ReadingVerdict } from "@/lib/commissioning/diagnose";
+import { adviceOf } from "@/lib/commissioning/advice";
+import type { MeasuredReading, ReadingVerdict } from "@/lib/commissioning/diagnose";
 import type { RecordedReading } from "@/lib/commissioning/progress";
 import { formatOhms } from "@/lib/resistors/format-ohms";
 import type { ExpectedReading } from "@/lib/sheet/sheet-types";
 import { TEST_WORDS } from "@/components/sheet/test-words";
 import { VerdictView } from "@/components/commissioning/verdict-view";
+import { ReadingAdviceView } from "@/components/commissioning/reading-advice";
 
 interface TestCardProps {
   expected: ExpectedReading;
   verdictOf: (text: string) => ReadingVerdict | null;
+  /** The verdict of a stored reading, worked out here from the same sheet row. */
+  judge: (r: MeasuredReading) => ReadingVerdict | null;
   latest: RecordedReading | null;
   earlier: RecordedReading[];
   /** How many readings of this test are kept on the device, not sent yet. */
@@ -22,9 +26,12 @@ interface TestCardProps {
 const readingText = (r: RecordedReading) => (r.reading.kind === "open" ? "open (OL)" : formatOhms(r.reading.ohms));
 
 /** One test of a loop: the expected range, the saved readings, and a field judged as it is typed. */
-export function TestCard({ expected, verdictOf, latest, earlier, waiting, canRecord, onRecord }: TestCardProps) {
+export function TestCard({ expected, verdictOf, judge, latest, earlier, waiting, canRecord, onRecord }: TestCardProps) {
   const [text, setText] = useState("");
   const [busy, setBusy] = useState(false);
+  // The reading just recorded on this phone: its advice stays on screen once the field is cleared, signal or not.
+  const [recorded, setRecorded] = useState<ReadingVerdict | null>(null);
+  const after = recorded ?? (latest ? judge(latest.reading) : null);
   const v = text.trim() ? verdictOf(text) : null;
   const id = `reading-${expected.test}`;
   const save = async () => {
@@ -32,6 +39,7 @@ export function TestCard({ expected, verdictOf, latest, earlier, waiting, canRec
     setBusy(true);
     try {
       await onRecord(text);
+      setRecorded(v);
       setText("");
     } finally {
       setBusy(false);
@@ -95,6 +103,7 @@ export function TestCard({ expected, verdictOf, latest, earlier, waiting, canRec
         </p>
       ) : null}
       {v ? <VerdictView v={v} testId={`verdict-${expected.test}`} /> : null}
+      {!v && after ? <ReadingAdviceView advice={adviceOf(after)} testId={`advice-${expected.test}`} title={recorded ? "Reading recorded" : "Latest reading"} /> : null}
     </div>
   );
 }

@@ -1,6 +1,5 @@
 "use client";
 
-import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import type { LayoutMeta, LayoutView, SuggestionView } from "@/lib/server/layouts";
@@ -9,6 +8,7 @@ import { useLayouts } from "@/lib/client/use-layouts";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { Field } from "@/components/ui/field";
+import { LayoutCard } from "@/components/editor/layout-card";
 
 interface PanelChoice {
   id: string;
@@ -103,8 +103,18 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
     }
   }
 
+  async function archive(l: LayoutMeta, archived: boolean) {
+    try {
+      await sendJson(`/api/layouts/${l.id}/archive`, "POST", { archived });
+      setMessage({ kind: "ok", text: archived ? `Layout "${l.name}" archived: it stays readable, with its sheet and commissioning record.` : `Layout "${l.name}" is back from the archive.` });
+      await mutate();
+    } catch (e) {
+      setMessage({ kind: "error", text: describeError(e) });
+    }
+  }
+
+  /** Called once the card's confirmation naming the layout was accepted. */
   async function remove(l: LayoutMeta) {
-    if (!window.confirm(`Delete the layout "${l.name}" and its ${l.currentRevision} revision${l.currentRevision === 1 ? "" : "s"}?`)) return;
     try {
       await sendJson(`/api/layouts/${l.id}`, "DELETE");
       setMessage({ kind: "ok", text: `Layout "${l.name}" deleted.` });
@@ -127,28 +137,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
         <ul className="grid gap-3 md:grid-cols-2" data-testid="layout-list">
           {layouts.map((l) => (
             <li key={l.id}>
-              <Card className="flex h-full flex-col gap-1">
-                <div className="flex items-baseline justify-between gap-2">
-                  <Link href={`/sites/${siteId}/layouts/${l.id}`} className="font-semibold text-signal hover:underline">
-                    {l.name}
-                  </Link>
-                  <span className="rounded bg-slate-100 px-1.5 text-xs uppercase tracking-wide">{l.status}</span>
-                </div>
-                <p className="text-xs text-slate-600">
-                  revision {l.currentRevision} · saved {new Date(l.updatedAt).toLocaleString()}
-                </p>
-                <p className="text-sm">
-                  <Counts c={l.summary.counts} />
-                </p>
-                <p className="text-xs text-slate-600">
-                  {l.summary.detectorsPlaced} detectors placed, {l.summary.unplaced} unplaced · {l.summary.inputsUsed} of {l.summary.inputsTotal} inputs · {l.summary.boards} boards
-                </p>
-                {canWrite ? (
-                  <button type="button" className="mt-auto self-end text-xs text-fault hover:underline" onClick={() => remove(l)}>
-                    Delete
-                  </button>
-                ) : null}
-              </Card>
+              <LayoutCard siteId={siteId} layout={l} canWrite={canWrite} onDelete={remove} onArchive={archive} />
             </li>
           ))}
         </ul>

@@ -93,6 +93,11 @@ export function ReviewPanel({ initial, summary, boards, canComment, lifeSafety }
             Revision {view.review.currentRevision} is <strong>{REVIEW_STATE_WORDS[view.review.state]}</strong>.
             {view.review.approvedRevision !== null ? ` Approved revision ${view.review.approvedRevision} is frozen: it is the one the terminal sheet and commissioning use; changes make a new draft.` : " No revision is approved yet: the terminal sheet is for review only."}
           </p>
+          {view.review.approvedSolo ? (
+            <p className="mt-2 rounded-md border border-fault bg-fault-soft p-2 text-sm font-semibold" data-testid="solo-approval">
+              Revision {view.review.approvedRevision} was approved without a second review: the person who approved it also sent or made it.
+            </p>
+          ) : null}
           {view.review.note ? (
             <p className="mt-2 rounded-md border border-warn bg-warn-soft p-2 text-sm" role="note" data-testid="review-note">
               {view.review.note}

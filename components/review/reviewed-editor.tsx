@@ -5,6 +5,8 @@ import { useState } from "react";
 import type { EffectiveReview } from "@/lib/review/effective-state";
 import { LayoutEditor, type LayoutEditorProps } from "@/components/editor/layout-editor";
 import { LayoutTabs } from "@/components/review/layout-tabs";
+import { ScheduleDriftNotice } from "@/components/review/schedule-drift-notice";
+import type { ApprovedDrift } from "@/lib/server/schedule-drift";
 
 /** The frozen-revision words the editor shows when the current revision is approved or commissioned. */
 export function frozenReason(review: EffectiveReview): string | null {
@@ -18,7 +20,7 @@ export function frozenReason(review: EffectiveReview): string | null {
  * The layout editor under the review rules: read-only while in review, and read-only on an approved (or
  * commissioned) revision until the designer chooses to start a new draft, which the next save makes.
  */
-export function ReviewedEditor({ review, editor }: { review: EffectiveReview; editor: LayoutEditorProps }) {
+export function ReviewedEditor({ review, editor, drift = null }: { review: EffectiveReview; editor: LayoutEditorProps; drift?: ApprovedDrift | null }) {
   const [newDraft, setNewDraft] = useState(false);
   const frozen = review.state === "approved" || review.state === "commissioned";
   const locked = review.state === "in-review" || (frozen && !newDraft);
@@ -46,6 +48,7 @@ export function ReviewedEditor({ review, editor }: { review: EffectiveReview; ed
           )}
         </div>
       ) : null}
+      {drift ? <ScheduleDriftNotice drift={drift} version={editor.layout.version} canWrite={editor.canWrite && review.state !== "in-review"} /> : null}
       {review.state === "in-review" ? (
         <p className="no-print mb-3 rounded-md border border-warn bg-warn-soft p-3 text-sm">
           Revision {review.currentRevision} is in review.{" "}

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import type { BulkEditPatch, ScheduleDetector } from "@/lib/schedule/schema";
-import { describeError, sendJson } from "@/lib/client/fetcher";
+import { describeError, FetchError, sendJson } from "@/lib/client/fetcher";
 import { useSchedule } from "@/lib/client/use-schedule";
 
 // The device schedule as read through its SWR hook, and every change to it: each one says what it did (or
@@ -38,9 +38,17 @@ export function useScheduleEdits(siteId: number, initial: ScheduleDetector[]) {
     patchMany: (ids: string[], patch: BulkEditPatch["patch"]) => run(async () => (await sendJson(url, "PATCH", { ids, patch }), `${ids.length} detectors changed.`)),
     deleteMany: (ids: string[], then: () => void) =>
       run(async () => {
-        const r = await sendJson<{ deleted: number }>(url, "DELETE", { ids });
+        let r: { deleted: number; approvedLayouts: { name: string }[] };
+        try {
+          r = await sendJson(url, "DELETE", { ids });
+        } catch (e) {
+          // Detectors on an approved layout: the server says which and that nothing approved changes; ask once more.
+          if (!(e instanceof FetchError && e.status === 409 && e.body.code === "used-by-approved") || !window.confirm(`${e.message}\n\nDelete anyway?`)) throw e;
+          r = await sendJson(url, "DELETE", { ids, confirmApproved: true });
+        }
         then();
-        return `${r.deleted} detectors deleted.`;
+        const kept = r.approvedLayouts.length ? ` The approved layouts (${r.approvedLayouts.map((u) => u.name).join(", ")}) keep them as approved.` : "";
+        return `${r.deleted} detectors deleted.${kept}`;
       }),
     /** After a CSV import (it has its own preview and confirm requests). */
     imported: (n: number) => {

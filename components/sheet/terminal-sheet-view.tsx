@@ -22,15 +22,23 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal }: Ter
   const [size, setSize] = useState<PaperSize>("A4");
   const [sending, setSending] = useState(false);
   const [sent, setSent] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
+  // An unapproved sheet is sent only after the sender says so: the e-mail and every PDF page are marked.
+  const [confirming, setConfirming] = useState(false);
   const { sheet, meta } = view;
   const rev = `revision=${meta.revision}`;
   const pdf = (s: PaperSize) => `/api/layouts/${view.layoutId}/sheet/pdf?size=${s}&${rev}`;
 
-  async function send() {
+  async function send(confirmUnapproved = false) {
+    if (!view.approved && !confirmUnapproved) {
+      setConfirming(true);
+      return;
+    }
+    setConfirming(false);
     setSending(true);
     setSent(null);
     try {
-      const r = await sendJson<{ sent: { to: string; installer: string; fileName: string; sizeBytes: number } }>(`/api/layouts/${view.layoutId}/sheet/send`, "POST", sendSheetSchema.parse({ size }));
+      const body = sendSheetSchema.parse({ size, ...(view.approved ? {} : { confirmUnapproved: true }) });
+      const r = await sendJson<{ sent: { to: string; installer: string; fileName: string; sizeBytes: number } }>(`/api/layouts/${view.layoutId}/sheet/send`, "POST", body);
       setSent({ kind: "ok", text: `Sent to ${r.sent.installer} <${r.sent.to}> with ${r.sent.fileName} (${Math.max(1, Math.round(r.sent.sizeBytes / 1024))} KiB, ${PAPER_WORDS[size]}).` });
     } catch (e) {
       setSent({ kind: "error", text: e instanceof FetchError && e.unreachable ? "The server could not be reached; nothing was sent." : describeError(e) });
@@ -76,11 +84,25 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal }: Ter
           Bill of materials (CSV)
         </a>
         <div className="ml-auto flex flex-col items-end gap-1">
-          <Button onClick={send} disabled={!canSend || !installer || sending} data-testid="send-sheet" title={!canSend ? sendRefusal : !installer ? "Assign an installer to the site first." : undefined}>
+          <Button onClick={() => void send()} disabled={!canSend || !installer || sending} data-testid="send-sheet" title={!canSend ? sendRefusal : !installer ? "Assign an installer to the site first." : undefined}>
             {sending ? "Sending…" : `E-mail to the site's installer${installer ? ` (${installer.name})` : ""}`}
           </Button>
           {!canSend ? <span className="max-w-sm text-right text-xs text-slate-600">{sendRefusal}</span> : !installer ? <span className="text-xs text-slate-600">The site has no installer assigned.</span> : null}
         </div>
+        {confirming ? (
+          <div role="alertdialog" aria-label="Send an unapproved sheet?" data-testid="send-confirm" className="basis-full rounded-md border-2 border-fault bg-fault-soft p-3 text-sm">
+            <p className="font-semibold text-fault">Revision {meta.revision} is not approved.</p>
+            <p>The e-mail will say it is not approved and every page of the PDF carries “NOT APPROVED — FOR REVIEW ONLY”: the installer must not wire to it. Send it for review anyway?</p>
+            <div className="mt-2 flex gap-2">
+              <Button onClick={() => void send(true)} data-testid="send-confirm-yes">
+                Send it, marked not approved
+              </Button>
+              <Button variant="secondary" onClick={() => setConfirming(false)}>
+                Cancel
+              </Button>
+            </div>
+          </div>
+        ) : null}
         {sent ? (
           <p aria-live="polite" data-testid="send-message" className={`basis-full text-sm ${sent.kind === "error" ? "font-medium text-fault" : "text-signal"}`}>
             {sent.text}
@@ -96,6 +118,8 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal }: Ter
         {view.approved ? (
           <p className="mt-1 text-sm font-semibold text-signal" data-testid="sheet-approval">
             Approved revision {meta.revision}: wire to this sheet.
+            {meta.approvedSolo ? <span className="ml-1 text-fault" data-testid="solo-approval">Approved without a second review.</span> : null}
+            {view.frozen ? <span className="ml-1 font-normal text-slate-700">Read from the schedule and catalog frozen at approval.</span> : null}
           </p>
         ) : (
           <p className="mt-2 rounded-md border-2 border-fault bg-fault-soft px-3 py-2 text-base font-bold uppercase tracking-wide text-fault" data-testid="sheet-approval">

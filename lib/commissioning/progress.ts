@@ -1,5 +1,6 @@
 import type { ExpectedReading, SheetInput, TerminalSheet, TestKey } from "@/lib/sheet/sheet-types";
 import type { MeasuredReading } from "@/lib/commissioning/diagnose";
+import type { ReadingAdvice } from "@/lib/commissioning/advice";
 
 // Where commissioning stands: per loop, the latest reading of each test on the terminal sheet and whether it passed.
 // A loop has passed when every test on its sheet has a latest reading that passed.
@@ -14,6 +15,8 @@ export interface RecordedReading {
   recordedBy: string | null;
   /** ISO time; later readings of the same test replace earlier ones. */
   recordedAt: string;
+  /** The verdict, likely cause and next check, as the phone showed them (filled in for the commissioning record). */
+  advice?: ReadingAdvice;
 }
 
 export type LoopStatus = "untested" | "incomplete" | "failed" | "passed" | "cannot-test";

@@ -15,6 +15,8 @@ export interface CompareCandidate {
   id?: number | string;
   name: string;
   layout: LayoutDocument;
+  /** An approved revision is compared against the schedule and catalog frozen with it, not the shared ones. */
+  frozen?: { schedule: Schedule; catalog: Catalog };
 }
 
 export interface SupplyColumn {
@@ -88,10 +90,11 @@ function tradeoffText(where: string, detectors: string[], lost: string[]): strin
 }
 
 export function compareLayouts(candidates: readonly CompareCandidate[], schedule: Schedule, catalog: Catalog): LayoutComparison {
-  const solver = createSolver(schedule, catalog);
+  const shared = createSolver(schedule, catalog);
   const columns: ComparisonColumn[] = candidates.map((c) => {
-    const r = solver.solve(c.layout);
-    const bom = billOfMaterials(c.layout, schedule, catalog, r);
+    const own = c.frozen ?? { schedule, catalog };
+    const r = (c.frozen ? createSolver(own.schedule, own.catalog) : shared).solve(c.layout);
+    const bom = billOfMaterials(c.layout, own.schedule, own.catalog, r);
     const names = boardNames(c.layout);
     return {
       id: c.id ?? null,
@@ -111,7 +114,7 @@ export function compareLayouts(candidates: readonly CompareCandidate[], schedule
       findingList: r.findings.map((f) => ({ severity: f.severity, message: f.message })).sort((a, b) => severityRank[a.severity] - severityRank[b.severity]),
       shared: r.shared.entries.map((e) => {
         const where = `${names.get(e.boardKey) ?? e.boardKey}, input ${e.input}`;
-        const labels = e.detectorIds.map((id) => schedule.find((d) => d.id === id)?.label ?? id);
+        const labels = e.detectorIds.map((id) => own.schedule.find((d) => d.id === id)?.label ?? id);
         return { boardKey: e.boardKey, input: e.input, detectors: labels, inputsSaved: 1, lost: [...e.lost], text: tradeoffText(where, labels, e.lost) };
       }),
       bom,
@@ -134,9 +137,12 @@ export function compareLayouts(candidates: readonly CompareCandidate[], schedule
     summary.push(`${c.name}: ${c.inputs.used} of ${c.inputs.total} inputs used, ${c.inputs.spare} spare; supervision coverage ${pct(c.coverage.share)}; ${c.findings.error} error${c.findings.error === 1 ? "" : "s"}, ${c.findings.warning} warning${c.findings.warning === 1 ? "" : "s"}.`);
     if (c.shared.length) summary.push(`${c.name} saves ${c.shared.length} input${c.shared.length === 1 ? "" : "s"} by sharing: ${c.shared.map((s) => s.text).join(" ")}`);
   }
-  const lifeSafety = schedule.some((d) => {
-    const c = catalog.detectors.find((x) => x.id === d.catalogId);
-    return !!c && isLifeSafety(c);
-  });
+  const inputs = [{ schedule, catalog }, ...candidates.flatMap((c) => (c.frozen ? [c.frozen] : []))];
+  const lifeSafety = inputs.some((x) =>
+    x.schedule.some((d) => {
+      const c = x.catalog.detectors.find((e) => e.id === d.catalogId);
+      return !!c && isLifeSafety(c);
+    }),
+  );
   return { columns, best, summary, lifeSafety };
 }

@@ -28,3 +28,7 @@ export const suggestRequestSchema = z
   .strictObject({ busCableM: z.number().nonnegative().max(100000).optional(), power: layoutPowerSchema.optional() })
   .optional();
 export type SuggestRequest = z.infer<typeof suggestRequestSchema>;
+
+/** Archive a layout, or bring an archived one back. */
+export const archiveLayoutSchema = z.strictObject({ archived: z.boolean("say whether the layout is archived (true) or restored (false)") });
+export type ArchiveLayoutInput = z.infer<typeof archiveLayoutSchema>;

@@ -8,7 +8,7 @@ import { acceptSchema, inviteSchema, roleChangeSchema } from "@/lib/members/memb
 import { roles } from "@/lib/auth/permissions";
 import { layoutDocumentSchema } from "@/lib/layout/schema";
 import { bulkEditPatchSchema, createDetectorFormSchema, updateDetectorFormSchema } from "@/lib/schedule/schema";
-import { createLayoutSchema, restoreSchema, saveLayoutSchema, suggestRequestSchema } from "@/lib/layout/layout-request-schema";
+import { archiveLayoutSchema, createLayoutSchema, restoreSchema, saveLayoutSchema, suggestRequestSchema } from "@/lib/layout/layout-request-schema";
 import { deleteDetectorsSchema, importRequestSchema } from "@/lib/schedule/schedule-request-schema";
 import { catalogUploadFormSchema, MAX_UPLOAD_BYTES, uploadFileFieldSchema } from "@/lib/catalog/upload-schema";
 import { chooseLayoutSchema, commentSchema, reviewActionSchema } from "@/lib/review/review-schema";
@@ -96,6 +96,7 @@ export const namedSchemas: Record<string, z.ZodType> = {
   ReviewStep: reviewActionSchema,
   LayoutChoice: chooseLayoutSchema,
   SheetSend: sendSheetSchema,
+  LayoutArchive: archiveLayoutSchema,
   ReadingRecord: recordReadingSchema,
 };
 

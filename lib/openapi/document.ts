@@ -252,7 +252,13 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
   "/api/layouts/{layoutId}": {
     get: ["getLayout", { tag: "layouts", summary: "The layout and its current revision's document", permission: "layout:read", pathParams: [layoutId], ok: object("The layout with its document (see LayoutDocument).") }],
     put: ["saveLayout", { tag: "layouts", summary: "Save a revision", description: "409 `{ error, currentVersion }` when `version` is stale; 422 on references to hardware or detectors that do not exist.", permission: "layout:write", pathParams: [layoutId], body: "LayoutSave", ok: object("The saved revision with its findings summary."), errors: [409] }],
-    delete: ["deleteLayout", { tag: "layouts", summary: "Delete the layout and its revisions", permission: "layout:write", pathParams: [layoutId], ok: object("Deleted.") }],
+    delete: ["deleteLayout", { tag: "layouts", summary: "Delete a draft layout and its revisions", description: "409 for a layout with an approved or commissioned revision or commissioning records: archive it instead.", permission: "layout:write", pathParams: [layoutId], ok: object("Deleted."), errors: [409] }],
+  },
+  "/api/layouts/{layoutId}/redraft": {
+    post: ["redraftLayout", { tag: "layouts", summary: "Start a new draft revision from the schedule as it is now", description: "For a layout whose schedule changed since approval; detectors deleted from the schedule leave their inputs. 409 without an approved revision.", permission: "layout:write", pathParams: [layoutId], body: "LayoutRestore", ok: object("The new draft with its document and the detectors dropped."), errors: [409] }],
+  },
+  "/api/layouts/{layoutId}/archive": {
+    post: ["archiveLayout", { tag: "layouts", summary: "Archive a layout or bring it back", description: "An archived layout stays readable (sheet, commissioning record, history) and is not changed.", permission: "layout:write", pathParams: [layoutId], body: "LayoutArchive", ok: object("{ layout }.") }],
   },
   "/api/layouts/{layoutId}/revisions": {
     get: ["listRevisions", { tag: "layouts", summary: "Every revision, newest first, with who saved it and its findings summary", permission: "layout:read", pathParams: [layoutId], ok: object("{ revisions }.") }],
@@ -278,7 +284,7 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
     get: ["getSheetPdf", { tag: "sheets", summary: "The terminal sheet as a PDF", permission: "sheet:read", pathParams: [layoutId], query: [sizeQuery, revisionQuery], ok: pdf("The terminal sheet.") }],
   },
   "/api/layouts/{layoutId}/sheet/send": {
-    post: ["sendSheet", { tag: "sheets", summary: "E-mail the terminal sheet PDF to the site's assigned installer", description: "409 when the site has no installer.", permission: "sheet:send", pathParams: [layoutId], body: "SheetSend", ok: object("{ sent }."), errors: [409] }],
+    post: ["sendSheet", { tag: "sheets", summary: "E-mail the terminal sheet PDF to the site's assigned installer", description: "409 when the site has no installer, or when the revision is not approved and `confirmUnapproved` is not true (the e-mail and every PDF page then say NOT APPROVED — FOR REVIEW ONLY).", permission: "sheet:send", pathParams: [layoutId], body: "SheetSend", ok: object("{ sent }."), errors: [409] }],
   },
   "/api/layouts/{layoutId}/commissioning": {
     get: ["getCommissioning", { tag: "commissioning", summary: "Progress per loop on the approved revision, the readings and the photos", description: 'Open readings are sent as "Infinity".', permission: "sheet:read", pathParams: [layoutId], ok: object("The commissioning record so far.") }],

@@ -9,6 +9,8 @@ export interface StoredReview {
   revision: number;
   approvedRevision: number | null;
   commissionedRevision: number | null;
+  /** The approved revision was approved without a second review. */
+  approvedSolo?: boolean;
 }
 
 export interface EffectiveReview {
@@ -20,12 +22,14 @@ export interface EffectiveReview {
   /** The latest approved revision (frozen), even when a newer draft exists: the one to wire and commission. */
   approvedRevision: number | null;
   commissionedRevision: number | null;
+  /** The approved revision was approved by the person who sent it or last changed it (the organisation allows it). */
+  approvedSolo: boolean;
   /** Plain words when the current revision has moved on from the stored state. */
   note: string | null;
 }
 
 export function effectiveReview(stored: StoredReview | null, currentRevision: number): EffectiveReview {
-  const base = { currentRevision, approvedRevision: stored?.approvedRevision ?? null, commissionedRevision: stored?.commissionedRevision ?? null };
+  const base = { currentRevision, approvedRevision: stored?.approvedRevision ?? null, commissionedRevision: stored?.commissionedRevision ?? null, approvedSolo: !!stored?.approvedSolo && stored.approvedRevision != null };
   if (!stored || !isReviewState(stored.state) || stored.state === "draft") return { ...base, state: "draft", inReviewRevision: null, note: null };
   if (stored.revision === currentRevision) return { ...base, state: stored.state, inReviewRevision: stored.state === "in-review" ? currentRevision : null, note: null };
   if (stored.state === "in-review")
@@ -37,3 +41,6 @@ export function effectiveReview(stored: StoredReview | null, currentRevision: nu
     note: `Revision ${stored.revision} is ${stored.state} and stays as it was; revision ${currentRevision} is a new draft.`,
   };
 }
+
+/** The plain words every approval given without a second review carries (the approval, the audit log, the sheet). */
+export const SOLO_APPROVAL_WORDS = "approved without a second review";

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { can, roles, type Role } from "@/lib/auth/permissions";
-import { availableActions, REVIEW_ACTIONS, REVIEW_STATES, transition, type ReviewAction, type ReviewState, type TransitionContext } from "@/lib/review/state-machine";
+import { availableActions, REVIEW_ACTIONS, REVIEW_STATES, secondReview, transition, type ReviewAction, type ReviewState, type TransitionContext } from "@/lib/review/state-machine";
 
 const as = (role: Role, extra: Partial<TransitionContext> = {}): TransitionContext => ({ can: (p) => can(role, p), ...extra });
 const allPassed = { loops: 3, passed: 3 };
@@ -112,5 +112,28 @@ describe("random sequences of actions", () => {
       }),
       { numRuns: 500 },
     );
+  });
+});
+
+describe("a second pair of eyes", () => {
+  const people = fc.option(fc.integer({ min: 1, max: 4 }), { nil: null });
+  it("lets the approver through only when they neither sent nor made the revision, unless solo approval is allowed (then labelled solo)", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 4 }), people, people, fc.boolean(), (actorId, submittedBy, lastChangedBy, allowSolo) => {
+        const own = submittedBy === actorId || lastChangedBy === actorId;
+        const r = secondReview({ actorId, submittedBy, lastChangedBy, allowSolo });
+        expect(r.ok).toBe(!own || allowSolo);
+        if (r.ok) expect(r.solo).toBe(own);
+        else expect(r.reason).toMatch(/someone else must approve it/);
+      }),
+      { numRuns: 500 },
+    );
+  });
+  it("refuses the approval step with its own code, after the state and permission checks", () => {
+    const authorship = { actorId: 7, submittedBy: 7, lastChangedBy: 3, allowSolo: false };
+    expect(transition("in-review", "approve", as("engineer", { authorship }))).toMatchObject({ ok: false, code: "same-person" });
+    expect(transition("in-review", "approve", as("designer", { authorship }))).toMatchObject({ ok: false, code: "permission" });
+    expect(transition("draft", "approve", as("engineer", { authorship }))).toMatchObject({ ok: false, code: "wrong-state" });
+    expect(transition("in-review", "approve", as("engineer", { authorship: { ...authorship, allowSolo: true } }))).toMatchObject({ ok: true, to: "approved" });
   });
 });

@@ -74,9 +74,32 @@ export interface TransitionContext {
   commissioning?: CommissioningProgress;
   /** Sending a layout back to draft needs a reason for its author. */
   reason?: string;
+  /** Who sent the revision and who last changed it: the approver must be someone else, unless solo approval is allowed. */
+  authorship?: Authorship;
 }
 
-export type RefusalCode = "wrong-state" | "permission" | "commissioning-incomplete" | "reason-required";
+export interface Authorship {
+  actorId: number;
+  submittedBy: number | null;
+  /** The author of the revision under review. */
+  lastChangedBy: number | null;
+  /** The organisation lets one person both send and approve a layout. */
+  allowSolo: boolean;
+}
+
+export type SecondReview = { ok: true; solo: boolean } | { ok: false; reason: string };
+
+/** A second pair of eyes: the approver is neither the person who sent the revision for review nor the one who last changed it. */
+export function secondReview(a: Authorship): SecondReview {
+  const sent = a.submittedBy !== null && a.submittedBy === a.actorId;
+  const changed = a.lastChangedBy !== null && a.lastChangedBy === a.actorId;
+  if (!sent && !changed) return { ok: true, solo: false };
+  if (a.allowSolo) return { ok: true, solo: true };
+  const what = sent && changed ? "made the last change to this layout and sent it for review" : sent ? "sent this layout for review" : "made the last change to this layout";
+  return { ok: false, reason: `You ${what}, so someone else must approve it: every approval needs a second pair of eyes. Ask another engineer to review it (an admin can allow one person to do both in the organisation's settings).` };
+}
+
+export type RefusalCode = "wrong-state" | "permission" | "commissioning-incomplete" | "reason-required" | "same-person";
 
 export type TransitionResult =
   | { ok: true; action: ReviewAction; from: ReviewState; to: ReviewState; newDraft: boolean; permission: Permission }
@@ -102,6 +125,10 @@ export function transition(from: ReviewState, action: ReviewAction, ctx: Transit
   if (!rule.from.includes(from))
     return refuse("wrong-state", FROM_REASONS[action]?.[from] ?? `A ${REVIEW_STATE_WORDS[from]} layout cannot ${REVIEW_ACTION_WORDS[action]}.`);
   if (!ctx.can(permission)) return refuse("permission", `Your role cannot ${REVIEW_ACTION_WORDS[action]}: it needs the ${permission} permission.`);
+  if (action === "approve" && ctx.authorship) {
+    const second = secondReview(ctx.authorship);
+    if (!second.ok) return refuse("same-person", second.reason);
+  }
   if (action === "reject" && !(ctx.reason && ctx.reason.trim().length > 0))
     return refuse("reason-required", "Say why it goes back to draft, so its author knows what to change.");
   if (action === "commission") {

@@ -3,7 +3,14 @@ import { z } from "zod";
 // Request bodies of the device schedule API that are not a detector (see schema.ts for those), shared by the
 // route handlers, the import form and the OpenAPI document.
 
-export const deleteDetectorsSchema = z.strictObject({ ids: z.array(z.string().min(1).max(64)).min(1).max(5000) });
+export const deleteDetectorsSchema = z.strictObject({
+  ids: z.array(z.string().min(1).max(64)).min(1).max(5000),
+  /** Delete even detectors that an approved or commissioned layout places (it keeps its frozen copy). */
+  confirmApproved: z.boolean().optional(),
+});
+
+/** ?confirmApproved=1 on deleting one detector. */
+export const deleteDetectorQuerySchema = z.strictObject({ confirmApproved: z.enum(["0", "1", "true", "false"], "confirmApproved must be 1 or 0").optional() });
 export type DeleteDetectorsInput = z.infer<typeof deleteDetectorsSchema>;
 
 /** Largest CSV the import takes. */

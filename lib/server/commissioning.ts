@@ -12,6 +12,7 @@ import { CommissioningPhoto, CommissioningReading, User } from "@/models";
 import type { RecordReadingParsed, PhotoFields } from "@/lib/commissioning/commissioning-schema";
 import { diagnoseLoopOf, diagnoseReading, usualValuesOf, type MeasuredReading, type ReadingVerdict } from "@/lib/commissioning/diagnose";
 import { checkPhotoUpload } from "@/lib/commissioning/photo-checks";
+import { adviceOf } from "@/lib/commissioning/advice";
 import { commissioningProgress, type CommissioningProgressReport, type RecordedReading } from "@/lib/commissioning/progress";
 import type { EffectiveReview } from "@/lib/review/effective-state";
 import { buildTerminalSheet } from "@/lib/sheet/build-sheet";
@@ -257,6 +258,12 @@ export async function commissioningReportPdfFor(actor: Actor, layoutId: number, 
     const v = photoView(p);
     return { boardKey: v.boardKey ?? "", input: v.input, fileName: v.fileName, sizeBytes: v.sizeBytes, takenBy: v.uploadedBy, takenAt: v.createdAt };
   });
-  const pdf = await commissioningReportPdfOffLoop(commissioningProgress(sheet, readings), { ...sheetMetaOf(ctx), caution: sheet.caution }, reportPhotos, size);
+  const rows = sheet.boards.flatMap((b) => b.rows).filter((r): r is SheetInput => !r.spare);
+  const usualValues = usualValuesOf(ctx.catalog);
+  const advised = readings.map((r) => {
+    const row = rows.find((x) => x.boardKey === r.boardKey && x.input === r.input);
+    return row && row.expected.some((e) => e.test === r.test) ? { ...r, advice: adviceOf(diagnoseReading(diagnoseLoopOf(row), r.test, r.reading, { usualValues })) } : r;
+  });
+  const pdf = await commissioningReportPdfOffLoop(commissioningProgress(sheet, advised), { ...sheetMetaOf(ctx), caution: sheet.caution }, reportPhotos, size);
   return { pdf, fileName: `${fileStem("commissioning", ctx.site.name, ctx.layout.name, `rev-${rev}`)}.pdf` };
 }

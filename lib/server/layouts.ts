@@ -6,7 +6,7 @@ import { ApiError, conflict, notFound } from "./errors";
 import { findSite } from "./sites";
 import { catalogFor, ensureCan, loadSchedule } from "./schedules";
 import type { Actor } from "./session";
-import { Layout, LayoutRevision, Site, User } from "@/models";
+import { CommissioningPhoto, CommissioningReading, Layout, LayoutReview, LayoutRevision, Site, User } from "@/models";
 import { isLifeSafety } from "@/lib/catalog/life-safety";
 import type { Catalog } from "@/lib/catalog/schema";
 import { boardEntry, indexCatalog } from "@/lib/layout/catalog-index";
@@ -33,6 +33,10 @@ export interface LayoutMeta {
   createdAt: string;
   updatedAt: string;
   summary: LayoutSolveSummary;
+  /** ISO time it was archived; archived layouts stay readable and are not changed. */
+  archivedAt: string | null;
+  /** It has an approved or commissioned revision: it is archived, never deleted. */
+  hasApproval: boolean;
 }
 
 export interface LayoutView {
@@ -75,9 +79,11 @@ function checkReferences(doc: LayoutDocument, schedule: Schedule, catalog: Catal
   if (issues.length) throw new ApiError(422, "The layout refers to hardware or detectors that do not exist; it was not saved.", issues);
 }
 
-type LayoutWithCurrent = Layout & { current?: LayoutRevision; site?: Site };
+type LayoutWithCurrent = Layout & { current?: LayoutRevision; site?: Site; reviewRecord?: LayoutReview | null };
 
-function meta(l: Layout, summary: LayoutSolveSummary): LayoutMeta {
+const hasApprovalOf = (r: LayoutReview | null | undefined) => !!r && (r.approvedRevision != null || r.commissionedRevision != null);
+
+function meta(l: Layout, summary: LayoutSolveSummary, hasApproval = false): LayoutMeta {
   return {
     id: l.id,
     siteId: l.siteId,
@@ -88,6 +94,8 @@ function meta(l: Layout, summary: LayoutSolveSummary): LayoutMeta {
     createdAt: l.createdAt.toISOString(),
     updatedAt: l.updatedAt.toISOString(),
     summary,
+    archivedAt: l.archivedAt ? l.archivedAt.toISOString() : null,
+    hasApproval,
   };
 }
 
@@ -110,8 +118,12 @@ async function findOwnLayout(actor: Actor, layoutId: number, transaction?: Trans
 /** The site's layouts, newest first, each with its current revision's summary (two queries). */
 export async function listLayouts(actor: Actor, siteId: number): Promise<LayoutMeta[]> {
   await findSite(actor, siteId);
-  const rows = (await Layout.findAll({ where: { siteId }, include: [currentRevision(["id", "revision", "summary"])], order: [["updatedAt", "DESC"], ["id", "DESC"]] })) as LayoutWithCurrent[];
-  return rows.map((l) => meta(l, l.current!.summary as LayoutSolveSummary));
+  const rows = (await Layout.findAll({
+    where: { siteId },
+    include: [currentRevision(["id", "revision", "summary"]), { model: LayoutReview, as: "reviewRecord", required: false, attributes: ["layoutId", "approvedRevision", "commissionedRevision"] }],
+    order: [["updatedAt", "DESC"], ["id", "DESC"]],
+  })) as LayoutWithCurrent[];
+  return rows.map((l) => meta(l, l.current!.summary as LayoutSolveSummary, hasApprovalOf(l.reviewRecord)));
 }
 
 export async function getLayout(actor: Actor, layoutId: number): Promise<LayoutView> {
@@ -188,6 +200,7 @@ export async function createLayout(actor: Actor, siteId: number, input: CreateLa
 export async function saveLayout(actor: Actor, layoutId: number, input: SaveLayoutInput): Promise<{ layout: LayoutMeta }> {
   ensureCan(actor, "layout:write");
   const l = await findOwnLayout(actor, layoutId);
+  assertNotArchived(l);
   const [schedule, catalog] = await Promise.all([loadSchedule(l.siteId), catalogFor(actor.organisationId)]);
   checkReferences(input.document, schedule, catalog);
   const summary = solveForSave(input.document, schedule, catalog);
@@ -251,6 +264,7 @@ export async function getRevision(actor: Actor, layoutId: number, revision: numb
 export async function restoreRevision(actor: Actor, layoutId: number, revision: number, expectVersion?: number): Promise<LayoutView> {
   ensureCan(actor, "layout:write");
   const l = await findOwnLayout(actor, layoutId);
+  assertNotArchived(l);
   const old = await LayoutRevision.findOne({ where: { layoutId, revision }, attributes: ["document"] });
   if (!old) throw notFound("That revision");
   const document = layoutDocumentSchema.parse(old.document);
@@ -262,15 +276,66 @@ export async function restoreRevision(actor: Actor, layoutId: number, revision: 
   return { layout, document };
 }
 
+function assertNotArchived(l: Layout) {
+  if (l.archivedAt) throw conflict(`“${l.name}” is archived: restore it from the site's layouts before changing it.`, { code: "archived" });
+}
+
+/**
+ * Delete a layout that never had an approved revision and has no commissioning record. An approved or
+ * commissioned layout, or one with readings or photos, is refused (409): archive it instead, so nothing recorded is lost.
+ */
 export async function deleteLayout(actor: Actor, layoutId: number): Promise<{ deleted: true }> {
   ensureCan(actor, "layout:write");
   await db().transaction(async (transaction) => {
     const l = await findOwnLayout(actor, layoutId, transaction);
+    await Layout.findByPk(layoutId, { transaction, lock: transaction.LOCK.UPDATE, attributes: ["id"] });
+    const review = await LayoutReview.findByPk(layoutId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (hasApprovalOf(review)) {
+      const what = review!.commissionedRevision != null ? `commissioned (revision ${review!.commissionedRevision})` : `approved (revision ${review!.approvedRevision})`;
+      throw conflict(`“${l.name}” is ${what}: an approved or commissioned layout is never deleted, so its terminal sheet and commissioning record stay. Archive it instead.`, { code: "approved-layout" });
+    }
+    const [readings, photos] = await Promise.all([CommissioningReading.count({ where: { layoutId }, transaction }), CommissioningPhoto.count({ where: { layoutId }, transaction })]);
+    if (readings + photos > 0) throw conflict(`“${l.name}” has commissioning records (${readings} readings, ${photos} photos): it is never deleted. Archive it instead.`, { code: "has-records" });
     await LayoutRevision.destroy({ where: { layoutId }, transaction });
     await l.destroy({ transaction });
     await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "layout.delete", entityType: "layout", entityId: layoutId, detail: { siteId: l.siteId, name: l.name, lastRevision: l.currentRevision } }, transaction);
   });
   return { deleted: true };
+}
+
+/**
+ * A new draft revision from the current one, re-solved against the live schedule: what the designer does when
+ * the schedule has changed since approval. Detectors deleted from the schedule leave their inputs.
+ */
+export async function redraftFromSchedule(actor: Actor, layoutId: number, expectVersion?: number): Promise<LayoutView & { dropped: string[] }> {
+  ensureCan(actor, "layout:write");
+  const l = await findLayoutWithCurrent(actor, layoutId);
+  assertNotArchived(l);
+  const review = await LayoutReview.findByPk(layoutId, { attributes: ["layoutId", "approvedRevision", "commissionedRevision"] });
+  if (!hasApprovalOf(review)) throw conflict(`“${l.name}” has no approved revision: a draft already reads the live schedule.`, { code: "no-approval" });
+  const [schedule, catalog] = await Promise.all([loadSchedule(l.siteId), catalogFor(actor.organisationId)]);
+  const live = new Set(schedule.map((d) => d.id));
+  const current = layoutDocumentSchema.parse(l.current.document);
+  const dropped = current.inputs.flatMap((i) => i.detectorIds.filter((d) => !live.has(d)));
+  const document: LayoutDocument = { ...current, inputs: current.inputs.map((i) => ({ ...i, detectorIds: i.detectorIds.filter((d) => live.has(d)) })).filter((i) => i.detectorIds.length > 0) };
+  checkReferences(document, schedule, catalog);
+  const summary = solveForSave(document, schedule, catalog);
+  const note = `New draft from the schedule as it is now${dropped.length ? ` (${dropped.length} deleted detector${dropped.length === 1 ? "" : "s"} taken off their inputs)` : ""}`;
+  const { layout } = await writeRevision(actor, l, { expectVersion: expectVersion ?? l.version, document, summary, note, action: "layout.redraft", detail: { from: l.currentRevision, dropped } });
+  return { layout, document, dropped };
+}
+
+/** Archive a layout (it stays readable: its sheet, commissioning record and history), or bring it back. */
+export async function setLayoutArchived(actor: Actor, layoutId: number, archived: boolean): Promise<{ layout: LayoutMeta }> {
+  ensureCan(actor, "layout:write");
+  await db().transaction(async (transaction) => {
+    const l = await findOwnLayout(actor, layoutId, transaction);
+    if (!!l.archivedAt === archived) return;
+    await Layout.update({ archivedAt: archived ? new Date() : null, archivedBy: archived ? actor.userId : null }, { where: { id: layoutId }, transaction, silent: true });
+    await audit({ organisationId: actor.organisationId, userId: actor.userId, action: archived ? "layout.archive" : "layout.unarchive", entityType: "layout", entityId: layoutId, detail: { siteId: l.siteId, name: l.name } }, transaction);
+  });
+  const l = (await Layout.findOne({ where: { id: layoutId }, include: [currentRevision(["id", "revision", "summary"]), { model: LayoutReview, as: "reviewRecord", required: false }] })) as LayoutWithCurrent;
+  return { layout: meta(l, l.current!.summary as LayoutSolveSummary, hasApprovalOf(l.reviewRecord)) };
 }
 
 export interface SuggestionView {

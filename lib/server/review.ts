@@ -5,16 +5,18 @@ import { audit } from "./audit";
 import { ApiError, conflict, notFound } from "./errors";
 import { findSite } from "./sites";
 import { catalogFor, ensureCan, loadSchedule } from "./schedules";
-import { findLayoutForReview, type LayoutRef } from "./sheets";
+import { findLayoutForReview, isFrozenRevision, type LayoutRef } from "./sheets";
 import { progressOf } from "./commissioning";
 import type { Actor } from "./session";
-import { Layout, LayoutComment, LayoutDecision, LayoutReview, LayoutRevision, User } from "@/models";
+import { frozenInputs, takeSnapshot, hasSnapshot } from "./snapshots";
+import { Layout, LayoutComment, LayoutDecision, LayoutReview, LayoutRevision, Organisation, User } from "@/models";
+import type { Transaction } from "sequelize";
 import { can } from "@/lib/auth/permissions";
 import { compareLayouts, type LayoutComparison } from "@/lib/compare/compare-layouts";
 import { layoutDocumentSchema } from "@/lib/layout/schema";
-import type { EffectiveReview } from "@/lib/review/effective-state";
+import { effectiveReview, SOLO_APPROVAL_WORDS, type EffectiveReview } from "@/lib/review/effective-state";
 import type { ChooseLayoutInput, CommentInput, ReviewActionInput } from "@/lib/review/review-schema";
-import { availableActions, transition, type ReviewAction, type TransitionContext } from "@/lib/review/state-machine";
+import { availableActions, secondReview, transition, type Authorship, type ReviewAction, type TransitionContext } from "@/lib/review/state-machine";
 
 // The review of a layout: send for review, approve or send back with a reason, mark commissioned; comments;
 // and the decision log, which also records the choice among compared layouts.
@@ -66,6 +68,15 @@ function contextFor(actor: Actor, extra: Partial<TransitionContext> = {}): Trans
   return { can: (p) => can(actor.role, p), ...extra };
 }
 
+/** Who sent the revision in review and who made it, and whether the organisation allows one person to approve their own. */
+async function authorshipOf(actor: Actor, ref: LayoutRef, transaction?: Transaction): Promise<Authorship> {
+  const [revision, org] = await Promise.all([
+    LayoutRevision.findOne({ where: { layoutId: ref.layout.id, revision: ref.layout.currentRevision }, attributes: ["createdBy"], transaction }),
+    Organisation.findByPk(actor.organisationId, { attributes: ["id", "allowSoloApproval"], transaction }),
+  ]);
+  return { actorId: actor.userId, submittedBy: ref.submittedBy, lastChangedBy: revision?.createdBy ?? null, allowSolo: !!org?.allowSoloApproval };
+}
+
 export async function getReview(actor: Actor, layoutId: number): Promise<ReviewView> {
   ensureCan(actor, "layout:read");
   const ref = await findLayoutForReview(actor, layoutId);
@@ -73,23 +84,24 @@ export async function getReview(actor: Actor, layoutId: number): Promise<ReviewV
 }
 
 async function reviewView(actor: Actor, ref: LayoutRef): Promise<ReviewView> {
-  const [comments, decisions, progress] = await Promise.all([
+  const [comments, decisions, progress, authorship] = await Promise.all([
     LayoutComment.findAll({ where: { layoutId: ref.layout.id }, include: [{ model: User, as: "author", attributes: ["name"] }], order: [["id", "ASC"]] }),
     LayoutDecision.findAll({ where: { layoutId: ref.layout.id }, include: [{ model: User, as: "decider", attributes: ["name"] }], order: [["id", "ASC"]] }),
     ref.review.state === "approved" ? progressOf(actor, ref) : Promise.resolve(null),
+    ref.review.state === "in-review" ? authorshipOf(actor, ref) : Promise.resolve(undefined),
   ]);
   return {
     layoutId: ref.layout.id,
     siteId: ref.layout.siteId,
     name: ref.layout.name,
     review: ref.review,
-    actions: availableActions(ref.review.state, contextFor(actor, progress ? { commissioning: { loops: progress.totals.loops, passed: progress.totals.passed } } : {})).filter((a) => a.action !== "edit"),
+    actions: availableActions(ref.review.state, contextFor(actor, { authorship, ...(progress ? { commissioning: { loops: progress.totals.loops, passed: progress.totals.passed } } : {}) })).filter((a) => a.action !== "edit"),
     comments: comments.map(commentView),
     decisions: decisions.map(decisionView),
   };
 }
 
-const STATUS_OF_REFUSAL = { permission: 403, "wrong-state": 409, "commissioning-incomplete": 409, "reason-required": 422 } as const;
+const STATUS_OF_REFUSAL = { permission: 403, "same-person": 403, "wrong-state": 409, "commissioning-incomplete": 409, "reason-required": 422 } as const;
 
 /** Take one review step, under a lock on the layout so two reviewers cannot both act on one state. */
 export async function reviewAction(actor: Actor, layoutId: number, input: ReviewActionInput): Promise<ReviewView> {
@@ -100,6 +112,7 @@ export async function reviewAction(actor: Actor, layoutId: number, input: Review
     if (input.revision !== undefined && input.revision !== layout.currentRevision)
       throw conflict(`The layout has changed since you opened it (you looked at revision ${input.revision}, it is now revision ${layout.currentRevision}).`, { currentRevision: layout.currentRevision });
     const extra: Partial<TransitionContext> = { reason: input.reason };
+    if (action === "approve") extra.authorship = await authorshipOf(actor, ref, transaction);
     if (action === "commission" && review.state === "approved") {
       const p = await progressOf(actor, ref, transaction);
       extra.commissioning = { loops: p.totals.loops, passed: p.totals.passed };
@@ -108,6 +121,10 @@ export async function reviewAction(actor: Actor, layoutId: number, input: Review
     if (!r.ok) throw new ApiError(STATUS_OF_REFUSAL[r.code], r.reason, undefined, { code: r.code, state: review.state });
     const now = new Date();
     const rev = layout.currentRevision;
+    const second = action === "approve" && extra.authorship ? secondReview(extra.authorship) : null;
+    const solo = !!second?.ok && second.solo;
+    // What was reviewed is frozen with the revision: the schedule and catalog it was solved against.
+    if (action === "submit" || (action === "approve" && !(await hasSnapshot(layoutId, rev, transaction)))) await takeSnapshot(actor, layoutId, layout.siteId, rev, transaction);
     const stored = await LayoutReview.findByPk(layoutId, { transaction });
     const row = {
       layoutId,
@@ -121,13 +138,26 @@ export async function reviewAction(actor: Actor, layoutId: number, input: Review
       approvedAt: action === "approve" ? now : (stored?.approvedAt ?? null),
       commissionedBy: action === "commission" ? actor.userId : (stored?.commissionedBy ?? null),
       commissionedAt: action === "commission" ? now : (stored?.commissionedAt ?? null),
+      approvedSolo: action === "approve" ? solo : (stored?.approvedSolo ?? false),
     };
     if (stored) await stored.update(row, { transaction });
     else await LayoutReview.create(row, { transaction });
     // The layout list shows the state from the layout's own status column.
     await Layout.update({ status: r.to }, { where: { id: layoutId }, transaction, silent: true });
-    await LayoutDecision.create({ layoutId, revision: rev, kind: action, reason: input.reason?.trim() ?? "", comparedLayoutIds: null, decidedBy: actor.userId }, { transaction });
-    await audit({ organisationId: actor.organisationId, userId: actor.userId, action: `layout.review.${action}`, entityType: "layout", entityId: layoutId, detail: { revision: rev, from: review.state, to: r.to, reason: input.reason ?? null } }, transaction);
+    const soloWords = solo ? `${SOLO_APPROVAL_WORDS[0].toUpperCase()}${SOLO_APPROVAL_WORDS.slice(1)}.` : "";
+    const reason = [soloWords, input.reason?.trim() ?? ""].filter(Boolean).join(" ");
+    await LayoutDecision.create({ layoutId, revision: rev, kind: action, reason, comparedLayoutIds: null, decidedBy: actor.userId }, { transaction });
+    await audit(
+      {
+        organisationId: actor.organisationId,
+        userId: actor.userId,
+        action: `layout.review.${action}`,
+        entityType: "layout",
+        entityId: layoutId,
+        detail: { revision: rev, from: review.state, to: r.to, reason: input.reason ?? null, ...(action === "approve" ? { secondReview: !solo, ...(solo ? { note: SOLO_APPROVAL_WORDS } : {}) } : {}) },
+      },
+      transaction,
+    );
   });
   return getReview(actor, layoutId);
 }
@@ -169,9 +199,22 @@ export interface ComparisonView {
 export async function compareSiteLayouts(actor: Actor, siteId: number, layoutIds: number[]): Promise<ComparisonView> {
   ensureCan(actor, "layout:read");
   const layouts = await siteLayouts(actor, siteId, layoutIds);
-  const revisions = await LayoutRevision.findAll({ where: { [Op.or]: layouts.map((l) => ({ layoutId: l.id, revision: l.currentRevision })) }, attributes: ["layoutId", "document"] });
+  const [revisions, reviews] = await Promise.all([
+    LayoutRevision.findAll({ where: { [Op.or]: layouts.map((l) => ({ layoutId: l.id, revision: l.currentRevision })) }, attributes: ["layoutId", "document"] }),
+    LayoutReview.findAll({ where: { layoutId: { [Op.in]: layoutIds } } }),
+  ]);
   const [schedule, catalog] = await Promise.all([loadSchedule(siteId), catalogFor(actor.organisationId)]);
-  const candidates = layouts.map((l) => ({ id: l.id, name: l.name, layout: layoutDocumentSchema.parse(revisions.find((r) => r.layoutId === l.id)!.document) }));
+  // An approved or commissioned current revision is compared as it was approved: against its frozen inputs.
+  const frozen = await Promise.all(
+    layouts.map((l) => {
+      const review = effectiveReview(reviews.find((r) => r.layoutId === l.id) ?? null, l.currentRevision);
+      return isFrozenRevision(review, l.currentRevision) ? frozenInputs(l.id, l.currentRevision) : Promise.resolve(null);
+    }),
+  );
+  const candidates = layouts.map((l, i) => {
+    const f = frozen[i];
+    return { id: l.id, name: l.name, layout: layoutDocumentSchema.parse(revisions.find((r) => r.layoutId === l.id)!.document), ...(f ? { frozen: { schedule: f.schedule, catalog: f.catalog } } : {}) };
+  });
   return {
     siteId,
     layouts: layouts.map((l) => ({ id: l.id, name: l.name, revision: l.currentRevision, status: l.status })),

@@ -6,7 +6,7 @@ import { ApiError, notFound } from "./errors";
 import { findSite } from "./sites";
 import { effectiveCatalogFor } from "./catalogs";
 import type { Actor } from "./session";
-import { ScheduleDetectorRecord } from "@/models";
+import { Layout, LayoutReview, LayoutRevision, ScheduleDetectorRecord } from "@/models";
 import { can, refusal, type Permission } from "@/lib/auth/permissions";
 import type { Catalog } from "@/lib/catalog/schema";
 import { parseScheduleCsv, serializeScheduleCsv, type CsvRowError } from "@/lib/schedule/csv";
@@ -110,16 +110,56 @@ export async function bulkEditDetectors(actor: Actor, siteId: number, edit: Bulk
   });
 }
 
-export async function deleteDetectors(actor: Actor, siteId: number, idList: string[]): Promise<{ deleted: number }> {
+export interface ApprovedUse {
+  layoutId: number;
+  name: string;
+  revision: number;
+  state: "approved" | "commissioned";
+  detectors: string[];
+}
+
+/** Approved or commissioned layouts of the site whose frozen revision places any of these detectors. */
+async function approvedUsesOf(siteId: number, rows: { id: number; label: string }[], transaction: Transaction): Promise<ApprovedUse[]> {
+  const layouts = await Layout.findAll({ where: { siteId }, attributes: ["id", "name"], include: [{ model: LayoutReview, as: "reviewRecord", required: true, attributes: ["layoutId", "approvedRevision", "commissionedRevision"] }], transaction });
+  const uses: ApprovedUse[] = [];
+  for (const l of layouts as (Layout & { reviewRecord: LayoutReview })[]) {
+    const r = l.reviewRecord;
+    const revision = r.commissionedRevision ?? r.approvedRevision;
+    if (revision == null) continue;
+    const rev = await LayoutRevision.findOne({ where: { layoutId: l.id, revision }, attributes: ["document"], transaction });
+    const placed = new Set(((rev?.document as { inputs?: { detectorIds: string[] }[] } | undefined)?.inputs ?? []).flatMap((i) => i.detectorIds));
+    const hit = rows.filter((d) => placed.has(String(d.id)));
+    if (hit.length) uses.push({ layoutId: l.id, name: l.name, revision, state: r.commissionedRevision != null ? "commissioned" : "approved", detectors: hit.map((d) => d.label) });
+  }
+  return uses;
+}
+
+/**
+ * Delete detectors, all or nothing. A detector on an approved or commissioned layout is deleted only when the
+ * caller confirms it (409 naming the layouts otherwise): the approved revision keeps its frozen copy of the
+ * schedule, so nothing approved changes, and the layout shows that the schedule has changed since approval.
+ */
+export async function deleteDetectors(actor: Actor, siteId: number, idList: string[], opts: { confirmApproved?: boolean } = {}): Promise<{ deleted: number; approvedLayouts: ApprovedUse[] }> {
   ensureCan(actor, "schedule:write");
   await findSite(actor, siteId);
   const ids = rowIds(idList);
   return db().transaction(async (transaction) => {
     const rows = await ScheduleDetectorRecord.findAll({ where: { id: { [Op.in]: ids }, siteId }, attributes: ["id", "label"], transaction });
     if (rows.length !== ids.length) throw new ApiError(404, `${ids.length - rows.length} of the selected detectors are not in this schedule; nothing was deleted.`);
+    const uses = await approvedUsesOf(siteId, rows, transaction);
+    if (uses.length && !opts.confirmApproved)
+      throw new ApiError(
+        409,
+        `${uses.map((u) => `${u.detectors.join(", ")} ${u.detectors.length === 1 ? "is" : "are"} on the ${u.state} layout “${u.name}” (revision ${u.revision})`).join("; ")}. Deleting changes nothing approved: its terminal sheet and commissioning keep the schedule as it was approved, and the layout will show that the schedule has changed since approval. Nothing was deleted; confirm to delete.`,
+        undefined,
+        { code: "used-by-approved", approvedLayouts: uses },
+      );
     await ScheduleDetectorRecord.destroy({ where: { id: { [Op.in]: ids }, siteId }, transaction });
-    await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "schedule.delete", entityType: "site", entityId: siteId, detail: { detectors: rows.map((r) => ({ id: r.id, label: r.label })) } }, transaction);
-    return { deleted: rows.length };
+    await audit(
+      { organisationId: actor.organisationId, userId: actor.userId, action: "schedule.delete", entityType: "site", entityId: siteId, detail: { detectors: rows.map((r) => ({ id: r.id, label: r.label })), ...(uses.length ? { approvedLayouts: uses } : {}) } },
+      transaction,
+    );
+    return { deleted: rows.length, approvedLayouts: uses };
   });
 }
 

@@ -9,7 +9,8 @@ import { createHash } from "node:crypto";
 import { fileStem, findLayoutForReview, getTerminalSheet, loadSheetContext, sheetMetaOf, type SheetOptions } from "./sheets";
 import type { Actor } from "./session";
 import { Membership, Site, User } from "@/models";
-import type { PageSize } from "@/lib/server/pdf/pdf-kit";
+import { NOT_APPROVED_MARKING, type PageSize } from "@/lib/server/pdf/pdf-kit";
+import { SOLO_APPROVAL_WORDS } from "@/lib/review/effective-state";
 import { terminalSheetPdfOffLoop } from "@/lib/server/workers/off-loop";
 import { loopJsonReplacer } from "@/lib/loop/loop-json";
 
@@ -65,25 +66,28 @@ export interface SentSheet {
   sizeBytes: number;
 }
 
-export async function sendSheetToInstaller(actor: Actor, layoutId: number, opts: { size?: PageSize } = {}): Promise<SentSheet> {
+export async function sendSheetToInstaller(actor: Actor, layoutId: number, opts: { size?: PageSize; confirmUnapproved?: boolean } = {}): Promise<SentSheet> {
   ensureCan(actor, "sheet:send");
   const installer = await layoutInstaller(actor, layoutId);
   if (!installer) throw new ApiError(409, "This site has no installer assigned: assign one on the site first, then send the sheet.");
   const view = await getTerminalSheet(actor, layoutId);
+  if (!view.approved && !opts.confirmUnapproved)
+    throw new ApiError(409, `Revision ${view.meta.revision} is not approved: confirm that it goes out for review only (the e-mail and every page of the PDF say so), or approve it first. Nothing was sent.`, undefined, { code: "confirm-unapproved" });
   const { pdf, fileName } = await terminalSheetPdfCached(actor, layoutId, { size: opts.size ?? "A4" });
   const rev = view.meta.revision;
-  const status = view.approved ? `approved revision ${rev}` : `revision ${rev}, NOT APPROVED — for review only`;
+  const status = view.approved ? `approved revision ${rev}${view.meta.approvedSolo ? `, ${SOLO_APPROVAL_WORDS}` : ""}` : `revision ${rev}, ${NOT_APPROVED_MARKING}`;
   const link = `${env().NEXTAUTH_URL}/sites/${view.siteId}/layouts/${layoutId}/sheet`;
   const lines = [
     `Hello ${installer.name},`,
     "",
+    ...(view.approved ? [] : [`${NOT_APPROVED_MARKING}: this revision has not been approved. Do not wire to it; it is sent so you can review it.`, ""]),
     `${actor.name} sent you the terminal sheet of ${view.meta.siteName}, layout "${view.meta.layoutName}" (${status}).`,
     `It lists ${view.sheet.zoneCount} zone${view.sheet.zoneCount === 1 ? "" : "s"} on ${view.sheet.boards.length} board${view.sheet.boards.length === 1 ? "" : "s"}, with the resistors, the core map and the meter reading expected in each test.`,
     "",
     `The PDF is attached; the sheet is also online: ${link}`,
     ...(view.sheet.caution ? ["", view.sheet.caution] : []),
   ];
-  await sendMail({ to: installer.email, subject: `Terminal sheet: ${view.meta.siteName} — ${view.meta.layoutName}, revision ${rev}`, text: `${lines.join("\n")}\n`, attachments: [{ filename: fileName, content: pdf, contentType: "application/pdf" }] });
+  await sendMail({ to: installer.email, subject: `${view.approved ? "" : `${NOT_APPROVED_MARKING}: `}Terminal sheet: ${view.meta.siteName} — ${view.meta.layoutName}, revision ${rev}`, text: `${lines.join("\n")}\n`, attachments: [{ filename: fileName, content: pdf, contentType: "application/pdf" }] });
   await db().transaction((transaction) =>
     audit({ organisationId: actor.organisationId, userId: actor.userId, action: "sheet.send", entityType: "layout", entityId: layoutId, detail: { revision: rev, approved: view.approved, to: installer.email, fileName, sizeBytes: pdf.length } }, transaction),
   );

@@ -3,6 +3,7 @@ import type { Transaction } from "sequelize";
 import { bindModels } from "./db";
 import { notFound } from "./errors";
 import { catalogFor, ensureCan, loadSchedule } from "./schedules";
+import { frozenInputs } from "./snapshots";
 import type { Actor } from "./session";
 import { Layout, LayoutReview, LayoutRevision, Site } from "@/models";
 import { billOfMaterials, type BillOfMaterials } from "@/lib/bom/bill-of-materials";
@@ -24,6 +25,8 @@ export interface LayoutRef {
   layout: Layout;
   site: Site;
   review: EffectiveReview;
+  /** Who sent the layout for review last (null when never). */
+  submittedBy: number | null;
 }
 
 /** The layout, only if its site belongs to the actor's organisation (404 otherwise), with its review state. */
@@ -37,7 +40,7 @@ export async function findLayoutForReview(actor: Actor, layoutId: number, transa
   });
   if (!layout) throw notFound("That layout");
   const stored = await LayoutReview.findByPk(layoutId, { transaction, ...(lock && transaction ? { lock: transaction.LOCK.UPDATE } : {}) });
-  return { layout, site: (layout as Layout & { site: Site }).site, review: effectiveReview(stored, layout.currentRevision) };
+  return { layout, site: (layout as Layout & { site: Site }).site, review: effectiveReview(stored, layout.currentRevision), submittedBy: stored?.submittedBy ?? null };
 }
 
 export interface RevisionContext extends LayoutRef {
@@ -45,13 +48,23 @@ export interface RevisionContext extends LayoutRef {
   document: LayoutDocument;
   schedule: Schedule;
   catalog: Catalog;
+  /** The revision is approved or commissioned and reads the schedule and catalog frozen with it. */
+  frozen: { takenAt: string; catalogVersion: number | null } | null;
+}
+
+/** An approved or commissioned revision: its inputs are frozen. */
+export function isFrozenRevision(review: EffectiveReview, revision: number): boolean {
+  return review.approvedRevision === revision || review.commissionedRevision === revision;
 }
 
 export async function loadRevision(actor: Actor, ref: LayoutRef, revision: number, transaction?: Transaction): Promise<RevisionContext> {
   const row = await LayoutRevision.findOne({ where: { layoutId: ref.layout.id, revision }, attributes: ["document"], transaction });
   if (!row) throw notFound("That revision");
+  const document = layoutDocumentSchema.parse(row.document);
+  const frozen = isFrozenRevision(ref.review, revision) ? await frozenInputs(ref.layout.id, revision, transaction) : null;
+  if (frozen) return { ...ref, revision, document, schedule: frozen.schedule, catalog: frozen.catalog, frozen: { takenAt: frozen.takenAt, catalogVersion: frozen.catalogVersion } };
   const [schedule, catalog] = await Promise.all([loadSchedule(ref.layout.siteId, transaction), catalogFor(actor.organisationId)]);
-  return { ...ref, revision, document: layoutDocumentSchema.parse(row.document), schedule, catalog };
+  return { ...ref, revision, document, schedule, catalog, frozen: null };
 }
 
 export interface SheetOptions {
@@ -72,13 +85,16 @@ export interface SheetView {
   review: EffectiveReview;
   /** The revision shown is the approved one (what to wire). */
   approved: boolean;
+  /** Read from the schedule and catalog frozen at approval (null: the live ones). */
+  frozen: RevisionContext["frozen"];
   sheet: TerminalSheet;
 }
 
 const today = () => new Date().toISOString().slice(0, 10);
 
 export function sheetMetaOf(ctx: RevisionContext): SheetMeta {
-  return { siteName: ctx.site.name, layoutName: ctx.layout.name, revision: ctx.revision, generatedAt: today() };
+  const approved = isFrozenRevision(ctx.review, ctx.revision);
+  return { siteName: ctx.site.name, layoutName: ctx.layout.name, revision: ctx.revision, generatedAt: today(), approved, approvedSolo: approved && ctx.review.approvedSolo && ctx.review.approvedRevision === ctx.revision };
 }
 
 export async function getTerminalSheet(actor: Actor, layoutId: number, opts: SheetOptions = {}): Promise<SheetView> {
@@ -89,6 +105,7 @@ export async function getTerminalSheet(actor: Actor, layoutId: number, opts: She
     meta: sheetMetaOf(ctx),
     review: ctx.review,
     approved: ctx.review.approvedRevision === ctx.revision,
+    frozen: ctx.frozen,
     sheet: buildTerminalSheet(ctx.document, ctx.schedule, ctx.catalog),
   };
 }

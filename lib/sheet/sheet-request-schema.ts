@@ -17,5 +17,9 @@ export const paperSizeQuery = z
   .optional()
   .default("A4");
 
-export const sendSheetSchema = z.strictObject({ size: z.enum(PAPER_SIZES, "size must be A4 or LETTER").optional() });
+export const sendSheetSchema = z.strictObject({
+  size: z.enum(PAPER_SIZES, "size must be A4 or LETTER").optional(),
+  /** Needed to send a revision that is not approved: the sender has seen that it is only for review. */
+  confirmUnapproved: z.boolean().optional(),
+});
 export type SendSheetInput = z.infer<typeof sendSheetSchema>;

@@ -156,6 +156,26 @@ export const routes: RouteEntry[] = [
     build: async (ctx) => ({ method: "DELETE", url: `/api/layouts/${(await ctx.fixtures.newLayout()).layoutId}` }),
   },
   {
+    method: "POST",
+    path: "/api/layouts/[layoutId]/redraft",
+    access: "layout:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "POST", url: `/api/layouts/${(await ctx.fixtures.approvedLayout()).layoutId}/redraft`, json: {} }),
+    requiredKeys: [],
+  },
+  {
+    method: "POST",
+    path: "/api/layouts/[layoutId]/archive",
+    access: "layout:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "POST", url: `/api/layouts/${(await ctx.fixtures.newLayout()).layoutId}/archive`, json: { archived: true } }),
+    requiredKeys: ["archived"],
+  },
+  {
     method: "GET",
     path: "/api/layouts/[layoutId]/revisions",
     access: "layout:read",
@@ -229,7 +249,7 @@ export const routes: RouteEntry[] = [
     body: "json",
     success: 200,
     orgScoped: true,
-    build: async (ctx) => ({ method: "POST", url: `/api/layouts/${ctx.demo.layoutId}/sheet/send`, json: { size: "A4" } }),
+    build: async (ctx) => ({ method: "POST", url: `/api/layouts/${ctx.demo.layoutId}/sheet/send`, json: { size: "A4", confirmUnapproved: true } }),
     requiredKeys: [],
     note: "mails the demo layout's sheet to the demo site's installer (the fake SMTP server keeps it); the layout itself is not changed",
   },
@@ -389,7 +409,8 @@ export const routes: RouteEntry[] = [
     orgScoped: true,
     build: async (ctx) => {
       const d = await ctx.fixtures.newDetector();
-      return { method: "DELETE", url: `/api/sites/${d.siteId}/schedule`, json: { ids: [d.detectorId] } };
+      // an approved fixture layout may place the new detector: confirm, as the schedule page does after the warning
+      return { method: "DELETE", url: `/api/sites/${d.siteId}/schedule`, json: { ids: [d.detectorId], confirmApproved: true } };
     },
     requiredKeys: ["ids"],
   },
@@ -415,7 +436,7 @@ export const routes: RouteEntry[] = [
     orgScoped: true,
     build: async (ctx) => {
       const d = await ctx.fixtures.newDetector();
-      return { method: "DELETE", url: `/api/sites/${d.siteId}/schedule/${d.detectorId}` };
+      return { method: "DELETE", url: `/api/sites/${d.siteId}/schedule/${d.detectorId}?confirmApproved=1` };
     },
   },
   {

@@ -219,8 +219,9 @@ export function makeFixtures(admin: APIRequestContext, conn: mariadb.Connection,
     const { siteId } = await scratchSite();
     const v = await ok(await admin.post(`/api/sites/${siteId}/layouts`, { data: { name: `Fixture approved layout ${++unique}`, suggestion: { allowShared: false, busCableM: 20 } } }), "layout to approve");
     const layoutId = v.layout.id as number;
-    const eng = await engineer();
-    for (const action of ["submit", "approve"]) await ok(await eng.post(`/api/layouts/${layoutId}/review`, { data: { action } }), `review ${action}`);
+    // a second pair of eyes: the admin who made it sends it, the engineer approves
+    await ok(await admin.post(`/api/layouts/${layoutId}/review`, { data: { action: "submit" } }), "review submit");
+    await ok(await (await engineer()).post(`/api/layouts/${layoutId}/review`, { data: { action: "approve" } }), "review approve");
     const sheet = await ok(await admin.get(`/api/layouts/${layoutId}/sheet`), "sheet");
     type Row = { spare: boolean; boardKey: string; input: number; expected: { test: string; nominalOhms: number | "Infinity" }[] };
     const loops = (sheet.sheet.boards as { rows: Row[] }[])

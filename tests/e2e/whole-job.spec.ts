@@ -69,7 +69,7 @@ test.afterAll(async () => {
 
 test.describe(() => {
   test.use(signedInAs("engineer"));
-  test("an engineer compares two layouts, records the choice and approves one", async ({ page }) => {
+  test("an engineer compares two layouts, records the choice and approves one", async ({ page, browser }) => {
     await page.goto(`/sites/${siteId}/layouts`);
     await page.getByTestId("compare-link").click();
     await page.waitForURL(/\/compare\?ids=/);
@@ -95,13 +95,17 @@ test.describe(() => {
     await expect(page.getByTestId("choose-message")).toContainText(`${chosen.name} chosen`);
     await expect(page.getByTestId("choices")).toContainText("full supervision coverage");
 
-    // review: send it, then approve it (the engineer may do both)
+    // review: the designer who made it sends it, the engineer (a second pair of eyes) approves it
     await page.goto(`/sites/${siteId}/layouts/${chosen.id}/review`);
     await expect(page.getByTestId("review-state")).toHaveAttribute("data-state", "draft");
     await expect(page.getByTestId("action-approve")).toHaveAttribute("data-allowed", "false");
     await expect(page.getByTestId("action-approve")).toContainText("send it for review first");
-    await page.getByTestId("action-submit").getByRole("button").click();
-    await expect(page.getByTestId("review-message")).toContainText("is now in review");
+    const designerContext = await browser.newContext(signedInAs("designer"));
+    const sent = await designerContext.request.post(`/api/layouts/${chosen.id}/review`, { data: { action: "submit" } });
+    expect(sent.status(), await sent.text()).toBe(200);
+    await designerContext.close();
+    await page.reload();
+    await expect(page.getByTestId("review-state")).toHaveAttribute("data-state", "in-review");
     await page.getByLabel("Add a comment").fill("Checked the battery size against the fire profile; fine.");
     await page.getByRole("button", { name: "Comment" }).click();
     await expect(page.getByTestId("comments")).toContainText("Checked the battery size");

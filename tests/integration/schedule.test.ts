@@ -108,7 +108,7 @@ describe("device schedule in MariaDB", () => {
     await expect(deleteDetectors(b.actors.designer, a.site.id, ids)).rejects.toMatchObject({ status: 404 });
     await expect(deleteDetectors(b.actors.designer, b.site.id, ids)).rejects.toMatchObject({ status: 404 });
     await expect(updateDetector(b.actors.designer, b.site.id, Number(ids[0]), { label: "taken" })).rejects.toMatchObject({ status: 404 });
-    expect(await deleteDetectors(a.actors.designer, a.site.id, ids.slice(0, 2))).toEqual({ deleted: 2 });
+    expect(await deleteDetectors(a.actors.designer, a.site.id, ids.slice(0, 2))).toEqual({ deleted: 2, approvedLayouts: [] });
     expect((await listSchedule(a.actors.designer, a.site.id)).map((d) => d.label)).toEqual(["Back door"]);
   });
 });

@@ -46,12 +46,16 @@ describe("sending the terminal sheet", () => {
     expect(await status(sendSheetToInstaller(f.actors.engineer, f.layout.id))).toBe(409); // no installer assigned yet
     await Site.update({ installerUserId: f.actors.installer.userId }, { where: { id: f.site.id } });
 
-    const sent = await sendSheetToInstaller(f.actors.engineer, f.layout.id, { size: "LETTER" });
+    // an unapproved revision goes out only once the sender confirms it is for review only
+    const before = received.length;
+    await expect(sendSheetToInstaller(f.actors.engineer, f.layout.id, { size: "LETTER" })).rejects.toMatchObject({ status: 409, extra: { code: "confirm-unapproved" } });
+    expect(received.length).toBe(before);
+    const sent = await sendSheetToInstaller(f.actors.engineer, f.layout.id, { size: "LETTER", confirmUnapproved: true });
     expect(sent).toMatchObject({ to: f.actors.installer.email, revision: 1, approved: false });
     const m = received.at(-1)!;
     expect(m.to).toEqual([f.actors.installer.email]);
-    expect(m.mail.subject).toBe("Terminal sheet: Send sheet site — Option A, revision 1");
-    expect(m.mail.text).toContain("NOT APPROVED — for review only");
+    expect(m.mail.subject).toBe("NOT APPROVED — FOR REVIEW ONLY: Terminal sheet: Send sheet site — Option A, revision 1");
+    expect(m.mail.text).toContain("NOT APPROVED — FOR REVIEW ONLY: this revision has not been approved. Do not wire to it");
     expect(m.mail.attachments).toHaveLength(1);
     const pdf = m.mail.attachments[0];
     expect(pdf.contentType).toBe("application/pdf");
@@ -59,6 +63,7 @@ describe("sending the terminal sheet", () => {
     expect(pdf.content.subarray(0, 5).toString("latin1")).toBe("%PDF-"); // ISO 32000-1, 7.5.2
     const read = await readPdf(pdf.content);
     expect(read.text).toContain("Front door");
+    for (const page of read.pages) expect(page.text).toContain("NOT APPROVED — FOR REVIEW ONLY");
     expect({ width: read.pages[0].width, height: read.pages[0].height }).toEqual({ width: 612, height: 792 }); // US Letter, 8.5 × 11 in at 72 pt/in
 
     const audit = await AuditEntry.findOne({ where: { action: "sheet.send", entityId: String(f.layout.id) } });
@@ -69,6 +74,8 @@ describe("sending the terminal sheet", () => {
     await reviewAction(f.actors.engineer, f.layout.id, { action: "approve" });
     await sendSheetToInstaller(f.actors.admin, f.layout.id);
     expect(received.at(-1)!.mail.text).toContain("(approved revision 1)");
+    expect(received.at(-1)!.mail.subject).not.toContain("NOT APPROVED");
+    expect((await readPdf(received.at(-1)!.mail.attachments[0].content)).text).not.toContain("NOT APPROVED");
   });
 
   it("another organisation's member gets 404, as for a layout that does not exist", async () => {

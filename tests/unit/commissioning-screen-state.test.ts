@@ -21,7 +21,7 @@ const passAll = (row: SheetInput): RecordedReading[] =>
   row.expected.map((e) => ({ boardKey: row.boardKey, input: row.input, test: e.test, reading: e.minOhms === Infinity ? { kind: "open" } : { kind: "ohms", ohms: e.nominalOhms }, verdict: "pass", diagnosis: null, recordedBy: "Test installer", recordedAt: "2026-12-01T10:00:00.000Z" }));
 const asViews = (rs: RecordedReading[], firstId = 1): ReadingView[] => rs.map((r, i) => ({ ...r, id: firstId + i, revision: 1, diagnosisCodes: [] }));
 
-const review = (commissionedRevision: number | null): EffectiveReview => ({ state: "approved", currentRevision: 1, inReviewRevision: null, approvedRevision: 1, commissionedRevision, note: null });
+const review = (commissionedRevision: number | null): EffectiveReview => ({ state: "approved", currentRevision: 1, inReviewRevision: null, approvedRevision: 1, commissionedRevision, approvedSolo: false, note: null });
 const view = (readings: ReadingView[] = [], photos: PhotoView[] = []): CommissioningView => ({ layoutId: 7, review: review(null), revision: 1, progress: progressOf(sheet, [], { loops: [], totals: { loops: 0, passed: 0, failed: 0, incomplete: 0, untested: 0, cannotTest: 0 }, readingsIgnored: 0 }), readings, photos });
 const photo = (id: number): PhotoView => ({ id, revision: 1, boardKey: "panel", input: 1, fileName: `p${id}.jpg`, contentType: "image/jpeg", sizeBytes: 10, uploadedBy: null, createdAt: "2026-12-01T10:00:00.000Z" });
 

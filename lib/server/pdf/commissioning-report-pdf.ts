@@ -58,10 +58,13 @@ export async function commissioningReportPdf(report: CommissioningProgressReport
         x.expected.rangeText,
         x.latest ? readingText(x.latest.reading) : "",
         x.latest ? (x.latest.verdict === "pass" ? "pass" : "FAIL") : "not tested",
-        x.latest?.diagnosis ?? "",
+        x.latest?.advice?.likelyCause ?? x.latest?.diagnosis ?? "",
         x.latest ? `${x.latest.recordedBy ?? "unknown"}, ${x.latest.recordedAt}` : "",
       ]),
     );
+    // The same words the installer's phone showed after the reading.
+    for (const x of loop.tests)
+      if (x.latest?.verdict === "fail" && x.latest.advice) paragraph(pdf, `${x.expected.instruction}: ${x.latest.advice.headline}. Likely cause: ${x.latest.advice.likelyCause ?? ""} Next check: ${x.latest.advice.nextCheck}`, { size: 8, color: "#991b1b" });
     const mine = photos.filter((p) => p.boardKey === loop.boardKey && p.input === loop.input);
     if (mine.length) paragraph(pdf, `Photos: ${mine.map((p) => `${p.fileName} (${Math.round(p.sizeBytes / 1024)} KiB, ${p.takenBy ?? "unknown"}, ${p.takenAt})`).join("; ")}`, { size: 8 });
   }

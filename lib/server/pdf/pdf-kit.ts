@@ -46,7 +46,10 @@ export interface Pdf {
   toBuffer(): Promise<Buffer>;
 }
 
-export function createPdf(opts: { size: PageSize; title: string; subject?: string }): Pdf {
+/** Printed at the top of every page of a terminal sheet whose revision is not approved. */
+export const NOT_APPROVED_MARKING = "NOT APPROVED — FOR REVIEW ONLY";
+
+export function createPdf(opts: { size: PageSize; title: string; subject?: string; marking?: string }): Pdf {
   const f = loadFonts();
   const margin = 42;
   // `font` replaces pdfkit's default Helvetica, so none of its bundled AFM files are read.
@@ -67,19 +70,25 @@ export function createPdf(opts: { size: PageSize; title: string; subject?: strin
     margin,
     width: doc.page.width - 2 * margin,
     toBuffer: () => {
-      footers(doc, margin, opts.title);
+      footers(doc, margin, opts.title, opts.marking);
       doc.end();
       return done;
     },
   };
 }
 
-function footers(doc: Doc, margin: number, title: string) {
+function footers(doc: Doc, margin: number, title: string, marking?: string) {
   const range = doc.bufferedPageRange();
   for (let i = range.start; i < range.start + range.count; i++) {
     doc.switchToPage(i);
     const bottom = doc.page.margins.bottom;
     doc.page.margins.bottom = 0; // writing inside the bottom margin must not start a new page
+    if (marking) {
+      // In the top margin of every page, so no page of an unapproved sheet can be taken for the approved one.
+      doc.save().rect(margin, 8, doc.page.width - 2 * margin, 22).fillAndStroke("#fde8e8", "#b91c1c").restore();
+      writeText(doc, marking, { x: margin, y: 13, width: doc.page.width - 2 * margin, size: 11, bold: true, color: "#991b1b", align: "center" });
+      writeText(doc, marking, { x: margin, y: doc.page.height - margin + 24, width: doc.page.width - 2 * margin, size: 7, bold: true, color: "#991b1b" });
+    }
     writeText(doc, `${title} · page ${i + 1} of ${range.count}`, { x: margin, y: doc.page.height - margin + 14, width: doc.page.width - 2 * margin, size: 7, color: "#666666" });
     doc.page.margins.bottom = bottom;
   }

@@ -2,7 +2,7 @@ import "server-only";
 import { REPORT_WORDS } from "@/lib/loop/row-labels";
 import type { SheetBoard, SheetInput, SpareInput, TerminalSheet } from "@/lib/sheet/sheet-types";
 import { powerSection } from "@/lib/server/pdf/power-section";
-import { createPdf, heading, noticeBox, paragraph, table, type PageSize, type Pdf } from "@/lib/server/pdf/pdf-kit";
+import { createPdf, heading, noticeBox, NOT_APPROVED_MARKING, paragraph, table, type PageSize, type Pdf } from "@/lib/server/pdf/pdf-kit";
 
 // The terminal sheet as a PDF for the installer: one section per board, every input with its wiring and the
 // meter reading expected in each test, an empty measured column and a sign-off.
@@ -13,6 +13,16 @@ export interface SheetMeta {
   revision: number;
   /** Shown as given, e.g. an ISO date. */
   generatedAt: string;
+  /** The revision is approved (or commissioned); anything else is marked "not approved" on every page. */
+  approved?: boolean;
+  /** The approval was given by the person who sent or made the revision (the organisation allows it). */
+  approvedSolo?: boolean;
+}
+
+/** The approval line of a sheet, the same on the page and in the PDF. */
+export function approvalLine(meta: SheetMeta): string {
+  if (!meta.approved) return `Revision ${meta.revision} is not approved: for review only, not for wiring.`;
+  return `Approved revision ${meta.revision}${meta.approvedSolo ? " — approved without a second review" : ""}.`;
 }
 
 const contactWords = (c: "NC" | "NO") => (c === "NC" ? "normally closed (NC)" : "normally open (NO)");
@@ -79,8 +89,9 @@ function boardSection(pdf: Pdf, b: SheetBoard, caution: string | null): void {
 
 export async function terminalSheetPdf(sheet: TerminalSheet, meta: SheetMeta, size: PageSize = "A4"): Promise<Buffer> {
   const title = `Terminal sheet — ${meta.siteName} — ${meta.layoutName}, revision ${meta.revision}`;
-  const pdf = createPdf({ size, title });
+  const pdf = createPdf({ size, title, ...(meta.approved ? {} : { marking: NOT_APPROVED_MARKING }) });
   heading(pdf, title, 15);
+  paragraph(pdf, approvalLine(meta), { bold: true, ...(meta.approved && !meta.approvedSolo ? {} : { color: "#991b1b" }) });
   paragraph(pdf, `Control panel: ${sheet.panel?.name ?? "unknown"} · ${sheet.zoneCount} zones · made ${meta.generatedAt}`);
   if (sheet.caution) noticeBox(pdf, sheet.caution);
   paragraph(pdf, sheet.measuringNote, { size: 8, color: "#444444" });

@@ -11,5 +11,5 @@ export const GET = route({ permission: "layout:read", params }, async ({ actor, 
 // PUT /api/layouts/:layoutId — save a revision (409 { error, currentVersion } on a stale version, 422 on unknown references)
 export const PUT = route({ permission: "layout:write", params, body: saveLayoutSchema }, async ({ actor, params, body }) => saveLayout(actor, params.layoutId, body));
 
-// DELETE /api/layouts/:layoutId — delete the layout and its revisions
+// DELETE /api/layouts/:layoutId — delete a draft layout and its revisions (409 for an approved or commissioned one: archive it)
 export const DELETE = route({ permission: "layout:write", params }, async ({ actor, params }) => deleteLayout(actor, params.layoutId));

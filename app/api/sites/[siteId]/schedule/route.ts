@@ -15,5 +15,5 @@ export const POST = route({ permission: "schedule:write", params, body: createDe
 // PATCH /api/sites/:siteId/schedule — bulk edit: one patch for many detectors, all or nothing
 export const PATCH = route({ permission: "schedule:write", params, body: bulkEditPatchSchema }, async ({ actor, params, body }) => bulkEditDetectors(actor, params.siteId, body));
 
-// DELETE /api/sites/:siteId/schedule — delete the detectors named in { ids }, all or nothing
-export const DELETE = route({ permission: "schedule:write", params, body: deleteDetectorsSchema }, async ({ actor, params, body }) => deleteDetectors(actor, params.siteId, body.ids));
+// DELETE /api/sites/:siteId/schedule — delete the detectors named in { ids }, all or nothing (409 for detectors on an approved layout unless confirmApproved)
+export const DELETE = route({ permission: "schedule:write", params, body: deleteDetectorsSchema }, async ({ actor, params, body }) => deleteDetectors(actor, params.siteId, body.ids, { confirmApproved: body.confirmApproved }));

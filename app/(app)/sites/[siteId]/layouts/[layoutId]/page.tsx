@@ -8,6 +8,7 @@ import { Refusal } from "@/components/ui/refusal";
 import { ReviewedEditor } from "@/components/review/reviewed-editor";
 import { findLayoutForReview } from "@/lib/server/sheets";
 import { orNotFound } from "@/lib/server/page-load";
+import { approvedScheduleDrift } from "@/lib/server/schedule-drift";
 
 export const metadata: Metadata = { title: "Layout editor" };
 
@@ -21,6 +22,6 @@ export default async function LayoutEditorPage({ params }: { params: Promise<{ s
   const data = await orNotFound(loadLayoutForEditor(actor, lid.data));
   if (data.site.id !== sid.data) notFound();
   const canWrite = can(actor.role, "layout:write");
-  const { review } = await findLayoutForReview(actor, data.layout.id);
-  return <ReviewedEditor key={data.layout.id} review={review} editor={{ layout: data.layout, document: data.document, site: data.site, schedule: data.schedule, catalog: data.catalog, canWrite, readOnlyReason: canWrite ? "" : refusal(actor.role, "layout:write") }} />;
+  const [{ review }, drift] = await Promise.all([findLayoutForReview(actor, data.layout.id), approvedScheduleDrift(actor, data.layout.id)]);
+  return <ReviewedEditor key={data.layout.id} review={review} drift={drift} editor={{ layout: data.layout, document: data.document, site: data.site, schedule: data.schedule, catalog: data.catalog, canWrite, readOnlyReason: canWrite ? "" : refusal(actor.role, "layout:write") }} />;
 }

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { pageActor } from "@/lib/server/session";
 import { getCommissioning } from "@/lib/server/commissioning";
-import { findLayoutForReview, getTerminalSheet } from "@/lib/server/sheets";
+import { findLayoutForReview, getTerminalSheet, loadSheetContext } from "@/lib/server/sheets";
 import { catalogFor } from "@/lib/server/schedules";
 import { idParam } from "@/lib/server/route";
 import { can, refusal } from "@/lib/auth/permissions";
@@ -24,7 +24,11 @@ export default async function CommissioningPage({ params }: { params: Promise<{ 
   const ref = await orNotFound(findLayoutForReview(actor, lid.data));
   if (ref.layout.siteId !== sid.data) notFound();
   const view = await getCommissioning(actor, lid.data);
-  const [sheet, catalog] = await Promise.all([view.revision === null ? null : getTerminalSheet(actor, lid.data, { revision: view.revision }), catalogFor(actor.organisationId)]);
+  // The approved revision's own catalog (frozen with it), so the phone judges readings as the server does.
+  const [sheet, catalog] = await Promise.all([
+    view.revision === null ? null : getTerminalSheet(actor, lid.data, { revision: view.revision }),
+    view.revision === null ? catalogFor(actor.organisationId) : loadSheetContext(actor, lid.data, { revision: view.revision }).then((c) => c.catalog),
+  ]);
   const canRecord = can(actor.role, "commissioning:record");
   return (
     <>

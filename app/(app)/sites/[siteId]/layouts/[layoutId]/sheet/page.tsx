@@ -9,6 +9,8 @@ import { Refusal } from "@/components/ui/refusal";
 import { LayoutTabs } from "@/components/review/layout-tabs";
 import { TerminalSheetView } from "@/components/sheet/terminal-sheet-view";
 import { orNotFound } from "@/lib/server/page-load";
+import { approvedScheduleDrift } from "@/lib/server/schedule-drift";
+import Link from "next/link";
 
 export const metadata: Metadata = { title: "Terminal sheet" };
 
@@ -23,11 +25,19 @@ export default async function SheetPage({ params, searchParams }: { params: Prom
   if (!sid.success || !lid.success || (rev && !rev.success)) notFound();
   const view = await orNotFound(getTerminalSheet(actor, lid.data, { revision: rev?.data }));
   if (view.siteId !== sid.data) notFound();
-  const installer = await layoutInstaller(actor, view.layoutId);
+  const [installer, drift] = await Promise.all([layoutInstaller(actor, view.layoutId), view.approved ? approvedScheduleDrift(actor, view.layoutId) : Promise.resolve(null)]);
   const canSend = can(actor.role, "sheet:send");
   return (
     <>
       <LayoutTabs siteId={view.siteId} siteName={view.meta.siteName} layoutId={view.layoutId} layoutName={view.meta.layoutName} review={view.review} current="sheet" />
+      {drift?.headline && drift.approvedRevision === view.meta.revision ? (
+        <p role="note" className="no-print mb-3 rounded-md border-2 border-warn bg-warn-soft p-3 text-sm" data-testid="schedule-drift">
+          <strong>{drift.headline}</strong> This sheet stays as approved.{" "}
+          <Link className="font-medium text-signal underline" href={`/sites/${view.siteId}/layouts/${view.layoutId}`}>
+            See the differences on the layout
+          </Link>
+        </p>
+      ) : null}
       <TerminalSheetView view={view} installer={installer ? { name: installer.name, email: installer.email } : null} canSend={canSend} sendRefusal={canSend ? "" : refusal(actor.role, "sheet:send")} />
     </>
   );
