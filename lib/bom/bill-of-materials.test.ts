@@ -69,7 +69,7 @@ describe("CSV exports", () => {
     const { records, error } = readCsv(bomCsv(billOfMaterials(midLayout, midSchedule, catalog)));
     expect(error).toBeNull();
     const panelName = catalog.panels.find((p) => p.id === "panel-mid-16")!.name;
-    expect(records[1]).toEqual(["panel", "panel-mid-16", panelName, "1", "260.00", "260.00", ""]);
+    expect(records[1]).toEqual(["panel", "panel-mid-16", panelName, "1", "260.00", "260.00", "", "EUR"]);
     const total = records.at(-1)!;
     expect([total[0], total[5]]).toEqual(["total", "472.00"]);
   });

@@ -50,6 +50,9 @@ describe("lengths and gauges in the organisation's unit system", () => {
     expect(us.length(30)).toBe("98 ft");
     expect(gb.length(30)).toBe("30 m");
     expect(gb.length(2.25)).toBe("2.3 m");
+    // a limit is never overstated: 123.7 m allowed reads 123 m, 405.8 ft reads 405 ft
+    expect(gb.length(123.7, "down")).toBe("123 m");
+    expect(us.length(123.7, "down")).toBe("405 ft");
   });
   it("shows a gauge in the unit system, with the gauge as entered when converted", () => {
     // ASTM B258: 22 AWG is 0.644 mm across, 0.326 mm²; 24 AWG 0.205 mm²

@@ -17,8 +17,8 @@ export interface Format {
   money(amount: number): string;
   /** An amount as a plain number in the currency's usual decimals, for CSV cells that spreadsheets compute with. */
   moneyPlain(amount: number): string;
-  /** A cable length given in metres, in the organisation's unit system. */
-  length(metres: number): string;
+  /** A cable length given in metres, in the organisation's unit system; `down` for a limit that must not be overstated. */
+  length(metres: number, round?: "nearest" | "down"): string;
   /** A gauge in the organisation's unit system, with the gauge as entered when it was converted. */
   gauge(gauge: CableGauge): string;
 }
@@ -35,9 +35,11 @@ export function metresToFeet(metres: number): number {
   return metres / METRES_PER_FOOT;
 }
 
-function lengthIn(units: UnitSystem, metres: number, locale: string): string {
-  const value = units === "imperial" ? metresToFeet(metres) : metres;
-  const text = new Intl.NumberFormat(locale, { maximumFractionDigits: value < 10 ? 1 : 0 }).format(value);
+function lengthIn(units: UnitSystem, metres: number, locale: string, round: "nearest" | "down"): string {
+  const exact = units === "imperial" ? metresToFeet(metres) : metres;
+  const digits = exact < 10 ? 1 : 0;
+  const value = round === "down" ? Math.floor(exact * 10 ** digits) / 10 ** digits : exact;
+  const text = new Intl.NumberFormat(locale, { maximumFractionDigits: digits }).format(value);
   return `${text} ${units === "imperial" ? "ft" : "m"}`;
 }
 
@@ -70,7 +72,7 @@ export function makeFormat(settings: FormatSettings): Format {
     date: (when) => safe(dateFormat, when),
     money: (amount) => moneyFormat.format(amount),
     moneyPlain: (amount) => amount.toFixed(digits),
-    length: (metres) => lengthIn(settings.units, metres, settings.locale),
+    length: (metres, round = "nearest") => lengthIn(settings.units, metres, settings.locale, round),
     gauge: (g) => gaugeIn(settings.units, g, settings.locale),
   };
 }

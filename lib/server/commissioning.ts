@@ -1,4 +1,5 @@
 import "server-only";
+import { makeFormat } from "@/lib/format/format";
 import { randomUUID } from "node:crypto";
 import { UniqueConstraintError, type Transaction } from "sequelize";
 import { db } from "./db";
@@ -253,10 +254,11 @@ export async function commissioningReportPdfFor(actor: Actor, layoutId: number, 
   if (rev === null) throw new ApiError(409, "There is no commissioning record: the layout has no approved revision yet.");
   const { sheet, ctx } = await sheetOf(actor, ref, rev);
   const [readings, photos] = await Promise.all([readingsOf(layoutId, rev), CommissioningPhoto.findAll({ where: { layoutId, revision: rev }, include: [{ model: User, as: "uploader", attributes: ["name"] }], order: [["id", "ASC"]] })]);
+  const fmt = makeFormat(actor.settings);
   const reportPhotos: ReportPhoto[] = photos.map((p) => {
     const v = photoView(p);
-    return { boardKey: v.boardKey ?? "", input: v.input, fileName: v.fileName, sizeBytes: v.sizeBytes, takenBy: v.uploadedBy, takenAt: v.createdAt };
+    return { boardKey: v.boardKey ?? "", input: v.input, fileName: v.fileName, sizeBytes: v.sizeBytes, takenBy: v.uploadedBy, takenAt: fmt.dateTime(v.createdAt) };
   });
-  const pdf = await commissioningReportPdfOffLoop(commissioningProgress(sheet, readings), { ...sheetMetaOf(ctx), caution: sheet.caution }, reportPhotos, size);
+  const pdf = await commissioningReportPdfOffLoop(commissioningProgress(sheet, readings), { ...sheetMetaOf(ctx, actor.settings), caution: sheet.caution }, reportPhotos, size);
   return { pdf, fileName: `${fileStem("commissioning", ctx.site.name, ctx.layout.name, `rev-${rev}`)}.pdf` };
 }

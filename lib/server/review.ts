@@ -1,4 +1,5 @@
 import "server-only";
+import { makeFormat } from "@/lib/format/format";
 import { Op } from "sequelize";
 import { db } from "./db";
 import { audit } from "./audit";
@@ -175,7 +176,7 @@ export async function compareSiteLayouts(actor: Actor, siteId: number, layoutIds
   return {
     siteId,
     layouts: layouts.map((l) => ({ id: l.id, name: l.name, revision: l.currentRevision, status: l.status })),
-    comparison: compareLayouts(candidates, schedule, catalog),
+    comparison: compareLayouts(candidates, schedule, catalog, makeFormat(actor.settings).money),
   };
 }
 

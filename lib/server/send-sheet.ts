@@ -24,7 +24,7 @@ const pdfCache = new Map<string, Buffer>();
 /** The terminal sheet PDF of a revision (the approved one by default), from the cache when the same sheet was made before. */
 export async function terminalSheetPdfCached(actor: Actor, layoutId: number, opts: SheetOptions & { size?: PageSize } = {}): Promise<{ pdf: Buffer; fileName: string }> {
   const ctx = await loadSheetContext(actor, layoutId, opts);
-  const meta = sheetMetaOf(ctx);
+  const meta = sheetMetaOf(ctx, actor.settings);
   const size = opts.size ?? "A4";
   const key = createHash("sha256").update(JSON.stringify({ document: ctx.document, schedule: ctx.schedule, catalog: ctx.catalog, meta, size }, loopJsonReplacer)).digest("hex");
   let pdf = pdfCache.get(key);
