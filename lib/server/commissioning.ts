@@ -20,6 +20,7 @@ import type { SheetInput, TerminalSheet, TestKey } from "@/lib/sheet/sheet-types
 import type { ReportPhoto } from "@/lib/server/pdf/commissioning-report-pdf";
 import { commissioningReportPdfOffLoop } from "@/lib/server/workers/off-loop";
 import type { PageSize } from "@/lib/server/pdf/pdf-kit";
+import { paperOf } from "@/lib/sheet/sheet-request-schema";
 
 // Commissioning of a layout's approved revision: meter readings judged against the terminal sheet (stored once
 // per client id, so a retry after a lost answer stores nothing twice), photos in object storage, progress, the record.
@@ -247,7 +248,8 @@ export async function getPhoto(actor: Actor, layoutId: number, photoId: number, 
   return { body: obj.body, contentType: p.contentType, fileName: p.fileName };
 }
 
-export async function commissioningReportPdfFor(actor: Actor, layoutId: number, size: PageSize = "A4"): Promise<{ pdf: Buffer; fileName: string }> {
+export async function commissioningReportPdfFor(actor: Actor, layoutId: number, requested?: PageSize): Promise<{ pdf: Buffer; fileName: string }> {
+  const size = requested ?? paperOf(actor.settings);
   ensureCan(actor, "sheet:read");
   const ref = await findLayoutForReview(actor, layoutId);
   const rev = commissioningRevision(ref.review);

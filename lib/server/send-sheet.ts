@@ -10,6 +10,7 @@ import { fileStem, findLayoutForReview, getTerminalSheet, loadSheetContext, shee
 import type { Actor } from "./session";
 import { Membership, Site, User } from "@/models";
 import type { PageSize } from "@/lib/server/pdf/pdf-kit";
+import { paperOf } from "@/lib/sheet/sheet-request-schema";
 import { terminalSheetPdfOffLoop } from "@/lib/server/workers/off-loop";
 import { loopJsonReplacer } from "@/lib/loop/loop-json";
 
@@ -25,7 +26,7 @@ const pdfCache = new Map<string, Buffer>();
 export async function terminalSheetPdfCached(actor: Actor, layoutId: number, opts: SheetOptions & { size?: PageSize } = {}): Promise<{ pdf: Buffer; fileName: string }> {
   const ctx = await loadSheetContext(actor, layoutId, opts);
   const meta = sheetMetaOf(ctx, actor.settings);
-  const size = opts.size ?? "A4";
+  const size = opts.size ?? paperOf(actor.settings);
   const key = createHash("sha256").update(JSON.stringify({ document: ctx.document, schedule: ctx.schedule, catalog: ctx.catalog, meta, size }, loopJsonReplacer)).digest("hex");
   let pdf = pdfCache.get(key);
   if (pdf) pdfCache.delete(key);
@@ -70,7 +71,7 @@ export async function sendSheetToInstaller(actor: Actor, layoutId: number, opts:
   const installer = await layoutInstaller(actor, layoutId);
   if (!installer) throw new ApiError(409, "This site has no installer assigned: assign one on the site first, then send the sheet.");
   const view = await getTerminalSheet(actor, layoutId);
-  const { pdf, fileName } = await terminalSheetPdfCached(actor, layoutId, { size: opts.size ?? "A4" });
+  const { pdf, fileName } = await terminalSheetPdfCached(actor, layoutId, { size: opts.size ?? paperOf(actor.settings) });
   const rev = view.meta.revision;
   const status = view.approved ? `approved revision ${rev}` : `revision ${rev}, NOT APPROVED — for review only`;
   const link = `${env().NEXTAUTH_URL}/sites/${view.siteId}/layouts/${layoutId}/sheet`;
