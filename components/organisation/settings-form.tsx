@@ -18,8 +18,8 @@ export function SettingsForm({ initial }: { initial: OrganisationSettingsInput }
   const [saved, setSaved] = useState(initial);
   const [message, setMessage] = useState<string | null>(null);
   const form = useSchemaForm(organisationSettingsSchema, FIELDS);
-  const zones = useMemo(knownTimeZones, []);
-  const currencies = useMemo(knownCurrencies, []);
+  const zones = useMemo(() => knownTimeZones(), []);
+  const currencies = useMemo(() => knownCurrencies(), []);
   const sample = makeFormat(saved);
 
   async function onSubmit(e: React.FormEvent<HTMLFormElement>) {
