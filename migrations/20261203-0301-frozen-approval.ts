@@ -1,22 +1,15 @@
 import { DataTypes, type QueryInterface } from "sequelize";
 
 // A second pair of eyes and a frozen approved design:
-// - organisations.allow_solo_approval: whether one person may both send a layout for review and approve it
-//   (off by default). The organisation settings work adds the same column; whichever migration runs first
-//   creates it and the other leaves it as it is.
+// (Whether one person may both send a layout for review and approve it is organisations.solo_approval, added with
+// the organisation settings.)
 // - layout_reviews.approved_solo: the approval was given without a second review (only with that setting on).
 // - layouts.archived_at / archived_by: an approved or commissioned layout is archived, never deleted.
 // - layout_revision_snapshots: the schedule rows and the catalog a revision was solved against, taken when it is
 //   sent for review and kept with the approval, so the approved terminal sheet, its commissioning and comparison
 //   never change when the live schedule or catalog does.
 
-async function hasColumn(qi: QueryInterface, table: string, column: string): Promise<boolean> {
-  const cols = await qi.describeTable(table);
-  return column in cols;
-}
-
 export async function up({ context: qi }: { context: QueryInterface }) {
-  if (!(await hasColumn(qi, "organisations", "allow_solo_approval"))) await qi.addColumn("organisations", "allow_solo_approval", { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false });
   await qi.addColumn("layout_reviews", "approved_solo", { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false });
   await qi.addColumn("layouts", "archived_at", { type: DataTypes.DATE, allowNull: true });
   await qi.addColumn("layouts", "archived_by", { type: DataTypes.INTEGER.UNSIGNED, allowNull: true, references: { model: "users", key: "id" }, onDelete: "SET NULL" });
@@ -39,5 +32,4 @@ export async function down({ context: qi }: { context: QueryInterface }) {
   await qi.removeColumn("layouts", "archived_by");
   await qi.removeColumn("layouts", "archived_at");
   await qi.removeColumn("layout_reviews", "approved_solo");
-  // allow_solo_approval stays: the organisation settings own it as well.
 }

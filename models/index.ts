@@ -2,6 +2,9 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 
 import { roles, type Role } from "../lib/auth/permissions";
 import { initCatalogModels } from "./catalog";
+import { paperSizes, unitSystems, type PaperSize, type UnitSystem } from "../lib/organisation/settings-schema";
+import { initAccountModels } from "./account";
+export { AccountToken } from "./account";
 
 export { OrganisationCatalog } from "./catalog";
 import { initReviewModels } from "./review";
@@ -12,8 +15,13 @@ export { Layout, LayoutRevision, ScheduleDetectorRecord } from "./design";
 export class Organisation extends Model<InferAttributes<Organisation>, InferCreationAttributes<Organisation>> {
   declare id: CreationOptional<number>;
   declare name: string;
+  declare currency: CreationOptional<string>;
+  declare locale: CreationOptional<string>;
+  declare timeZone: CreationOptional<string>;
+  declare paper: CreationOptional<PaperSize>;
+  declare units: CreationOptional<UnitSystem>;
   /** One person may both send a layout for review and approve it (off by default). */
-  declare allowSoloApproval: CreationOptional<boolean>;
+  declare soloApproval: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -25,6 +33,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare passwordHash: string | null;
   /** Raised to end the user's sessions; the session token carries the value it was signed in with. */
   declare sessionVersion: CreationOptional<number>;
+  /** False only for an account made through sign-up until its e-mail link is opened. */
+  declare emailConfirmed: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -110,9 +120,22 @@ const stamps = { createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE } as const
  * modelName is explicit: the production build minifies class names, and Sequelize would otherwise name models after them.
  */
 export function initModels(sequelize: Sequelize) {
-  Organisation.init({ id, name: { type: DataTypes.STRING(200), allowNull: false }, allowSoloApproval: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false }, ...stamps }, { sequelize, modelName: "Organisation", tableName: "organisations" });
+  Organisation.init(
+    {
+      id,
+      name: { type: DataTypes.STRING(200), allowNull: false },
+      currency: { type: DataTypes.CHAR(3), allowNull: false, defaultValue: "EUR" },
+      locale: { type: DataTypes.STRING(35), allowNull: false, defaultValue: "en-GB" },
+      timeZone: { type: DataTypes.STRING(64), allowNull: false, defaultValue: "UTC" },
+      paper: { type: DataTypes.ENUM(...paperSizes), allowNull: false, defaultValue: "a4" },
+      units: { type: DataTypes.ENUM(...unitSystems), allowNull: false, defaultValue: "metric" },
+      soloApproval: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+      ...stamps,
+    },
+    { sequelize, modelName: "Organisation", tableName: "organisations" },
+  );
   User.init(
-    { id, email: { type: DataTypes.STRING(254), allowNull: false, unique: true }, name: { type: DataTypes.STRING(200), allowNull: false }, passwordHash: { type: DataTypes.STRING(100), allowNull: true }, sessionVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 }, ...stamps },
+    { id, email: { type: DataTypes.STRING(254), allowNull: false, unique: true }, name: { type: DataTypes.STRING(200), allowNull: false }, passwordHash: { type: DataTypes.STRING(100), allowNull: true }, sessionVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 }, emailConfirmed: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true }, ...stamps },
     { sequelize, modelName: "User", tableName: "users" },
   );
   Membership.init(
@@ -185,6 +208,7 @@ export function initModels(sequelize: Sequelize) {
   );
 
   initCatalogModels(sequelize);
+  initAccountModels(sequelize);
 
   Membership.belongsTo(Organisation, { foreignKey: "organisationId" });
   Membership.belongsTo(User, { foreignKey: "userId" });

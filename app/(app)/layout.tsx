@@ -2,6 +2,7 @@ import type { ReactNode } from "react";
 import { redirect } from "next/navigation";
 import { currentActor } from "@/lib/server/session";
 import { AppNav } from "@/components/shell/app-nav";
+import { FormatProvider } from "@/components/format/format-provider";
 
 export const dynamic = "force-dynamic";
 
@@ -12,7 +13,9 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
   return (
     <>
       <AppNav actor={actor} />
-      <main className="mx-auto max-w-7xl px-4 py-6">{children}</main>
+      <FormatProvider settings={{ locale: actor.settings.locale, timeZone: actor.settings.timeZone, currency: actor.settings.currency, units: actor.settings.units }}>
+        <main className="mx-auto max-w-7xl px-4 py-6">{children}</main>
+      </FormatProvider>
     </>
   );
 }

@@ -7,10 +7,13 @@ import { kindHeading } from "@/lib/catalog/kinds";
 import { Card } from "@/components/ui/card";
 import { cellValue, columnsFor, tableQuery, visibleRows, type CatalogRow, type Column, type TableState } from "./catalog-table-model";
 import { OriginBadge } from "./origin-badge";
+import { useFormat } from "@/components/format/format-provider";
 
 function Cell({ row, column }: { row: CatalogRow; column: Column }) {
+  const fmt = useFormat();
   const v = cellValue(row, column.key);
   if (v === null) return <span className="text-slate-400">—</span>;
+  if (column.key === "listPrice" && typeof v === "number") return <>{fmt.money(v)}</>;
   return (
     <>
       {v}

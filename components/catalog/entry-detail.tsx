@@ -10,7 +10,8 @@ import { readingMarks } from "./band-scale-geometry";
 import { reportLabel, schemeLabel, stateLabel } from "./catalog-words";
 
 /** Every figure of an entry with its unit and the field it comes from (the name to use in an upload). */
-export function FiguresTable({ kind, entry }: { kind: CatalogKind; entry: CatalogEntry }) {
+/** `money` writes the list price as the organisation writes money (lib/format). */
+export function FiguresTable({ kind, entry, money }: { kind: CatalogKind; entry: CatalogEntry; money: (amount: number) => string }) {
   const figures = entryFigures(kind, entry);
   const price = "listPrice" in entry ? entry.listPrice : null;
   return (
@@ -33,7 +34,7 @@ export function FiguresTable({ kind, entry }: { kind: CatalogKind; entry: Catalo
             <th scope="row" className="py-1.5 pr-3 text-left font-medium">
               List price
             </th>
-            <td className="py-1.5 pr-3 tabular-nums">{price}</td>
+            <td className="py-1.5 pr-3 tabular-nums">{money(price)}</td>
             <td className="py-1.5 font-mono text-xs text-slate-500">listPrice</td>
           </tr>
         ) : null}

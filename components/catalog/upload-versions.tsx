@@ -3,7 +3,8 @@ import type { CatalogUpload } from "@/lib/server/catalogs";
 const kib = (bytes: number) => `${(bytes / 1024).toFixed(1)} KiB`;
 
 /** The stored versions of the organisation's catalog file, newest first, each downloadable. */
-export function UploadVersions({ uploads, inUseVersion }: { uploads: CatalogUpload[]; inUseVersion: number | null }) {
+/** `when` writes a date as the organisation does (lib/format). */
+export function UploadVersions({ uploads, inUseVersion, when }: { uploads: CatalogUpload[]; inUseVersion: number | null; when: (iso: string) => string }) {
   if (!uploads.length) return <p className="text-sm text-slate-600">Your organisation has uploaded no catalog file: the shipped catalog is in use.</p>;
   return (
     <div className="overflow-x-auto">
@@ -32,7 +33,7 @@ export function UploadVersions({ uploads, inUseVersion }: { uploads: CatalogUplo
                 {u.sha256.slice(0, 12)}…
               </td>
               <td className="pr-2">{u.uploadedBy?.name ?? "—"}</td>
-              <td className="pr-2 whitespace-nowrap">{u.createdAt.replace("T", " ").slice(0, 16)}</td>
+              <td className="pr-2 whitespace-nowrap">{when(u.createdAt)}</td>
               <td>
                 <a className="text-signal hover:underline" href={`/api/catalog/uploads/${u.id}`} download={u.fileName}>
                   Download<span className="sr-only"> version {u.version}</span>

@@ -1,6 +1,7 @@
 import type { QueuedReading } from "@/components/commissioning/reading-queue";
 import { waitingText } from "@/components/commissioning/reading-queue";
 import { RETRY_MS } from "@/components/commissioning/queue-store";
+import { useFormat } from "@/components/format/format-provider";
 
 interface WaitingBannerProps {
   waiting: QueuedReading[];
@@ -11,6 +12,7 @@ interface WaitingBannerProps {
 
 /** How many readings are kept on the device, and a way to send them now. */
 export function WaitingBanner({ waiting, online, lastTry, onSend }: WaitingBannerProps) {
+  const fmt = useFormat();
   if (!waiting.length)
     return (
       <p className="mt-2 text-sm text-slate-600" data-testid="queue" data-count={0}>
@@ -24,7 +26,7 @@ export function WaitingBanner({ waiting, online, lastTry, onSend }: WaitingBanne
         {waitingText(waiting.length)}
         <span className="block text-xs font-normal">
           Kept on this device and sent again every {RETRY_MS / 1000} s and when the connection comes back{online ? "" : " (offline now)"}
-          {lastTry ? `; last try ${lastTry.toLocaleTimeString("en-GB")}` : ""}
+          {lastTry ? `; last try ${fmt.dateTime(lastTry)}` : ""}
           {waiting[0]?.lastError ? ` (${waiting[0].lastError})` : ""}.
         </span>
       </p>

@@ -6,10 +6,11 @@ import type { DecisionView } from "@/lib/server/review";
 import { describeError, FetchError, sendJson } from "@/lib/client/fetcher";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
-import { when } from "@/components/review/review-words";
+import { useFormat } from "@/components/format/format-provider";
 
 /** Record which of the compared layouts is chosen and why; the choices already recorded below. */
 export function ChooseForm({ siteId, columns, comparedIds, canChoose, choices: initial }: { siteId: number; columns: ComparisonColumn[]; comparedIds: number[]; canChoose: boolean; choices: DecisionView[] }) {
+  const fmt = useFormat();
   const [chosen, setChosen] = useState<number | null>(null);
   const [reason, setReason] = useState("");
   const [choices, setChoices] = useState(initial);
@@ -72,7 +73,7 @@ export function ChooseForm({ siteId, columns, comparedIds, canChoose, choices: i
                 {d.decidedBy ? ` by ${d.decidedBy}` : ""}
               </p>
               <p className="text-slate-700">“{d.reason}”</p>
-              <p className="text-xs text-slate-500">{when(d.createdAt)}</p>
+              <p className="text-xs text-slate-500">{fmt.dateTime(d.createdAt)}</p>
             </li>
           ))}
         </ol>

@@ -2,10 +2,12 @@
 
 import type { ComparisonColumn } from "@/lib/compare/compare-layouts";
 import { Card } from "@/components/ui/card";
-import { money, SEVERITY_STYLE } from "@/components/compare/compare-format";
+import { SEVERITY_STYLE } from "@/components/compare/compare-format";
+import { useFormat } from "@/components/format/format-provider";
 
 /** One compared layout in full: what each shared input trades, every finding, and the bill of materials. */
 export function CompareDetails({ column: c }: { column: ComparisonColumn }) {
+  const { money } = useFormat();
   return (
     <Card data-testid={`compare-details-${Number(c.id)}`}>
       <h3 className="font-semibold">{c.name}</h3>

@@ -2,7 +2,6 @@ import type { BomLine } from "@/lib/bom/bill-of-materials";
 
 // How the compare page writes its figures.
 
-export const money = (x: number) => x.toLocaleString("en-GB", { minimumFractionDigits: 2, maximumFractionDigits: 2 });
 export const ma = (x: number) => `${Math.round(x)} mA`;
 export const pct = (x: number | null) => (x === null ? "no inputs used" : `${Math.round(x * 100)} %`);
 export const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;

@@ -3,7 +3,8 @@
 import Link from "next/link";
 import type { ComparisonView } from "@/lib/server/review";
 import { Card } from "@/components/ui/card";
-import { HARDWARE, isBest, loadStyle, ma, money, pct, plural } from "@/components/compare/compare-format";
+import { HARDWARE, isBest, loadStyle, ma, pct, plural } from "@/components/compare/compare-format";
+import { useFormat } from "@/components/format/format-provider";
 
 /** "best" on a measure, unless every layout ties on it. */
 function Best({ on }: { on: boolean }) {
@@ -23,6 +24,7 @@ function Row({ label, children }: { label: string; children: React.ReactNode }) 
 
 /** Every measure of the compared layouts in one table, the best of each marked. */
 export function CompareTable({ siteId, comparison }: { siteId: number; comparison: ComparisonView }) {
+  const { money } = useFormat();
   const cols = comparison.comparison.columns;
   const best = comparison.comparison.best;
   const bestOn = (list: number[], i: number) => isBest(list, i, cols.length);

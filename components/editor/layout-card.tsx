@@ -5,6 +5,7 @@ import { useState } from "react";
 import type { LayoutMeta } from "@/lib/server/layouts";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
+import { useFormat } from "@/components/format/format-provider";
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
 
@@ -30,6 +31,7 @@ interface LayoutCardProps {
  */
 export function LayoutCard({ siteId, layout: l, canWrite, onDelete, onArchive }: LayoutCardProps) {
   const [confirming, setConfirming] = useState(false);
+  const { dateTime } = useFormat();
   const archived = l.archivedAt !== null;
   return (
     <Card className={`flex h-full flex-col gap-1 ${archived ? "opacity-80" : ""}`} data-testid={`layout-card-${l.id}`}>
@@ -43,7 +45,7 @@ export function LayoutCard({ siteId, layout: l, canWrite, onDelete, onArchive }:
         </span>
       </div>
       <p className="text-xs text-slate-600">
-        revision {l.currentRevision} · saved {new Date(l.updatedAt).toLocaleString()}
+        revision {l.currentRevision} · saved {dateTime(l.updatedAt)}
       </p>
       <p className="text-sm">
         <Counts c={l.summary.counts} />

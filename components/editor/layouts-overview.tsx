@@ -9,6 +9,7 @@ import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { Field } from "@/components/ui/field";
 import { LayoutCard } from "@/components/editor/layout-card";
+import { useFormat } from "@/components/format/format-provider";
 
 interface PanelChoice {
   id: string;
@@ -19,7 +20,6 @@ interface PanelChoice {
 }
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
-const money = (v: number) => v.toLocaleString(undefined, { minimumFractionDigits: 0, maximumFractionDigits: 2 });
 
 function Counts({ c }: { c: { error: number; warning: number; note: number } }) {
   return (
@@ -30,6 +30,7 @@ function Counts({ c }: { c: { error: number; warning: number; note: number } }) 
 }
 
 function SuggestionCard({ s, busy, canWrite, onAccept }: { s: SuggestionView; busy: boolean; canWrite: boolean; onAccept: () => void }) {
+  const { money } = useFormat();
   const title = s.allowShared ? "Shared inputs allowed" : "One detector per input";
   return (
     <Card className="flex flex-col" data-testid={`suggestion-${s.allowShared ? "shared" : "single"}`}>
@@ -72,6 +73,7 @@ function SuggestionCard({ s, busy, canWrite, onAccept }: { s: SuggestionView; bu
 
 /** A site's layouts: open one, start a blank one on a panel, or take a hardware suggestion. */
 export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWrite }: { siteId: number; initial: LayoutMeta[]; panels: PanelChoice[]; detectorCount: number; canWrite: boolean }) {
+  const { money } = useFormat();
   const router = useRouter();
   const { layouts, mutate } = useLayouts(siteId, initial);
   const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);

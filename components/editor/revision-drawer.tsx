@@ -2,11 +2,13 @@
 
 import { useRevisions } from "@/lib/client/use-revisions";
 import { Button } from "@/components/ui/button";
+import { useFormat } from "@/components/format/format-provider";
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
 
 /** The layout's history, newest first; restoring makes a new revision with the old document. */
 export function RevisionDrawer({ layoutId, currentRevision, canWrite, busy, onRestore, onClose }: { layoutId: number; currentRevision: number; canWrite: boolean; busy: boolean; onRestore: (revision: number) => void; onClose: () => void }) {
+  const fmt = useFormat();
   const { revisions, error, isLoading } = useRevisions(layoutId);
   return (
     <aside role="dialog" aria-modal="false" aria-labelledby="history-title" data-testid="history" className="fixed inset-y-0 right-0 z-40 flex w-full max-w-md flex-col border-l border-line bg-white shadow-xl">
@@ -30,7 +32,7 @@ export function RevisionDrawer({ layoutId, currentRevision, canWrite, busy, onRe
                   {r.revision === currentRevision ? <span className="ml-2 rounded bg-signal-soft px-1.5 text-xs text-signal">current</span> : null}
                 </span>
                 <time dateTime={r.createdAt} className="text-xs text-slate-500">
-                  {new Date(r.createdAt).toLocaleString()}
+                  {fmt.dateTime(r.createdAt)}
                 </time>
               </div>
               <p className="text-xs text-slate-600">

@@ -14,11 +14,10 @@ import { copyName } from "@/components/editor/drag-model";
 import { withoutMissingDetectors } from "@/components/editor/editor-model";
 import type { EditorDocument } from "@/components/editor/use-editor-document";
 import type { Notice } from "@/components/editor/use-editor-messages";
+import { useFormat } from "@/components/format/format-provider";
 
 // Changes that cannot be saved over a newer version: offered back from this browser's draft, and resolved by
 // reloading the latest or working on a copy. Nothing of either side is lost: one copy becomes a new layout.
-
-const stamp = () => new Date().toLocaleString(undefined, { dateStyle: "short", timeStyle: "short" });
 
 export function useLayoutConflict(opts: { siteId: number; savedDocument: LayoutDocument; savedVersion: number; canWrite: boolean; ctx: LayoutContext; editing: EditorDocument; notice: Notice }) {
   const { siteId, savedDocument, savedVersion, canWrite, ctx, editing, notice } = opts;
@@ -27,6 +26,8 @@ export function useLayoutConflict(opts: { siteId: number; savedDocument: LayoutD
   const { show } = notice;
   const layoutId = meta.id;
   const router = useRouter();
+  const fmt = useFormat();
+  const stamp = () => fmt.dateTime(new Date());
   const { reload } = useLayout(layoutId);
   const [draftConflict, setDraftConflict] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
@@ -41,7 +42,7 @@ export function useLayoutConflict(opts: { siteId: number; savedDocument: LayoutD
     if (!d) return;
     if (JSON.stringify(d.document) === JSON.stringify(savedDocument)) return clearDraft(layoutId);
     const cleaned = withoutMissingDetectors(d.document, ctx).doc;
-    const when = new Date(d.savedAt).toLocaleString();
+    const when = fmt.dateTime(d.savedAt);
     // localStorage is only readable in the browser, after hydration: this effect is that synchronisation
     setDoc(cleaned);
     if (d.baseVersion === savedVersion) {
@@ -51,7 +52,7 @@ export function useLayoutConflict(opts: { siteId: number; savedDocument: LayoutD
       // eslint-disable-next-line react-hooks/set-state-in-effect -- the same after-hydration synchronisation
       setDraftConflict(`Unsaved changes from ${when} were made on version ${d.baseVersion}; the layout has been saved since (it is now version ${savedVersion}).`);
     }
-  }, [canWrite, change, ctx, layoutId, savedDocument, savedVersion, setDoc, show]);
+  }, [canWrite, change, ctx, fmt, layoutId, savedDocument, savedVersion, setDoc, show]);
 
   function copyAsNewLayout(name: string): Promise<LayoutView> {
     return sendJson<LayoutView>(`/api/sites/${siteId}/layouts`, "POST", { name, document: docRef.current, note: `Copy of changes to "${meta.name}" that were not saved over a newer version` });

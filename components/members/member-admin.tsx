@@ -8,6 +8,7 @@ import { useMembers, type MemberList } from "@/lib/client/use-members";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { Field } from "@/components/ui/field";
+import { useFormat } from "@/components/format/format-provider";
 
 /** zod issues keyed by their first path segment, for the line under each field. */
 function fieldErrors(issues: { path: PropertyKey[]; message: string }[]): Record<string, string> {
@@ -20,6 +21,7 @@ function fieldErrors(issues: { path: PropertyKey[]; message: string }[]): Record
 }
 
 export function MemberAdmin({ initial, selfUserId }: { initial: MemberList; selfUserId: number }) {
+  const fmt = useFormat();
   const { members, invitations, error: loadError, mutate } = useMembers(initial);
   const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
   const [inviteErrors, setInviteErrors] = useState<Record<string, string>>({});
@@ -96,7 +98,7 @@ export function MemberAdmin({ initial, selfUserId }: { initial: MemberList; self
             <ul className="mt-2 text-sm">
               {invitations.map((i) => (
                 <li key={i.id}>
-                  {i.email} — {roleLabels[i.role]} (until {new Date(i.expiresAt).toLocaleDateString()})
+                  {i.email} — {roleLabels[i.role]} (until {fmt.date(i.expiresAt)})
                 </li>
               ))}
             </ul>

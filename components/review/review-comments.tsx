@@ -6,7 +6,8 @@ import type { CommentView } from "@/lib/server/review";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { describeError, FetchError, sendJson } from "@/lib/client/fetcher";
-import { targetText, when } from "@/components/review/review-words";
+import { targetText } from "@/components/review/review-words";
+import { useFormat } from "@/components/format/format-provider";
 
 // The review's comment thread: each comment about the whole layout, a board or one input, and the form to add one.
 
@@ -25,6 +26,7 @@ export function Comments({
   canComment: boolean;
   onAdded: (c: CommentView) => void;
 }) {
+  const fmt = useFormat();
   const [body, setBody] = useState("");
   const [boardKey, setBoardKey] = useState("");
   const [input, setInput] = useState("");
@@ -67,7 +69,7 @@ export function Comments({
           return (
             <li key={c.id} className="rounded-md border border-line bg-paper p-2 text-sm">
               <p className="text-xs text-slate-500">
-                {c.author ?? "A former member"} · revision {c.revision} · {when(c.createdAt)}
+                {c.author ?? "A former member"} · revision {c.revision} · {fmt.dateTime(c.createdAt)}
                 {about ? ` · about ${about}` : ""}
               </p>
               <p className="mt-1 whitespace-pre-wrap">{c.body}</p>

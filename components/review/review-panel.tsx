@@ -11,8 +11,9 @@ import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { describeError, FetchError, sendJson } from "@/lib/client/fetcher";
 import { useReview } from "@/lib/client/use-review";
-import { DECISION_WORDS, STEP_HINTS, STEP_LABELS, when } from "@/components/review/review-words";
+import { DECISION_WORDS, STEP_HINTS, STEP_LABELS } from "@/components/review/review-words";
 import { Comments } from "@/components/review/review-comments";
+import { useFormat } from "@/components/format/format-provider";
 
 export interface ReviewSummary {
   counts: { error: number; warning: number; note: number };
@@ -36,6 +37,7 @@ const SEVERITY_STYLE = { error: "text-fault", warning: "text-warn", note: "text-
 
 export function ReviewPanel({ initial, summary, boards, canComment, lifeSafety }: ReviewPanelProps) {
   const router = useRouter();
+  const fmt = useFormat();
   const { data, mutate } = useReview(initial.layoutId, initial);
   const view = data ?? initial;
   const [reason, setReason] = useState("");
@@ -203,7 +205,7 @@ export function ReviewPanel({ initial, summary, boards, canComment, lifeSafety }
                   {d.decidedBy ? ` by ${d.decidedBy}` : ""}
                 </p>
                 {d.reason ? <p className="text-slate-700">“{d.reason}”</p> : null}
-                <p className="text-xs text-slate-500">{when(d.createdAt)}</p>
+                <p className="text-xs text-slate-500">{fmt.dateTime(d.createdAt)}</p>
               </li>
             ))}
           </ol>

@@ -26,10 +26,6 @@ export const DECISION_WORDS: Record<string, string> = {
   choose: "chosen among compared layouts",
 };
 
-export function when(iso: string): string {
-  const d = new Date(iso);
-  return Number.isNaN(d.getTime()) ? iso : d.toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" }) + " UTC";
-}
 
 export function targetText(t: unknown, boardName: (key: string) => string): string | null {
   const x = t as { kind?: string; boardKey?: string; input?: number; detectorId?: string } | null;

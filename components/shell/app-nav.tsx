@@ -10,6 +10,7 @@ export function AppNav({ actor }: { actor: Actor }) {
     { href: "/loop-bench", label: "Loop bench", show: can(actor.role, "loop:analyze") },
     { href: "/members", label: "Members", show: can(actor.role, "members:read") },
     { href: "/audit", label: "Audit log", show: can(actor.role, "audit:read") },
+    { href: "/settings", label: "Settings", show: can(actor.role, "organisation:manage") },
   ].filter((l) => l.show);
   return (
     <header className="no-print border-b border-line bg-ink text-white">
@@ -28,6 +29,9 @@ export function AppNav({ actor }: { actor: Actor }) {
           <span data-testid="whoami" className="text-slate-300">
             {actor.name} · {roleLabels[actor.role]} · {actor.organisationName}
           </span>
+          <Link href="/account" className="text-slate-200 underline-offset-2 hover:text-white hover:underline">
+            Account
+          </Link>
           <SignOutButton />
         </div>
       </div>

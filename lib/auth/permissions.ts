@@ -23,6 +23,8 @@ export const permissionTable = {
   "members:read": ["admin"],
   "members:manage": ["admin"],
   "audit:read": ["admin", "engineer"],
+  "organisation:manage": ["admin"],
+  "account:manage": everyone,
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissionTable;
@@ -56,6 +58,8 @@ export const permissionLabels: Record<Permission, string> = {
   "members:read": "see the member list",
   "members:manage": "invite members and change roles",
   "audit:read": "read the audit log",
+  "organisation:manage": "change the organisation's settings",
+  "account:manage": "manage their own account",
 };
 
 /** A plain sentence for the UI and the API when a role lacks a permission. */

@@ -3,6 +3,7 @@ import { shippedCatalog } from "@/lib/catalog/shipped";
 import { readCsv } from "@/lib/csv/csv";
 import { batterySize, billOfMaterials } from "@/lib/bom/bill-of-materials";
 import { bomCsv, zoneListCsv } from "@/lib/bom/csv";
+import { makeFormat } from "@/lib/format/format";
 import { buildTerminalSheet } from "@/lib/sheet/build-sheet";
 import { largeLayout, largeSchedule, midLayout, midSchedule } from "@/lib/sheet/testing/sample-layouts";
 
@@ -69,8 +70,16 @@ describe("CSV exports", () => {
     const { records, error } = readCsv(bomCsv(billOfMaterials(midLayout, midSchedule, catalog)));
     expect(error).toBeNull();
     const panelName = catalog.panels.find((p) => p.id === "panel-mid-16")!.name;
-    expect(records[1]).toEqual(["panel", "panel-mid-16", panelName, "1", "260.00", "260.00", ""]);
+    expect(records[1]).toEqual(["panel", "panel-mid-16", panelName, "1", "260.00", "260.00", "", "EUR"]);
     const total = records.at(-1)!;
     expect([total[0], total[5]]).toEqual(["total", "472.00"]);
+  });
+  it("writes amounts in the organisation's currency decimals and names the currency", () => {
+    const yen = makeFormat({ locale: "en-GB", timeZone: "UTC", currency: "JPY", units: "metric" });
+    const { records } = readCsv(bomCsv(billOfMaterials(midLayout, midSchedule, catalog), { currency: "JPY", plain: yen.moneyPlain }));
+    // ISO 4217: the yen has no minor unit
+    expect(records[1].slice(4, 6)).toEqual(["260", "260"]);
+    expect(records[1][7]).toBe("JPY");
+    expect(records.at(-1)![7]).toBe("JPY");
   });
 });

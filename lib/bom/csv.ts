@@ -22,11 +22,14 @@ export function zoneListCsv(sheet: TerminalSheet): string {
   return writeCsv(ZONE_LIST_COLUMNS, rows);
 }
 
-export const BOM_COLUMNS = ["kind", "catalog_id", "description", "quantity", "unit_price", "total", "note"] as const;
+export const BOM_COLUMNS = ["kind", "catalog_id", "description", "quantity", "unit_price", "total", "note", "currency"] as const;
 
-/** The bill of materials, with a final total record over the priced lines. */
-export function bomCsv(bom: BillOfMaterials): string {
-  const rows: CsvCell[][] = bom.lines.map((l) => [l.kind, l.catalogId, l.description, l.quantity, l.unitPrice === null ? null : l.unitPrice.toFixed(2), l.total === null ? null : l.total.toFixed(2), l.note]);
-  rows.push(["total", null, `priced lines (${bom.unpricedLines} not priced)`, null, null, bom.total.toFixed(2), null]);
+/**
+ * The bill of materials, with a final total record over the priced lines. Amounts stay plain numbers that
+ * spreadsheets compute with, in the currency's usual decimals (lib/format moneyPlain), and each priced record names the currency.
+ */
+export function bomCsv(bom: BillOfMaterials, money: { currency: string; plain: (amount: number) => string } = { currency: "EUR", plain: (x) => x.toFixed(2) }): string {
+  const rows: CsvCell[][] = bom.lines.map((l) => [l.kind, l.catalogId, l.description, l.quantity, l.unitPrice === null ? null : money.plain(l.unitPrice), l.total === null ? null : money.plain(l.total), l.note, l.unitPrice === null ? null : money.currency]);
+  rows.push(["total", null, `priced lines (${bom.unpricedLines} not priced)`, null, null, money.plain(bom.total), null, money.currency]);
   return writeCsv(BOM_COLUMNS, rows);
 }

@@ -78,7 +78,6 @@ function argBest(values: (number | null)[], better: (a: number, b: number) => bo
 }
 
 const pct = (x: number | null) => (x === null ? "no inputs used" : `${Math.round(x * 100)} %`);
-const money = (x: number) => x.toFixed(2);
 
 function tradeoffText(where: string, detectors: string[], lost: string[]): string {
   const who = detectors.join(" and ");
@@ -89,7 +88,8 @@ function tradeoffText(where: string, detectors: string[], lost: string[]): strin
     : `${where} carries ${who}: saves 1 input, but ${lostWords.join(", ")} ${lostWords.length === 1 ? "is" : "are"} no longer reported as such, and one cable fault takes out both detectors.`;
 }
 
-export function compareLayouts(candidates: readonly CompareCandidate[], schedule: Schedule, catalog: Catalog): LayoutComparison {
+/** `money` writes an amount as the organisation does (lib/format); plain two decimals when none is given. */
+export function compareLayouts(candidates: readonly CompareCandidate[], schedule: Schedule, catalog: Catalog, money: (amount: number) => string = (x) => x.toFixed(2)): LayoutComparison {
   const shared = createSolver(schedule, catalog);
   const columns: ComparisonColumn[] = candidates.map((c) => {
     const own = c.frozen ?? { schedule, catalog };

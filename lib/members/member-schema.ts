@@ -12,3 +12,7 @@ export type AcceptInput = z.infer<typeof acceptSchema>;
 
 export const roleChangeSchema = z.strictObject({ role: z.enum(roles) });
 export type RoleChangeInput = z.infer<typeof roleChangeSchema>;
+
+/** Accepting as an account that already exists: signed in as it, only the token is sent (no password changes). */
+export const joinSchema = z.strictObject({ token: z.string().min(20).max(200) });
+export type JoinInput = z.infer<typeof joinSchema>;

@@ -4,7 +4,9 @@ import { z } from "zod";
 import { catalogFileSchema, idSchema, inputTypeSchema, reportSchema } from "@/lib/catalog/schema";
 import { analyzeRequestSchema, inputTypeRefSchema, loopSpecSchema } from "@/lib/loop";
 import { siteInputSchema, siteUpdateSchema } from "@/lib/sites/site-schema";
-import { acceptSchema, inviteSchema, roleChangeSchema } from "@/lib/members/member-schema";
+import { acceptSchema, inviteSchema, joinSchema, roleChangeSchema } from "@/lib/members/member-schema";
+import { changePasswordSchema, confirmEmailSchema, emailOnlySchema, resetPasswordSchema, signUpSchema } from "@/lib/auth/sign-up-schema";
+import { organisationSettingsSchema } from "@/lib/organisation/settings-schema";
 import { roles } from "@/lib/auth/permissions";
 import { layoutDocumentSchema } from "@/lib/layout/schema";
 import { bulkEditPatchSchema, createDetectorFormSchema, updateDetectorFormSchema } from "@/lib/schedule/schema";
@@ -78,6 +80,13 @@ export const namedSchemas: Record<string, z.ZodType> = {
   Invitation: inviteSchema,
   InvitationAcceptance: acceptSchema,
   RoleChange: roleChangeSchema,
+  InvitationJoin: joinSchema,
+  SignUp: signUpSchema,
+  EmailConfirmation: confirmEmailSchema,
+  EmailOnly: emailOnlySchema,
+  PasswordReset: resetPasswordSchema,
+  PasswordChange: changePasswordSchema,
+  OrganisationSettings: organisationSettingsSchema,
   MemberList: memberListSchema,
   Health: healthSchema,
   Catalog: catalogFileSchema,

@@ -162,6 +162,34 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
       { tag: "members", summary: "The invitee sets a name and password with the e-mailed token", permission: null, body: "InvitationAcceptance", ok: { description: "Joined; the invitee can now sign in.", schema: { type: "object" } }, errors: [404, 409] },
     ],
   },
+  "/api/invitations/join": {
+    post: [
+      "joinInvitation",
+      { tag: "members", summary: "The signed-in account accepts an invitation to its own address; its password never changes, a changed role takes effect now", permission: "account:manage", body: "InvitationJoin", ok: { description: "Joined (or the role changed); the session moves to that organisation.", schema: { type: "object" } }, errors: [404, 409] },
+    ],
+  },
+  "/api/sign-up": {
+    post: ["signUp", { tag: "account", summary: "A new organisation and its first admin; the e-mail is confirmed through a mailed single-use link", permission: null, body: "SignUp", ok: { description: "The same answer whether or not the address has an account.", schema: { type: "object" } } }],
+  },
+  "/api/sign-up/confirm": {
+    post: ["confirmEmail", { tag: "account", summary: "Confirms the e-mail address with the mailed token (once)", permission: null, body: "EmailConfirmation", ok: { description: "Confirmed; the account can sign in.", schema: { type: "object" } }, errors: [404] }],
+  },
+  "/api/sign-up/resend": {
+    post: ["resendConfirmation", { tag: "account", summary: "A new confirmation link for an account waiting for it", permission: null, body: "EmailOnly", ok: { description: "The same answer for any address.", schema: { type: "object" } } }],
+  },
+  "/api/password/forgot": {
+    post: ["forgotPassword", { tag: "account", summary: "Mails a single-use link to choose a new password, valid for one hour", permission: null, body: "EmailOnly", ok: { description: "The same answer for any address.", schema: { type: "object" } } }],
+  },
+  "/api/password/reset": {
+    post: ["resetPassword", { tag: "account", summary: "Sets a new password with the mailed token; every session of the account ends", permission: null, body: "PasswordReset", ok: { description: "The password is set.", schema: { type: "object" } }, errors: [404] }],
+  },
+  "/api/account/password": {
+    post: ["changePassword", { tag: "account", summary: "Changes the signed-in user's password; their other sessions end, this one is renewed", permission: "account:manage", body: "PasswordChange", ok: { description: "Changed; a renewed session cookie is set.", schema: { type: "object" } } }],
+  },
+  "/api/organisation": {
+    get: ["getOrganisationSettings", { tag: "account", summary: "The organisation's settings", permission: "organisation:manage", ok: { description: "The settings.", schema: REF("OrganisationSettings") } }],
+    patch: ["saveOrganisationSettings", { tag: "account", summary: "Saves the organisation's settings; one audit entry per changed setting", permission: "organisation:manage", body: "OrganisationSettings", ok: { description: "The saved settings.", schema: REF("OrganisationSettings") } }],
+  },
   "/api/loops/analyze": {
     post: [
       "analyzeLoop",
@@ -380,6 +408,7 @@ export function openApiDocument(): OpenApiDocument {
       { name: "commissioning", description: "Meter readings and photos proving each loop." },
       { name: "members", description: "Who works on the organisation's designs, and in which role." },
       { name: "session", description: "Signing in and out." },
+      { name: "account", description: "Sign-up, e-mail confirmation, passwords and the organisation's settings." },
       { name: "service", description: "Health and this description." },
     ],
     paths,

@@ -1,3 +1,4 @@
+import { defaultOrganisationSettings } from "@/lib/organisation/settings-schema";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { z } from "zod";
 
@@ -8,7 +9,7 @@ vi.mock("next/headers", () => ({ headers: async () => state.headers }));
 vi.mock("./session", () => ({
   requireActor: async () => {
     state.actorCalls++;
-    return { userId: 1, organisationId: 1, organisationName: "Test", role: "admin", name: "Test", email: "t@test.example" };
+    return { userId: 1, organisationId: 1, organisationName: "Test", role: "admin", name: "Test", email: "t@test.example", settings: defaultOrganisationSettings };
   },
 }));
 

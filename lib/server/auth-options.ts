@@ -9,6 +9,7 @@ import { verifyPassword } from "./password-hash";
 import { endSessions } from "./session-version";
 import type { Role } from "@/lib/auth/permissions";
 import { signInSchema } from "@/lib/auth/sign-in-schema";
+import { UNCONFIRMED_EMAIL } from "@/lib/auth/sign-up-schema";
 import { safeCallbackUrl } from "@/lib/http/same-origin";
 
 // Shown to the user as is (next-auth passes a thrown message through as the error).
@@ -38,6 +39,8 @@ export function authOptions(): NextAuthOptions {
             await recordFailure(keys);
             throw new Error(WRONG_CREDENTIALS);
           }
+          // Said only after the right password, so it reveals nothing to someone guessing addresses.
+          if (!user.emailConfirmed) throw new Error(UNCONFIRMED_EMAIL);
           const membership = await Membership.findOne({ where: { userId: user.id }, order: [["id", "ASC"]] });
           if (!membership) throw new Error("This account is not a member of any organisation.");
           // The account's count starts again; the address's count does not, or one own account would reset it between guesses.

@@ -1,4 +1,5 @@
 import "server-only";
+import { makeFormat } from "@/lib/format/format";
 import { randomUUID } from "node:crypto";
 import { UniqueConstraintError, type Transaction } from "sequelize";
 import { db } from "./db";
@@ -20,6 +21,7 @@ import type { SheetInput, TerminalSheet, TestKey } from "@/lib/sheet/sheet-types
 import type { ReportPhoto } from "@/lib/server/pdf/commissioning-report-pdf";
 import { commissioningReportPdfOffLoop } from "@/lib/server/workers/off-loop";
 import type { PageSize } from "@/lib/server/pdf/pdf-kit";
+import { paperOf } from "@/lib/sheet/sheet-request-schema";
 
 // Commissioning of a layout's approved revision: meter readings judged against the terminal sheet (stored once
 // per client id, so a retry after a lost answer stores nothing twice), photos in object storage, progress, the record.
@@ -247,16 +249,18 @@ export async function getPhoto(actor: Actor, layoutId: number, photoId: number, 
   return { body: obj.body, contentType: p.contentType, fileName: p.fileName };
 }
 
-export async function commissioningReportPdfFor(actor: Actor, layoutId: number, size: PageSize = "A4"): Promise<{ pdf: Buffer; fileName: string }> {
+export async function commissioningReportPdfFor(actor: Actor, layoutId: number, requested?: PageSize): Promise<{ pdf: Buffer; fileName: string }> {
+  const size = requested ?? paperOf(actor.settings);
   ensureCan(actor, "sheet:read");
   const ref = await findLayoutForReview(actor, layoutId);
   const rev = commissioningRevision(ref.review);
   if (rev === null) throw new ApiError(409, "There is no commissioning record: the layout has no approved revision yet.");
   const { sheet, ctx } = await sheetOf(actor, ref, rev);
   const [readings, photos] = await Promise.all([readingsOf(layoutId, rev), CommissioningPhoto.findAll({ where: { layoutId, revision: rev }, include: [{ model: User, as: "uploader", attributes: ["name"] }], order: [["id", "ASC"]] })]);
+  const fmt = makeFormat(actor.settings);
   const reportPhotos: ReportPhoto[] = photos.map((p) => {
     const v = photoView(p);
-    return { boardKey: v.boardKey ?? "", input: v.input, fileName: v.fileName, sizeBytes: v.sizeBytes, takenBy: v.uploadedBy, takenAt: v.createdAt };
+    return { boardKey: v.boardKey ?? "", input: v.input, fileName: v.fileName, sizeBytes: v.sizeBytes, takenBy: v.uploadedBy, takenAt: fmt.dateTime(v.createdAt) };
   });
   const rows = sheet.boards.flatMap((b) => b.rows).filter((r): r is SheetInput => !r.spare);
   const usualValues = usualValuesOf(ctx.catalog);
@@ -264,6 +268,6 @@ export async function commissioningReportPdfFor(actor: Actor, layoutId: number, 
     const row = rows.find((x) => x.boardKey === r.boardKey && x.input === r.input);
     return row && row.expected.some((e) => e.test === r.test) ? { ...r, advice: adviceOf(diagnoseReading(diagnoseLoopOf(row), r.test, r.reading, { usualValues })) } : r;
   });
-  const pdf = await commissioningReportPdfOffLoop(commissioningProgress(sheet, advised), { ...sheetMetaOf(ctx), caution: sheet.caution }, reportPhotos, size);
+  const pdf = await commissioningReportPdfOffLoop(commissioningProgress(sheet, advised), { ...sheetMetaOf(ctx, actor.settings), caution: sheet.caution }, reportPhotos, size);
   return { pdf, fileName: `${fileStem("commissioning", ctx.site.name, ctx.layout.name, `rev-${rev}`)}.pdf` };
 }

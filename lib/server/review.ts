@@ -1,4 +1,5 @@
 import "server-only";
+import { makeFormat } from "@/lib/format/format";
 import { Op } from "sequelize";
 import { db } from "./db";
 import { audit } from "./audit";
@@ -72,9 +73,9 @@ function contextFor(actor: Actor, extra: Partial<TransitionContext> = {}): Trans
 async function authorshipOf(actor: Actor, ref: LayoutRef, transaction?: Transaction): Promise<Authorship> {
   const [revision, org] = await Promise.all([
     LayoutRevision.findOne({ where: { layoutId: ref.layout.id, revision: ref.layout.currentRevision }, attributes: ["createdBy"], transaction }),
-    Organisation.findByPk(actor.organisationId, { attributes: ["id", "allowSoloApproval"], transaction }),
+    Organisation.findByPk(actor.organisationId, { attributes: ["id", "soloApproval"], transaction }),
   ]);
-  return { actorId: actor.userId, submittedBy: ref.submittedBy, lastChangedBy: revision?.createdBy ?? null, allowSolo: !!org?.allowSoloApproval };
+  return { actorId: actor.userId, submittedBy: ref.submittedBy, lastChangedBy: revision?.createdBy ?? null, allowSolo: !!org?.soloApproval };
 }
 
 export async function getReview(actor: Actor, layoutId: number): Promise<ReviewView> {
@@ -218,7 +219,7 @@ export async function compareSiteLayouts(actor: Actor, siteId: number, layoutIds
   return {
     siteId,
     layouts: layouts.map((l) => ({ id: l.id, name: l.name, revision: l.currentRevision, status: l.status })),
-    comparison: compareLayouts(candidates, schedule, catalog),
+    comparison: compareLayouts(candidates, schedule, catalog, makeFormat(actor.settings).money),
   };
 }
 

@@ -11,6 +11,7 @@ import type { Actor } from "./session";
 import { Membership, Site, User } from "@/models";
 import { NOT_APPROVED_MARKING, type PageSize } from "@/lib/server/pdf/pdf-kit";
 import { SOLO_APPROVAL_WORDS } from "@/lib/review/effective-state";
+import { paperOf } from "@/lib/sheet/sheet-request-schema";
 import { terminalSheetPdfOffLoop } from "@/lib/server/workers/off-loop";
 import { loopJsonReplacer } from "@/lib/loop/loop-json";
 
@@ -25,8 +26,8 @@ const pdfCache = new Map<string, Buffer>();
 /** The terminal sheet PDF of a revision (the approved one by default), from the cache when the same sheet was made before. */
 export async function terminalSheetPdfCached(actor: Actor, layoutId: number, opts: SheetOptions & { size?: PageSize } = {}): Promise<{ pdf: Buffer; fileName: string }> {
   const ctx = await loadSheetContext(actor, layoutId, opts);
-  const meta = sheetMetaOf(ctx);
-  const size = opts.size ?? "A4";
+  const meta = sheetMetaOf(ctx, actor.settings);
+  const size = opts.size ?? paperOf(actor.settings);
   const key = createHash("sha256").update(JSON.stringify({ document: ctx.document, schedule: ctx.schedule, catalog: ctx.catalog, meta, size }, loopJsonReplacer)).digest("hex");
   let pdf = pdfCache.get(key);
   if (pdf) pdfCache.delete(key);
@@ -73,7 +74,7 @@ export async function sendSheetToInstaller(actor: Actor, layoutId: number, opts:
   const view = await getTerminalSheet(actor, layoutId);
   if (!view.approved && !opts.confirmUnapproved)
     throw new ApiError(409, `Revision ${view.meta.revision} is not approved: confirm that it goes out for review only (the e-mail and every page of the PDF say so), or approve it first. Nothing was sent.`, undefined, { code: "confirm-unapproved" });
-  const { pdf, fileName } = await terminalSheetPdfCached(actor, layoutId, { size: opts.size ?? "A4" });
+  const { pdf, fileName } = await terminalSheetPdfCached(actor, layoutId, { size: opts.size ?? paperOf(actor.settings) });
   const rev = view.meta.revision;
   const status = view.approved ? `approved revision ${rev}${view.meta.approvedSolo ? `, ${SOLO_APPROVAL_WORDS}` : ""}` : `revision ${rev}, ${NOT_APPROVED_MARKING}`;
   const link = `${env().NEXTAUTH_URL}/sites/${view.siteId}/layouts/${layoutId}/sheet`;

@@ -6,6 +6,7 @@ import { bindModels } from "./db";
 import { Membership, Organisation, User } from "@/models";
 import { can, refusal, type Permission, type Role } from "@/lib/auth/permissions";
 import { ApiError } from "./errors";
+import type { OrganisationSettings } from "@/lib/organisation/settings-schema";
 
 export interface Actor {
   userId: number;
@@ -14,6 +15,14 @@ export interface Actor {
   role: Role;
   name: string;
   email: string;
+  /** The organisation's settings: money, dates, paper, units, whether one person may submit and approve. */
+  settings: OrganisationSettings;
+}
+
+export const ORGANISATION_SETTING_ATTRIBUTES = ["name", "currency", "locale", "timeZone", "paper", "units", "soloApproval"] as const;
+
+export function settingsOf(org: Organisation): OrganisationSettings {
+  return { currency: org.currency, locale: org.locale, timeZone: org.timeZone, paper: org.paper, units: org.units, soloApproval: !!org.soloApproval };
 }
 
 /**
@@ -28,12 +37,12 @@ export async function currentActor(): Promise<Actor | null> {
   bindModels();
   const membership = await Membership.findOne({
     where: { userId: session.userId, organisationId: session.organisationId },
-    include: [{ model: User, attributes: ["name", "email", "sessionVersion"] }, { model: Organisation, attributes: ["name"] }],
+    include: [{ model: User, attributes: ["name", "email", "sessionVersion"] }, { model: Organisation, attributes: [...ORGANISATION_SETTING_ATTRIBUTES] }],
   });
   if (!membership) return null;
   const m = membership as Membership & { User: User; Organisation: Organisation };
   if (m.User.sessionVersion !== session.sessionVersion) return null;
-  return { userId: m.userId, organisationId: m.organisationId, organisationName: m.Organisation.name, role: m.role, name: m.User.name, email: m.User.email };
+  return { userId: m.userId, organisationId: m.organisationId, organisationName: m.Organisation.name, role: m.role, name: m.User.name, email: m.User.email, settings: settingsOf(m.Organisation) };
 }
 
 /** For API handlers and actions: 401 when signed out, 403 when the role lacks the permission. */

@@ -1,4 +1,5 @@
 import "server-only";
+import { makeFormat, type FormatSettings } from "@/lib/format/format";
 import type { Transaction } from "sequelize";
 import { bindModels } from "./db";
 import { notFound } from "./errors";
@@ -90,11 +91,17 @@ export interface SheetView {
   sheet: TerminalSheet;
 }
 
-const today = () => new Date().toISOString().slice(0, 10);
-
-export function sheetMetaOf(ctx: RevisionContext): SheetMeta {
+/** The sheet's heading; the date is written as the organisation writes dates (lib/format). */
+export function sheetMetaOf(ctx: RevisionContext, settings: FormatSettings): SheetMeta {
   const approved = isFrozenRevision(ctx.review, ctx.revision);
-  return { siteName: ctx.site.name, layoutName: ctx.layout.name, revision: ctx.revision, generatedAt: today(), approved, approvedSolo: approved && ctx.review.approvedSolo && ctx.review.approvedRevision === ctx.revision };
+  return {
+    siteName: ctx.site.name,
+    layoutName: ctx.layout.name,
+    revision: ctx.revision,
+    generatedAt: makeFormat(settings).date(new Date()),
+    approved,
+    approvedSolo: approved && ctx.review.approvedSolo && ctx.review.approvedRevision === ctx.revision,
+  };
 }
 
 export async function getTerminalSheet(actor: Actor, layoutId: number, opts: SheetOptions = {}): Promise<SheetView> {
@@ -102,7 +109,7 @@ export async function getTerminalSheet(actor: Actor, layoutId: number, opts: She
   return {
     layoutId,
     siteId: ctx.site.id,
-    meta: sheetMetaOf(ctx),
+    meta: sheetMetaOf(ctx, actor.settings),
     review: ctx.review,
     approved: ctx.review.approvedRevision === ctx.revision,
     frozen: ctx.frozen,
@@ -123,7 +130,7 @@ export function fileStem(...parts: (string | number)[]): string {
 
 export async function terminalSheetPdfFor(actor: Actor, layoutId: number, opts: SheetOptions & { size?: PageSize } = {}): Promise<{ pdf: Buffer; fileName: string }> {
   const ctx = await loadSheetContext(actor, layoutId, opts);
-  const pdf = await terminalSheetPdfOffLoop(ctx.document, ctx.schedule, ctx.catalog, sheetMetaOf(ctx), opts.size ?? "A4");
+  const pdf = await terminalSheetPdfOffLoop(ctx.document, ctx.schedule, ctx.catalog, sheetMetaOf(ctx, actor.settings), opts.size ?? "A4");
   return { pdf, fileName: `${fileStem("terminal-sheet", ctx.site.name, ctx.layout.name, `rev-${ctx.revision}`)}.pdf` };
 }
 
@@ -139,5 +146,6 @@ export async function bomFor(actor: Actor, layoutId: number, opts: SheetOptions 
 
 export async function bomCsvFor(actor: Actor, layoutId: number, opts: SheetOptions = {}): Promise<{ csv: string; fileName: string }> {
   const ctx = await loadSheetContext(actor, layoutId, opts);
-  return { csv: bomCsv(billOfMaterials(ctx.document, ctx.schedule, ctx.catalog)), fileName: `${fileStem("bom", ctx.site.name, ctx.layout.name, `rev-${ctx.revision}`)}.csv` };
+  const fmt = makeFormat(actor.settings);
+  return { csv: bomCsv(billOfMaterials(ctx.document, ctx.schedule, ctx.catalog), { currency: fmt.settings.currency, plain: fmt.moneyPlain }), fileName: `${fileStem("bom", ctx.site.name, ctx.layout.name, `rev-${ctx.revision}`)}.csv` };
 }

@@ -100,6 +100,84 @@ export const routes: RouteEntry[] = [
     requiredKeys: ["token", "name", "password"],
     note: "public: the e-mailed token is the credential",
   },
+  {
+    method: "POST",
+    path: "/api/invitations/join",
+    access: "account:manage",
+    body: "json",
+    success: 200,
+    orgScoped: false,
+    build: async (ctx) => {
+      if (ctx.caller.kind === "signed-out") return { method: "POST", url: "/api/invitations/join", json: { token: "x".repeat(32) } };
+      const member = await ctx.fixtures.throwawayMember(ctx.caller);
+      return { method: "POST", url: "/api/invitations/join", json: { token: await ctx.fixtures.invitationFor(member.email) }, as: member };
+    },
+    requiredKeys: ["token"],
+    note: "sent as a throwaway member with the caller's role (joining moves and may end that account's sessions)",
+  },
+
+  // sign-up, passwords, the organisation's settings
+  {
+    method: "POST",
+    path: "/api/sign-up",
+    access: "public",
+    body: "json",
+    success: 200,
+    orgScoped: false,
+    build: async (ctx) => ({ method: "POST", url: "/api/sign-up", json: { organisationName: "Matrix sign-up org", name: "Matrix Founder", email: ctx.fixtures.uniqueEmail("founder"), password: "spare-probe-meter-61" } }),
+    requiredKeys: ["organisationName", "name", "email", "password"],
+  },
+  {
+    method: "POST",
+    path: "/api/sign-up/confirm",
+    access: "public",
+    body: "json",
+    success: 200,
+    orgScoped: false,
+    build: async (ctx) => ({ method: "POST", url: "/api/sign-up/confirm", json: { token: await ctx.fixtures.confirmationToken() } }),
+    requiredKeys: ["token"],
+    note: "public: the e-mailed token is the credential",
+  },
+  { method: "POST", path: "/api/sign-up/resend", access: "public", body: "json", success: 200, orgScoped: false, build: async (ctx) => ({ method: "POST", url: "/api/sign-up/resend", json: { email: ctx.fixtures.uniqueEmail("waiting") } }), requiredKeys: ["email"] },
+  { method: "POST", path: "/api/password/forgot", access: "public", body: "json", success: 200, orgScoped: false, build: async (ctx) => ({ method: "POST", url: "/api/password/forgot", json: { email: ctx.fixtures.uniqueEmail("forgetful") } }), requiredKeys: ["email"] },
+  {
+    method: "POST",
+    path: "/api/password/reset",
+    access: "public",
+    body: "json",
+    success: 200,
+    orgScoped: false,
+    build: async (ctx) => ({ method: "POST", url: "/api/password/reset", json: { token: await ctx.fixtures.resetToken(), password: "fresh-lamp-circuit-84" } }),
+    requiredKeys: ["token", "password"],
+    note: "public: the e-mailed token is the credential",
+  },
+  {
+    method: "POST",
+    path: "/api/account/password",
+    access: "account:manage",
+    body: "json",
+    success: 200,
+    orgScoped: false,
+    build: async (ctx) => {
+      const json = { currentPassword: "spare-probe-meter-61", newPassword: "fresh-lamp-circuit-84" };
+      if (ctx.caller.kind === "signed-out") return { method: "POST", url: "/api/account/password", json };
+      return { method: "POST", url: "/api/account/password", json, as: await ctx.fixtures.throwawayMember(ctx.caller) };
+    },
+    requiredKeys: ["currentPassword", "newPassword"],
+    note: "sent as a throwaway member with the caller's role: a new password ends the account's other sessions",
+  },
+  { method: "GET", path: "/api/organisation", access: "organisation:manage", body: "none", success: 200, orgScoped: false, build: async () => ({ method: "GET", url: "/api/organisation" }) },
+  {
+    method: "PATCH",
+    path: "/api/organisation",
+    access: "organisation:manage",
+    body: "json",
+    success: 200,
+    orgScoped: false,
+    build: async (ctx) => ({ method: "PATCH", url: "/api/organisation", json: await ctx.fixtures.organisationSettings(ctx.caller) }),
+    requiredKeys: ["name", "currency", "locale", "timeZone", "paper", "units", "soloApproval"],
+    note: "the caller's organisation's settings saved as they are, so nothing changes",
+  },
   { method: "GET", path: "/api/members", access: "members:read", body: "none", success: 200, orgScoped: false, build: async () => ({ method: "GET", url: "/api/members" }) },
   {
     method: "POST",

@@ -27,6 +27,8 @@ export interface RequestSpec {
   csrf?: boolean;
   /** Send from a new, signed-out cookie jar (the request would change the caller's own session). */
   fresh?: boolean;
+  /** Send from a new cookie jar signed in as this account (a throwaway member, for requests that end the caller's other sessions). */
+  as?: { email: string; password: string };
 }
 
 export type CallerKind = "signed-out" | "demo" | "rival";
@@ -74,6 +76,16 @@ export interface Fixtures {
   goodCatalogFile(): FilePart;
   /** A unique e-mail address under .example. */
   uniqueEmail(prefix: string): string;
+  /** The token of the e-mail confirmation link of a fresh sign-up (read from the outbox). */
+  confirmationToken(): Promise<string>;
+  /** The token of a password reset link for a fresh throwaway account (read from the outbox). */
+  resetToken(): Promise<string>;
+  /** A fresh member with the caller's role in the caller's organisation (the demo one for a signed-out or role-less caller). */
+  throwawayMember(caller: Caller): Promise<{ email: string; password: string }>;
+  /** A fresh invitation to the demo organisation (as installer) for `email`, and its token. */
+  invitationFor(email: string): Promise<string>;
+  /** The current settings of the caller's organisation, so that saving them changes nothing. */
+  organisationSettings(caller: Caller): Promise<Record<string, unknown>>;
 }
 
 export interface BuildContext {

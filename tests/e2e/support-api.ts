@@ -3,6 +3,7 @@ import { readFileSync } from "node:fs";
 import { expect, request, test, type APIRequestContext, type APIResponse, type PlaywrightWorkerArgs } from "@playwright/test";
 import { randomUUID } from "node:crypto";
 import * as mariadb from "mariadb";
+import bcrypt from "bcryptjs";
 import { roles, type Role } from "@/lib/auth/permissions";
 import { RIVAL_PASSWORD, rivalOrganisationName, rivalSiteName, rivalUsers } from "@/scripts/demo/seed-rival";
 import { scheduleCsv } from "@/tests/api-registry/routes";
@@ -119,7 +120,7 @@ async function readFully(res: APIResponse): Promise<ReadResponse> {
 
 /** Sends one registry request from `api` (or from a new cookie jar when the spec says `fresh`). */
 export async function send(playwright: Playwright, api: APIRequestContext, spec: RequestSpec): Promise<ReadResponse> {
-  const ctx = spec.fresh ? await playwright.request.newContext({ baseURL }) : api;
+  const ctx = spec.as ? await signInApi(playwright, spec.as.email, spec.as.password) : spec.fresh ? await playwright.request.newContext({ baseURL }) : api;
   try {
     let form = spec.form;
     if (spec.csrf) form = { ...form, csrfToken: ((await (await ctx.get("/api/auth/csrf")).json()) as { csrfToken: string }).csrfToken };
@@ -132,7 +133,7 @@ export async function send(playwright: Playwright, api: APIRequestContext, spec:
     });
     return await readFully(res); // read before a fresh context is disposed
   } finally {
-    if (spec.fresh) await ctx.dispose();
+    if (spec.fresh || spec.as) await ctx.dispose();
   }
 }
 
@@ -183,7 +184,9 @@ export async function snapshotTables(conn: mariadb.Connection, except: string[] 
 }
 
 /** Removes what the API tests made in the demo organisation (sites cascade to their schedule and layouts) and the direct inserts. */
-export async function removeScratch(conn: mariadb.Connection, demoIds: DemoObjects, extra: { catalogUploadIds: number[]; mailIds: number[] }) {
+export async function removeScratch(conn: mariadb.Connection, demoIds: DemoObjects, extra: { catalogUploadIds: number[]; mailIds: number[]; userIds?: number[] }) {
+  if (extra.userIds?.length) await conn.query("DELETE FROM users WHERE id IN (?)", [extra.userIds]);
+  await conn.query("DELETE FROM organisations WHERE name LIKE ?", [`${signUpPrefix}%`]);
   await conn.query("DELETE FROM sites WHERE organisation_id = ? AND name LIKE ?", [demoIds.organisationId, `${scratchPrefix}%`]);
   if (extra.catalogUploadIds.length) await conn.query("DELETE FROM organisation_catalogs WHERE id IN (?)", [extra.catalogUploadIds]);
   if (extra.mailIds.length) await conn.query("DELETE FROM mail_messages WHERE id IN (?)", [extra.mailIds]);
@@ -195,10 +198,24 @@ const ok = async (res: APIResponse, what: string) => {
 };
 
 let unique = 0;
+/** Name prefix of the organisations the API tests sign up; removed after each spec. */
+export const signUpPrefix = "Matrix sign-up ";
+const THROWAWAY_PASSWORD = "spare-probe-meter-61";
+
+/** The token of the last link to `path` in a mail to `email`, polled from the outbox table. */
+async function mailedToken(conn: mariadb.Connection, email: string, path: string): Promise<string> {
+  for (let i = 0; i < 50; i++) {
+    const rows = (await conn.query("SELECT text FROM mail_messages WHERE envelope_to LIKE ? ORDER BY id DESC LIMIT 1", [`%${email}%`])) as { text: string }[];
+    const token = rows[0] && new RegExp(`/${path}/([A-Za-z0-9_-]+)`).exec(rows[0].text)?.[1];
+    if (token) return token;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`no mail with a /${path}/ link for ${email} reached the outbox`);
+}
 
 /** The registry's fixtures: fresh objects in the demo organisation, made as its admin (through the API where one exists). */
-export function makeFixtures(admin: APIRequestContext, conn: mariadb.Connection, demoIds: DemoObjects): Fixtures & { created: { catalogUploadIds: number[]; mailIds: number[] } } {
-  const created = { catalogUploadIds: [] as number[], mailIds: [] as number[] };
+export function makeFixtures(admin: APIRequestContext, conn: mariadb.Connection, demoIds: DemoObjects): Fixtures & { created: { catalogUploadIds: number[]; mailIds: number[]; userIds: number[] } } {
+  const created = { catalogUploadIds: [] as number[], mailIds: [] as number[], userIds: [] as number[] };
   let scratch: Promise<{ siteId: number; detectorIds: string[] }> | undefined;
   let upload: Promise<{ uploadId: number; addedEntryId: string }> | undefined;
   const goodCatalogFile = (): FilePart => ({ name: "good-upload.yaml", mimeType: "application/yaml", buffer: readFileSync("tests/fixtures/catalog/good-upload.yaml") });
@@ -231,9 +248,53 @@ export function makeFixtures(admin: APIRequestContext, conn: mariadb.Connection,
     return { layoutId, loops };
   };
 
+  const organisationOf = async (caller: Caller) => (caller.kind === "rival" ? (await findRivalObjects(conn)).organisationId : demoIds.organisationId);
+  const throwawayMember = async (caller: Caller) => {
+    const email = uniqueEmail(`throwaway-${caller.role ?? "admin"}`);
+    const now = new Date();
+    const { insertId } = await conn.query("INSERT INTO users (email, name, password_hash, session_version, email_confirmed, created_at, updated_at) VALUES (?, ?, ?, 0, 1, ?, ?)", [email, "Matrix Throwaway", bcrypt.hashSync(THROWAWAY_PASSWORD, 4), now, now]);
+    created.userIds.push(Number(insertId));
+    await conn.query("INSERT INTO memberships (organisation_id, user_id, role, created_at, updated_at) VALUES (?, ?, ?, ?, ?)", [await organisationOf(caller), insertId, caller.role ?? "admin", now, now]);
+    return { email, password: THROWAWAY_PASSWORD };
+  };
+
   return {
     created,
     scratchSite,
+    throwawayMember,
+    async confirmationToken() {
+      const email = uniqueEmail("founder");
+      const visitor = await request.newContext({ baseURL });
+      await ok(await visitor.post("/api/sign-up", { data: { organisationName: `${signUpPrefix}${++unique}`, name: "Matrix Founder", email, password: THROWAWAY_PASSWORD } }), "sign-up");
+      await visitor.dispose();
+      const [u] = await conn.query("SELECT id FROM users WHERE email = ?", [email]);
+      created.userIds.push(u.id);
+      return mailedToken(conn, email, "confirm-email");
+    },
+    async resetToken() {
+      const { email } = await throwawayMember({ kind: "demo", role: "installer", email: null, password: null });
+      const visitor = await request.newContext({ baseURL });
+      await ok(await visitor.post("/api/password/forgot", { data: { email } }), "forgot password");
+      await visitor.dispose();
+      return mailedToken(conn, email, "reset-password");
+    },
+    async invitationFor(email: string) {
+      const token = randomUUID().replaceAll("-", "") + randomUUID().replaceAll("-", "");
+      const [inviter] = await conn.query("SELECT id FROM users WHERE email = ?", [demo.admin]);
+      await conn.query("INSERT INTO invitations (organisation_id, email, role, token_hash, invited_by_user_id, expires_at, accepted_at, created_at) VALUES (?, ?, 'installer', ?, ?, ?, NULL, ?)", [
+        demoIds.organisationId,
+        email,
+        createHash("sha256").update(token).digest("hex"),
+        inviter.id,
+        new Date(Date.now() + 864e5),
+        new Date(),
+      ]);
+      return token;
+    },
+    async organisationSettings(caller: Caller) {
+      const [o] = await conn.query("SELECT name, currency, locale, time_zone AS timeZone, paper, units, solo_approval AS soloApproval FROM organisations WHERE id = ?", [await organisationOf(caller)]);
+      return { ...o, soloApproval: !!o.soloApproval };
+    },
     goodCatalogFile,
     uniqueEmail,
     photoFile,

@@ -220,7 +220,7 @@ test.describe(() => {
     expect(lines[1]).toContain(row.detectors[0].label);
     const bom = await page.request.get((await page.getByTestId("bom-csv").getAttribute("href"))!);
     expect(bom.headers()["content-type"]).toMatch(/^text\/csv/);
-    expect(await bom.text()).toMatch(/^kind,catalog_id,description,quantity,unit_price,total,note\r\n/);
+    expect(await bom.text()).toMatch(/^kind,catalog_id,description,quantity,unit_price,total,note,currency\r\n/);
   });
 });
 

@@ -61,7 +61,7 @@ describe("a second pair of eyes", () => {
 
   it("with solo approval allowed, approves and says so in the approval, the audit log, the sheet and its PDF", async () => {
     const f = await reviewFixture("Solo allowed");
-    await Organisation.update({ allowSoloApproval: true }, { where: { id: f.org.id } });
+    await Organisation.update({ soloApproval: true }, { where: { id: f.org.id } });
     await reviewAction(f.actors.engineer, f.layout.id, { action: "submit" });
     const r = await reviewAction(f.actors.engineer, f.layout.id, { action: "approve" });
     expect(r.review).toMatchObject({ state: "approved", approvedSolo: true });

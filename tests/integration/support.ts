@@ -3,7 +3,7 @@ import bcrypt from "bcryptjs";
 import { db } from "@/lib/server/db";
 import { Membership, Organisation, User } from "@/models";
 import type { Role } from "@/lib/auth/permissions";
-import type { Actor } from "@/lib/server/session";
+import { settingsOf, type Actor } from "@/lib/server/session";
 import { assertTestDatabase } from "./global-setup";
 
 /** The app's own cached instance, pointed at the test database. */
@@ -22,7 +22,7 @@ export async function makeOrganisation(label = "Test org") {
     const email = `${role}.${randomUUID().slice(0, 8)}@test.example`;
     const user = await User.create({ email, name: `Test ${role}`, passwordHash: hash });
     await Membership.create({ organisationId: org.id, userId: user.id, role });
-    actors[role] = { userId: user.id, organisationId: org.id, organisationName: org.name, role, name: user.name, email };
+    actors[role] = { userId: user.id, organisationId: org.id, organisationName: org.name, role, name: user.name, email, settings: settingsOf(org) };
   }
   return { org, actors };
 }

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { CHART, chartModel, nameLines } from "@/components/compare/chart-model";
-import { isBest, loadStyle, ma, money, pct, plural, shortSummary } from "@/components/compare/compare-format";
+import { isBest, loadStyle, ma, pct, plural, shortSummary } from "@/components/compare/compare-format";
+import { makeFormat } from "@/lib/format/format";
 
 // The comparison chart: spare inputs and supervision coverage of each layout as bars on one 0–100 % scale.
 
@@ -63,7 +64,7 @@ describe("the compare page's wording", () => {
   });
 
   it("writes money, currents, shares and counts", () => {
-    expect(money(1234.5)).toBe("1,234.50");
+    expect(makeFormat({ locale: "en-GB", timeZone: "UTC", currency: "GBP", units: "metric" }).money(1234.5)).toBe("£1,234.50");
     expect(ma(12.6)).toBe("13 mA");
     expect(pct(null)).toBe("no inputs used");
     expect(pct(0.925)).toBe("93 %");

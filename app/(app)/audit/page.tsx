@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { pageActor } from "@/lib/server/session";
 import { listAudit } from "@/lib/server/audit-log";
+import { makeFormat } from "@/lib/format/format";
 import { PageHeader } from "@/components/ui/page-header";
 import { Refusal } from "@/components/ui/refusal";
 import { Card } from "@/components/ui/card";
@@ -11,6 +12,7 @@ export default async function AuditPage() {
   const { actor, allowed, reason } = await pageActor("audit:read", "/audit");
   if (!allowed) return <Refusal reason={reason} />;
   const entries = await listAudit(actor.organisationId);
+  const fmt = makeFormat(actor.settings);
   return (
     <>
       <PageHeader title="Audit log" subtitle="Who changed what, and when (newest first)." />
@@ -27,7 +29,7 @@ export default async function AuditPage() {
           <tbody>
             {entries.map((e) => (
               <tr key={e.id} className="border-t border-line align-top">
-                <td className="py-2 whitespace-nowrap">{e.createdAt.replace("T", " ").slice(0, 19)}</td>
+                <td className="py-2 whitespace-nowrap">{fmt.dateTime(e.createdAt)}</td>
                 <td>{e.userName ?? "—"}</td>
                 <td>{e.action}</td>
                 <td>

@@ -12,6 +12,7 @@ import { Card } from "@/components/ui/card";
 import { CatalogBrowser } from "@/components/catalog/catalog-browser";
 import { CatalogUploadForm } from "@/components/catalog/catalog-upload";
 import { UploadVersions } from "@/components/catalog/upload-versions";
+import { makeFormat } from "@/lib/format/format";
 import { LifeSafetyCaution } from "@/components/catalog/life-safety-caution";
 import { isLifeSafetyEntry } from "@/lib/catalog/life-safety";
 import { tableStateFrom, type CatalogRow } from "@/components/catalog/catalog-table-model";
@@ -71,7 +72,7 @@ export default async function CatalogPage({ searchParams }: { searchParams: Prom
         ) : null}
         <Card className={canUpload ? "lg:col-span-3" : "lg:col-span-5"}>
           <h3 className="mb-2 font-semibold">Versions</h3>
-          <UploadVersions uploads={uploads} inUseVersion={info.problem ? null : (info.upload?.version ?? null)} />
+          <UploadVersions uploads={uploads} inUseVersion={info.problem ? null : (info.upload?.version ?? null)} when={makeFormat(actor.settings).dateTime} />
           {!canUpload ? <p className="mt-3 text-xs text-slate-500">{refusal(actor.role, "catalog:upload")}</p> : null}
         </Card>
       </div>

@@ -9,6 +9,7 @@ import { serializeCatalog } from "@/lib/catalog/loader";
 import { PageHeader } from "@/components/ui/page-header";
 import { Refusal } from "@/components/ui/refusal";
 import { Card } from "@/components/ui/card";
+import { makeFormat } from "@/lib/format/format";
 import { FiguresTable, InputTypeBands, RelatedList, relatedEntries } from "@/components/catalog/entry-detail";
 import { LifeSafetyCaution, MainsCaution } from "@/components/catalog/life-safety-caution";
 import { OriginBadge } from "@/components/catalog/origin-badge";
@@ -52,7 +53,7 @@ export default async function CatalogEntryPage({ params }: { params: Promise<{ e
       <div className="mb-6 grid gap-6 lg:grid-cols-3">
         <Card className="lg:col-span-2">
           <h2 className="mb-2 font-semibold">Figures</h2>
-          <FiguresTable kind={kind} entry={entry} />
+          <FiguresTable kind={kind} entry={entry} money={makeFormat(actor.settings).money} />
         </Card>
         {related.length ? (
           <Card>
