@@ -211,7 +211,7 @@ export function makeFixtures(admin: APIRequestContext, conn: mariadb.Connection,
   const scratchSite = () =>
     (scratch ??= (async () => {
       const site = await ok(await admin.post("/api/sites", { data: { name: `${scratchPrefix}scratch site`, address: "3 Test Row", areas: [{ name: "Ground floor", rooms: ["Hall"] }] } }), "scratch site");
-      const imported = await ok(await admin.post(`/api/sites/${site.id}/schedule/import`, { data: { mode: "confirm", csv: scheduleCsv, fileName: "scratch.csv" } }), "scratch schedule");
+      const imported = await ok(await admin.post(`/api/sites/${site.id}/schedule/import`, { data: { mode: "confirm", csv: scheduleCsv, fileName: "scratch.csv", addUnknownPlaces: true } }), "scratch schedule");
       return { siteId: site.id as number, detectorIds: (imported.detectors as { id: string }[]).map((d) => d.id) };
     })());
 
