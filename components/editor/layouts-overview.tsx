@@ -7,6 +7,7 @@ import type { LayoutMeta, LayoutView, SuggestionView } from "@/lib/server/layout
 import { describeError, sendJson } from "@/lib/client/fetcher";
 import { useLayouts } from "@/lib/client/use-layouts";
 import { Button } from "@/components/ui/button";
+import { DuplicateLayout } from "@/components/editor/duplicate-layout";
 import { Card } from "@/components/ui/card";
 import { Field } from "@/components/ui/field";
 
@@ -143,6 +144,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
                 <p className="text-xs text-slate-600">
                   {l.summary.detectorsPlaced} detectors placed, {l.summary.unplaced} unplaced · {l.summary.inputsUsed} of {l.summary.inputsTotal} inputs · {l.summary.boards} boards
                 </p>
+                {canWrite ? <DuplicateLayout siteId={siteId} layoutId={l.id} name={l.name} /> : null}
                 {canWrite ? (
                   <button type="button" className="mt-auto self-end text-xs text-fault hover:underline" onClick={() => remove(l)}>
                     Delete

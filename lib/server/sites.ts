@@ -180,3 +180,15 @@ export async function setSiteArchived(actor: Actor, siteId: number, archived: bo
   });
   return getSite(actor, siteId);
 }
+
+/** Members of the organisation with the installer role: whom a site can be assigned to. */
+export async function listInstallerMembers(actor: Actor): Promise<SiteInstallerView[]> {
+  bindModels();
+  const rows = await Membership.findAll({ where: { organisationId: actor.organisationId, role: "installer" }, include: [{ model: User, attributes: ["id", "name", "email"] }] });
+  return rows
+    .flatMap((m) => {
+      const u = (m as Membership & { User?: User }).User;
+      return u ? [{ userId: u.id, name: u.name, email: u.email }] : [];
+    })
+    .sort((a, b) => a.name.localeCompare(b.name));
+}

@@ -8,7 +8,7 @@ import { reviewAction } from "@/lib/server/review";
 import { updateDetector } from "@/lib/server/schedules";
 import { sendSheetToInstaller, terminalSheetPdfCached } from "@/lib/server/send-sheet";
 import { ApiError } from "@/lib/server/errors";
-import { AuditEntry, Site, SiteInstaller } from "@/models";
+import { AuditEntry, SiteInstaller } from "@/models";
 import { readPdf } from "@/tests/support/pdf-text";
 
 // The terminal sheet sent to the site's installer: through a local SMTP server started here, with the PDF attached.
