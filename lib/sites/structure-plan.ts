@@ -82,7 +82,8 @@ export function planStructure(now: StructureNow[], next: FloorNode[], detectors:
       continue;
     }
     const to = room ? newRoom.get(room.id)! : { area: newArea.get(area.id)!, room: d.room };
-    if (to.area !== d.area || to.room !== d.room) moves.push({ id: d.id, area: to.area, room: to.room });
+    // letter case alone is no change: names match whatever their case
+    if (placeKey(to.area) !== placeKey(d.area) || placeKey(to.room) !== placeKey(d.room)) moves.push({ id: d.id, area: to.area, room: to.room });
   }
   return { badIds, inUse: [...inUseCount.values()], moves, removed };
 }
