@@ -230,9 +230,20 @@ export function makeFixtures(admin: APIRequestContext, conn: mariadb.Connection,
     return { layoutId, loops };
   };
 
+  const newSite = async () => {
+    const site = await ok(await admin.post("/api/sites", { data: { name: `${scratchPrefix}site ${++unique}`, floors: [{ name: "Ground floor", areas: [{ name: "Front", rooms: [{ name: "Hall" }] }] }] } }), "new site");
+    return { siteId: site.id as number, areaId: site.areas[0].id as number };
+  };
+
   return {
     created,
     scratchSite,
+    newSite,
+    async archivedSite() {
+      const { siteId } = await newSite();
+      await ok(await admin.post(`/api/sites/${siteId}/archive`), "archived site");
+      return { siteId };
+    },
     goodCatalogFile,
     uniqueEmail,
     photoFile,
