@@ -87,11 +87,11 @@ test.describe("as a designer", () => {
     const add = page.getByRole("form", { name: "Add detector" });
     await add.getByLabel("Label").fill("Kitchen window");
     await add.getByLabel("Area").selectOption("Offices");
-    await expect(add.getByLabel("Room").locator("option")).toContainText(["(no room)", "Reception", "Front desk", "+ Add a new room…"]);
-    await add.getByLabel("Room").selectOption({ label: "+ Add a new room…" });
+    await expect(add.getByTestId("add-detector-room").locator("option")).toContainText(["(no room)", "Reception", "Front desk", "+ Add a new room…"]);
+    await add.getByTestId("add-detector-room").selectOption({ label: "+ Add a new room…" });
     await add.getByLabel("New room name").fill("Kitchen");
     await add.getByRole("button", { name: "Add room" }).click();
-    await expect(add.getByLabel("Room")).toHaveValue("Kitchen");
+    await expect(add.getByTestId("add-detector-room")).toHaveValue("Kitchen");
     await add.getByLabel("Cable run (m)").fill("9");
     await add.getByRole("button", { name: "Add detector" }).click();
     await expect(page.getByTestId("schedule-message")).toHaveText("Kitchen window added.");
