@@ -19,7 +19,7 @@ export interface HeavyWorkSites {
 async function siteWithSchedule(api: CookieClient, name: string, detectors: number): Promise<{ siteId: number; detectorIds: string[] }> {
   const site = await api.request("/api/sites", { method: "POST", json: { name, areas: [] } });
   if (site.status !== 200) throw new Error(`site: ${site.status} ${site.text.slice(0, 300)}`);
-  const imported = await api.request(`/api/sites/${site.json.id}/schedule/import`, { method: "POST", json: { mode: "confirm", csv: scheduleCsvOf(detectors) } });
+  const imported = await api.request(`/api/sites/${site.json.id}/schedule/import`, { method: "POST", json: { mode: "confirm", csv: scheduleCsvOf(detectors), addUnknownPlaces: true } });
   if (imported.status !== 200) throw new Error(`schedule import: ${imported.status} ${imported.text.slice(0, 300)}`);
   return { siteId: site.json.id, detectorIds: (imported.json.detectors as { id: string }[]).map((d) => d.id) };
 }

@@ -55,7 +55,7 @@ export async function run(): Promise<void> {
     const api = new CookieClient(server.base);
     await api.signIn("designer@quillfen.example", "loop-demo-2026");
     const site = await api.request("/api/sites", { method: "POST", json: { name: "Load bench site", areas: [] } });
-    const imported = await api.request(`/api/sites/${site.json.id}/schedule/import`, { method: "POST", json: { mode: "confirm", csv: scheduleCsvOf(DETECTORS) } });
+    const imported = await api.request(`/api/sites/${site.json.id}/schedule/import`, { method: "POST", json: { mode: "confirm", csv: scheduleCsvOf(DETECTORS), addUnknownPlaces: true } });
     if (imported.status !== 200) throw new Error(`schedule import: ${imported.status} ${imported.text.slice(0, 300)}`);
     const document = largeLayoutDocument((imported.json.detectors as { id: string }[]).map((d) => d.id));
     const layouts: { id: number; version: number }[] = [];

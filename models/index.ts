@@ -10,6 +10,8 @@ export { OrganisationCatalog } from "./catalog";
 import { initReviewModels } from "./review";
 export { CommissioningPhoto, CommissioningReading, LayoutComment, LayoutDecision, LayoutReview, RevisionSnapshot } from "./review";
 import { initDesignModels } from "./design";
+import { initSiteStructureModels } from "./site-structure";
+export { Floor, SiteInstaller } from "./site-structure";
 export { Layout, LayoutRevision, ScheduleDetectorRecord } from "./design";
 
 export class Organisation extends Model<InferAttributes<Organisation>, InferCreationAttributes<Organisation>> {
@@ -54,7 +56,11 @@ export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<S
   declare name: string;
   declare address: string;
   declare description: string;
-  declare installerUserId: number | null;
+  declare contactName: CreationOptional<string>;
+  declare contactPhone: CreationOptional<string>;
+  declare contactEmail: CreationOptional<string>;
+  declare notes: CreationOptional<string | null>;
+  declare archivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -62,6 +68,7 @@ export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<S
 export class Area extends Model<InferAttributes<Area>, InferCreationAttributes<Area>> {
   declare id: CreationOptional<number>;
   declare siteId: number;
+  declare floorId: number;
   declare name: string;
   declare position: number;
 }
@@ -70,6 +77,7 @@ export class Room extends Model<InferAttributes<Room>, InferCreationAttributes<R
   declare id: CreationOptional<number>;
   declare areaId: number;
   declare name: string;
+  declare position: CreationOptional<number>;
 }
 
 export class AuditEntry extends Model<InferAttributes<AuditEntry>, InferCreationAttributes<AuditEntry>> {
@@ -149,17 +157,21 @@ export function initModels(sequelize: Sequelize) {
       name: { type: DataTypes.STRING(200), allowNull: false },
       address: { type: DataTypes.STRING(500), allowNull: false, defaultValue: "" },
       description: { type: DataTypes.TEXT, allowNull: false },
-      installerUserId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+      contactName: { type: DataTypes.STRING(200), allowNull: false, defaultValue: "" },
+      contactPhone: { type: DataTypes.STRING(60), allowNull: false, defaultValue: "" },
+      contactEmail: { type: DataTypes.STRING(254), allowNull: false, defaultValue: "" },
+      notes: { type: DataTypes.TEXT, allowNull: true },
+      archivedAt: { type: DataTypes.DATE, allowNull: true },
       ...stamps,
     },
     { sequelize, modelName: "Site", tableName: "sites" },
   );
   Area.init(
-    { id, siteId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false }, name: { type: DataTypes.STRING(200), allowNull: false }, position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 } },
+    { id, siteId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false }, floorId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false }, name: { type: DataTypes.STRING(200), allowNull: false }, position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 } },
     { sequelize, modelName: "Area", tableName: "areas", timestamps: false },
   );
   Room.init(
-    { id, areaId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false }, name: { type: DataTypes.STRING(200), allowNull: false } },
+    { id, areaId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false }, name: { type: DataTypes.STRING(200), allowNull: false }, position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 } },
     { sequelize, modelName: "Room", tableName: "rooms", timestamps: false },
   );
   AuditEntry.init(
@@ -215,6 +227,7 @@ export function initModels(sequelize: Sequelize) {
   User.hasMany(Membership, { foreignKey: "userId" });
   Site.hasMany(Area, { foreignKey: "siteId", as: "areas" });
   Area.hasMany(Room, { foreignKey: "areaId", as: "rooms" });
+  initSiteStructureModels(sequelize);
   initDesignModels(sequelize);
   initReviewModels(sequelize);
 }

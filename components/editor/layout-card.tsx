@@ -6,6 +6,7 @@ import type { LayoutMeta } from "@/lib/server/layouts";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { useFormat } from "@/components/format/format-provider";
+import { DuplicateLayout } from "@/components/editor/duplicate-layout";
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
 
@@ -53,6 +54,7 @@ export function LayoutCard({ siteId, layout: l, canWrite, onDelete, onArchive }:
       <p className="text-xs text-slate-600">
         {l.summary.detectorsPlaced} detectors placed, {l.summary.unplaced} unplaced · {l.summary.inputsUsed} of {l.summary.inputsTotal} inputs · {l.summary.boards} boards
       </p>
+      {canWrite ? <DuplicateLayout siteId={siteId} layoutId={l.id} name={l.name} /> : null}
       {canWrite ? (
         <div className="mt-auto flex justify-end gap-3 text-xs">
           {l.hasApproval || archived ? (

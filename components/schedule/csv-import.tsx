@@ -4,9 +4,13 @@ import { useState } from "react";
 import type { ImportPreview } from "@/lib/server/schedules";
 import { scheduleCsvColumns } from "@/lib/schedule/csv";
 import { formatGauge } from "@/lib/schedule/schema";
-import { describeError, sendJson } from "@/lib/client/fetcher";
+import type { SiteDetail } from "@/lib/server/sites";
+import { importRequestSchema } from "@/lib/schedule/schedule-request-schema";
+import { describeError, fetcher, sendJson } from "@/lib/client/fetcher";
+import { useSiteAreas } from "@/components/schedule/site-areas-context";
+import { UnknownPlaces } from "@/components/schedule/unknown-places";
 import { Button } from "@/components/ui/button";
-import { supervisionLabels, type DetectorType } from "@/components/schedule/schedule-labels";
+import { siteAreasOf, supervisionLabels, type DetectorType } from "@/components/schedule/schedule-labels";
 
 /** Upload a CSV file, see every row and every problem with its row number, and only then store it. */
 export function CsvImport({ siteId, types, onImported }: { siteId: number; types: DetectorType[]; onImported: (count: number) => void }) {
@@ -14,10 +18,13 @@ export function CsvImport({ siteId, types, onImported }: { siteId: number; types
   const [preview, setPreview] = useState<ImportPreview | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
+  const [addPlaces, setAddPlaces] = useState(false);
+  const places = useSiteAreas();
   const typeName = new Map(types.map((t) => [t.id, t.name]));
 
   async function choose(f: File | undefined) {
     setPreview(null);
+    setAddPlaces(false);
     setError(null);
     if (!f) return setFile(null);
     if (f.size > 1024 * 1024) return setError("The file is larger than 1 MiB.");
@@ -37,7 +44,8 @@ export function CsvImport({ siteId, types, onImported }: { siteId: number; types
     if (!file) return;
     setBusy(true);
     try {
-      const r = await sendJson<{ imported: number }>(`/api/sites/${siteId}/schedule/import`, "POST", { mode: "confirm", csv: file.text, fileName: file.name });
+      const r = await sendJson<{ imported: number; addedPlaces: unknown[] }>(`/api/sites/${siteId}/schedule/import`, "POST", importRequestSchema.parse({ mode: "confirm", csv: file.text, fileName: file.name, addUnknownPlaces: addPlaces }));
+      if (r.addedPlaces.length && places) places.setAreas(siteAreasOf(await fetcher<SiteDetail>(`/api/sites/${siteId}`)));
       setFile(null);
       setPreview(null);
       onImported(r.imported);
@@ -89,6 +97,7 @@ export function CsvImport({ siteId, types, onImported }: { siteId: number; types
               ))}
             </ul>
           ) : null}
+          {preview.unknownPlaces.length && !preview.errors.length ? <UnknownPlaces places={preview.unknownPlaces} add={addPlaces} onAdd={setAddPlaces} /> : null}
           <div className="mt-2 max-h-72 overflow-auto">
             <table className="w-full text-xs">
               <thead className="sticky top-0 bg-white text-left text-slate-500">
@@ -120,8 +129,9 @@ export function CsvImport({ siteId, types, onImported }: { siteId: number; types
             </table>
           </div>
           <div className="mt-3 flex gap-2">
-            <Button onClick={confirm} disabled={busy || preview.errors.length > 0 || preview.rows.length === 0}>
-              Import {preview.rows.length} detector{preview.rows.length === 1 ? "" : "s"}
+            <Button onClick={confirm} disabled={busy || preview.errors.length > 0 || preview.rows.length === 0 || (preview.unknownPlaces.length > 0 && !addPlaces)}>
+              {preview.unknownPlaces.length && addPlaces ? `Add ${preview.unknownPlaces.length} and import ` : "Import "}
+              {preview.rows.length} detector{preview.rows.length === 1 ? "" : "s"}
             </Button>
             <Button variant="secondary" onClick={() => (setFile(null), setPreview(null))}>
               Cancel

@@ -4,6 +4,7 @@ import { useState } from "react";
 import { createDetectorFormSchema, formatGauge, parseGauge, supervisionPreferenceSchema, type ScheduleDetector } from "@/lib/schedule/schema";
 import { Button } from "@/components/ui/button";
 import { supervisionLabels, type DetectorType, type SiteArea } from "@/components/schedule/schedule-labels";
+import { PlacePicker } from "@/components/schedule/place-picker";
 
 type Values = Omit<ScheduleDetector, "id">;
 
@@ -15,9 +16,9 @@ export function DetectorForm({ types, areas, initial, submitLabel, onSubmit, onC
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [serverError, setServerError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
-  const [area, setArea] = useState(start.area);
+  // a new key after a successful add resets the area and room pickers
+  const [resetKey, setResetKey] = useState(0);
   const formId = initial ? "edit-detector" : "add-detector";
-  const rooms = areas.find((a) => a.name === area)?.rooms ?? areas.flatMap((a) => a.rooms);
 
   async function submit(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
@@ -46,7 +47,7 @@ export function DetectorForm({ types, areas, initial, submitLabel, onSubmit, onC
     setServerError(err);
     if (!err && !initial) {
       (e.target as HTMLFormElement).reset();
-      setArea("");
+      setResetKey((k) => k + 1);
     }
   }
 
@@ -76,24 +77,7 @@ export function DetectorForm({ types, areas, initial, submitLabel, onSubmit, onC
         </select>
         {err("catalogId")}
       </label>
-      <label className="text-sm">
-        <span className="font-medium">Area</span>
-        <input name="area" list={`${formId}-areas`} value={area} onChange={(e) => setArea(e.target.value)} className={`${field} border-line`} maxLength={120} />
-        <datalist id={`${formId}-areas`}>
-          {areas.map((a) => (
-            <option key={a.name} value={a.name} />
-          ))}
-        </datalist>
-      </label>
-      <label className="text-sm">
-        <span className="font-medium">Room</span>
-        <input name="room" list={`${formId}-rooms`} defaultValue={start.room} className={`${field} border-line`} maxLength={120} />
-        <datalist id={`${formId}-rooms`}>
-          {rooms.map((r) => (
-            <option key={r} value={r} />
-          ))}
-        </datalist>
-      </label>
+      <PlacePicker key={resetKey} formId={formId} fallbackAreas={areas} initialArea={start.area} initialRoom={start.room} />
       <label className="text-sm">
         <span className="font-medium">Cable run (m)</span>
         <input name="cableM" type="number" step="any" min={0} defaultValue={start.cableM || ""} className={`${field} ${errors.cableM ? "border-fault" : "border-line"}`} aria-invalid={!!errors.cableM} />

@@ -8,6 +8,7 @@ const everyone: readonly Role[] = roles;
 export const permissionTable = {
   "site:read": everyone,
   "site:write": ["admin", "designer", "engineer"],
+  "site:archive": ["admin", "engineer"],
   "schedule:write": ["admin", "designer", "engineer"],
   "layout:read": everyone,
   "layout:write": ["admin", "designer", "engineer"],
@@ -43,6 +44,7 @@ export const roleLabels: Record<Role, string> = {
 export const permissionLabels: Record<Permission, string> = {
   "site:read": "view sites",
   "site:write": "create and edit sites",
+  "site:archive": "archive and restore sites",
   "schedule:write": "edit device schedules",
   "layout:read": "open layouts",
   "layout:write": "change layouts",

@@ -3,7 +3,8 @@
 import { z } from "zod";
 import { catalogFileSchema, idSchema, inputTypeSchema, reportSchema } from "@/lib/catalog/schema";
 import { analyzeRequestSchema, inputTypeRefSchema, loopSpecSchema } from "@/lib/loop";
-import { siteInputSchema, siteUpdateSchema } from "@/lib/sites/site-schema";
+import { addRoomSchema, siteCopySchema, siteInputSchema, siteStructureSchema, siteUpdateSchema } from "@/lib/sites/site-schema";
+import { duplicateLayoutSchema } from "@/lib/layout/duplicate-schema";
 import { acceptSchema, inviteSchema, joinSchema, roleChangeSchema } from "@/lib/members/member-schema";
 import { changePasswordSchema, confirmEmailSchema, emailOnlySchema, resetPasswordSchema, signUpSchema } from "@/lib/auth/sign-up-schema";
 import { organisationSettingsSchema } from "@/lib/organisation/settings-schema";
@@ -42,11 +43,19 @@ const siteSummarySchema = z.strictObject({
   name: z.string(),
   address: z.string(),
   description: z.string(),
-  installerUserId: z.number().int().nullable(),
+  archivedAt: z.iso.datetime().nullable(),
   updatedAt: z.iso.datetime(),
 });
+const namedNode = { id: z.number().int(), name: z.string() };
+const siteAreaSchema = z.strictObject({ ...namedNode, floorId: z.number().int(), rooms: z.array(z.strictObject(namedNode)) });
 const siteDetailSchema = siteSummarySchema.extend({
-  areas: z.array(z.strictObject({ id: z.number().int(), name: z.string(), rooms: z.array(z.strictObject({ id: z.number().int(), name: z.string() })) })),
+  contactName: z.string(),
+  contactPhone: z.string(),
+  contactEmail: z.string(),
+  notes: z.string(),
+  installers: z.array(z.strictObject({ userId: z.number().int(), name: z.string(), email: z.string() })).meta({ description: "Assigned members who still have the installer role." }),
+  floors: z.array(z.strictObject({ ...namedNode, areas: z.array(siteAreaSchema) })).meta({ description: "The floors in order, each with its areas and rooms in order." }),
+  areas: z.array(siteAreaSchema).meta({ description: "Every area of every floor, in floor order: what a detector's area and room are chosen from." }),
 });
 const memberListSchema = z.strictObject({
   members: z.array(z.strictObject({ membershipId: z.number().int(), userId: z.number().int(), name: z.string(), email: z.string(), role: z.enum(roles) })),
@@ -77,6 +86,10 @@ export const namedSchemas: Record<string, z.ZodType> = {
   SiteUpdate: siteUpdateSchema,
   SiteSummary: siteSummarySchema,
   SiteDetail: siteDetailSchema,
+  SiteStructure: siteStructureSchema,
+  RoomAdd: addRoomSchema,
+  SiteCopy: siteCopySchema,
+  LayoutDuplicate: duplicateLayoutSchema,
   Invitation: inviteSchema,
   InvitationAcceptance: acceptSchema,
   RoleChange: roleChangeSchema,

@@ -132,12 +132,39 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
     ],
   },
   "/api/sites": {
-    get: ["listSites", { tag: "sites", summary: "The caller's organisation's sites", permission: "site:read", ok: { description: "The sites, by name.", schema: { type: "object", properties: { sites: { type: "array", items: REF("SiteSummary") } }, required: ["sites"] } } }],
-    post: ["createSite", { tag: "sites", summary: "Create a site with its floors/areas and rooms", permission: "site:write", body: "SiteInput", ok: { description: "The new site.", schema: REF("SiteDetail") } }],
+    get: ["listSites", { tag: "sites", summary: "The caller's organisation's sites; archived ones only when asked", permission: "site:read", query: [{ name: "archived", description: "exclude (default), include or only", schema: { type: "string", enum: ["exclude", "include", "only"] } }], ok: { description: "The sites, by name.", schema: { type: "object", properties: { sites: { type: "array", items: REF("SiteSummary") } }, required: ["sites"] } } }],
+    post: ["createSite", { tag: "sites", summary: "Create a site with its details and its floors, areas and rooms", permission: "site:write", body: "SiteInput", ok: { description: "The new site.", schema: REF("SiteDetail") } }],
   },
   "/api/sites/{siteId}": {
-    get: ["getSite", { tag: "sites", summary: "One site with areas and rooms", permission: "site:read", pathParams: [siteId], ok: { description: "The site.", schema: REF("SiteDetail") } }],
-    patch: ["updateSite", { tag: "sites", summary: "Rename, re-address, assign the installer", permission: "site:write", pathParams: [siteId], body: "SiteUpdate", ok: { description: "The site as saved.", schema: REF("SiteDetail") } }],
+    get: ["getSite", { tag: "sites", summary: "One site with its floors, areas, rooms and installers", permission: "site:read", pathParams: [siteId], ok: { description: "The site.", schema: REF("SiteDetail") } }],
+    patch: ["updateSite", { tag: "sites", summary: "Change the site's details or its assigned installers", description: "installerUserIds replaces the assignment; each must be a member with the installer role (422 otherwise).", permission: "site:write", pathParams: [siteId], body: "SiteUpdate", ok: { description: "The site as saved.", schema: REF("SiteDetail") } }],
+  },
+  "/api/sites/{siteId}/structure": {
+    put: [
+      "saveSiteStructure",
+      {
+        tag: "sites",
+        summary: "Replace the ordered floors, areas and rooms",
+        description: "A node with an id keeps it (renamed or moved, its detectors follow); without an id it is added; a node left out is removed. Removing a room or area detectors still name is refused (409 naming how many); ids of another site give 422.",
+        permission: "site:write",
+        pathParams: [siteId],
+        body: "SiteStructure",
+        ok: { description: "The site as saved.", schema: REF("SiteDetail") },
+        errors: [409],
+      },
+    ],
+  },
+  "/api/sites/{siteId}/rooms": {
+    post: ["addSiteRoom", { tag: "sites", summary: "Add one room to an area (the detector form's add a new room)", permission: "site:write", pathParams: [siteId], body: "RoomAdd", ok: { description: "The site as saved.", schema: REF("SiteDetail") }, errors: [409] }],
+  },
+  "/api/sites/{siteId}/archive": {
+    post: ["archiveSite", { tag: "sites", summary: "Archive the site: hidden from the list, everything kept", permission: "site:archive", pathParams: [siteId], ok: { description: "The site as saved.", schema: REF("SiteDetail") }, errors: [409] }],
+  },
+  "/api/sites/{siteId}/restore": {
+    post: ["restoreSite", { tag: "sites", summary: "Bring an archived site back into the list", permission: "site:archive", pathParams: [siteId], ok: { description: "The site as saved.", schema: REF("SiteDetail") }, errors: [409] }],
+  },
+  "/api/sites/{siteId}/copy": {
+    post: ["copySite", { tag: "sites", summary: "A new site with this site's details, structure and device schedule (not its layouts)", permission: "schedule:write", pathParams: [siteId], body: "SiteCopy", ok: { description: "The new site.", schema: REF("SiteDetail") } }],
   },
   "/api/members": {
     get: ["listMembers", { tag: "members", summary: "Members and open invitations of the caller's organisation", permission: "members:read", ok: { description: "Members and invitations.", schema: REF("MemberList") } }],
@@ -267,7 +294,7 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
   "/api/sites/{siteId}/schedule/import": {
     post: [
       "importSchedule",
-      { tag: "schedule", summary: "Import a CSV: preview checks it and stores nothing; confirm stores it in one transaction", description: "Any bad row refuses the whole file (422, nothing stored) with its row number.", permission: "schedule:write", pathParams: [siteId], body: "ScheduleImport", ok: object("The preview (rows, errors) or what was stored.") },
+      { tag: "schedule", summary: "Import a CSV: preview checks it and stores nothing; confirm stores it in one transaction", description: "Any bad row refuses the whole file (422, nothing stored) with its row number, among them a life-safety detector marked shared-ok. The preview lists `unknownPlaces`, areas and rooms the site lacks; confirm refuses them (409 listing them) unless `addUnknownPlaces` is true, which adds them in the same transaction.", permission: "schedule:write", pathParams: [siteId], body: "ScheduleImport", ok: object("The preview (rows, errors, unknownPlaces) or what was stored (imported, detectors, addedPlaces)."), errors: [409] },
     ],
   },
   "/api/sites/{siteId}/layouts": {
@@ -287,6 +314,9 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
   },
   "/api/layouts/{layoutId}/archive": {
     post: ["archiveLayout", { tag: "layouts", summary: "Archive a layout or bring it back", description: "An archived layout stays readable (sheet, commissioning record, history) and is not changed.", permission: "layout:write", pathParams: [layoutId], body: "LayoutArchive", ok: object("{ layout }.") }],
+  },
+  "/api/layouts/{layoutId}/duplicate": {
+    post: ["duplicateLayout", { tag: "layouts", summary: "The layout's current design as a new draft layout with its own history", description: "422 when it names detectors or hardware that no longer exist.", permission: "layout:write", pathParams: [layoutId], body: "LayoutDuplicate", ok: object("{ layout: { id, siteId, name, from } }.") }],
   },
   "/api/layouts/{layoutId}/revisions": {
     get: ["listRevisions", { tag: "layouts", summary: "Every revision, newest first, with who saved it and its findings summary", permission: "layout:read", pathParams: [layoutId], ok: object("{ revisions }.") }],

@@ -3,6 +3,7 @@ import fc from "fast-check";
 import { parseScheduleCsv, serializeScheduleCsv } from "@/lib/schedule/csv";
 import { scheduleRowSchema, type ScheduleRow } from "@/lib/schedule/schema";
 import { fixtureCatalog } from "@/lib/solver/testing/fixture-catalog";
+import { isLifeSafety } from "@/lib/catalog/life-safety";
 
 describe("parseScheduleCsv", () => {
   const header = "label,type,area,room,cable_m,gauge,supervision";
@@ -53,6 +54,18 @@ describe("parseScheduleCsv", () => {
   });
 });
 
+describe("life-safety detectors and shared inputs", () => {
+  it("refuses a life-safety detector marked shared-ok, naming its row, and keeps the other rows", () => {
+    const csv = ["label,type,area,room,cable_m,gauge,supervision", "Door,fx-door,G,Hall,10,22 AWG,shared-ok", "Plant smoke,fx-smoke,B,Plant,20,22 AWG,shared-ok", "Store smoke,fx-smoke,B,Store,20,22 AWG,single-eol"].join("\n");
+    const r = parseScheduleCsv(csv, fixtureCatalog);
+    // a fire detector shares no input with another: common practice, no published source; local fire codes decide
+    expect(r.errors).toHaveLength(1);
+    expect(r.errors[0]).toMatchObject({ row: 3, column: "supervision" });
+    expect(r.errors[0].message).toMatch(/life-safety/);
+    expect(r.rows.map((x) => x.label)).toEqual(["Door", "Store smoke"]);
+  });
+});
+
 describe("serialize then parse", () => {
   const text = (max: number) =>
     fc
@@ -68,7 +81,9 @@ describe("serialize then parse", () => {
       gauge: fc.oneof(fc.integer({ min: 10, max: 30 }).map((awg) => ({ awg })), fc.double({ min: 0.05, max: 10, noNaN: true }).map((mm2) => ({ mm2 }))),
       supervision: fc.constantFrom("double-eol", "single-eol", "shared-ok", "none" as const),
     })
-    .filter((r) => scheduleRowSchema.safeParse(r).success);
+    .filter((r) => scheduleRowSchema.safeParse(r).success)
+    // a life-safety detector that may share an input is refused on import (tested below)
+    .filter((r) => !(r.supervision === "shared-ok" && isLifeSafety(fixtureCatalog.detectors.find((d) => d.id === r.catalogId)!)));
 
   it("gives back the same rows (unicode, commas, quotes and line breaks in text)", () => {
     fc.assert(

@@ -1,4 +1,5 @@
 import type { Catalog } from "@/lib/catalog/schema";
+import { isLifeSafety } from "@/lib/catalog/life-safety";
 import { readCsv, writeCsv } from "@/lib/csv/csv";
 import { formatGauge, parseGauge, scheduleRowSchema, supervisionPreferenceSchema, type ScheduleRow } from "@/lib/schedule/schema";
 
@@ -57,7 +58,7 @@ export function parseScheduleCsv(text: string, catalog: Pick<Catalog, "detectors
   for (const c of required) if (!index.has(c)) out.errors.push({ row: 1, column: c, message: `the header has no ${c} column` });
   if (out.errors.length) return out;
 
-  const detectorIds = new Set(catalog.detectors.map((d) => d.id));
+  const detectorById = new Map(catalog.detectors.map((d) => [d.id, d]));
   records.slice(1).forEach((rec, k) => {
     const row = k + 2;
     if (rec.every((f) => f.trim() === "")) return; // blank line
@@ -70,7 +71,7 @@ export function parseScheduleCsv(text: string, catalog: Pick<Catalog, "detectors
     if (rec.length > header.length) errs.push({ row, column: null, message: `${rec.length} fields, the header has ${header.length}` });
     const type = cell("type").trim();
     if (type === "") errs.push({ row, column: "type", message: "no detector type" });
-    else if (!detectorIds.has(type)) errs.push({ row, column: "type", message: `${type} is not a detector in the catalog` });
+    else if (!detectorById.has(type)) errs.push({ row, column: "type", message: `${type} is not a detector in the catalog` });
     const cableText = cell("cable_m");
     const cableM = parseNumber(cableText);
     if (cableM === null) errs.push({ row, column: "cable_m", message: cableText.trim() === "" ? "no cable length" : `"${cableText}" is not a number of metres` });
@@ -81,6 +82,8 @@ export function parseScheduleCsv(text: string, catalog: Pick<Catalog, "detectors
     const sup = supText === "" ? { success: true as const, data: defaultSupervision } : supervisionPreferenceSchema.safeParse(supText);
     if (!sup.success)
       errs.push({ row, column: "supervision", message: `"${supText}" is not one of ${supervisionPreferenceSchema.options.join(", ")}` });
+    else if (sup.data === "shared-ok" && detectorById.has(type) && isLifeSafety(detectorById.get(type)!))
+      errs.push({ row, column: "supervision", message: `${type} is a life-safety detector: it may not share an input with another detector; choose single-eol or double-eol` });
     if (errs.length === 0) {
       const parsed = scheduleRowSchema.safeParse({
         label: cell("label"),

@@ -20,5 +20,7 @@ export const importRequestSchema = z.strictObject({
   mode: z.enum(["preview", "confirm"]),
   csv: z.string().max(MAX_IMPORT_BYTES, "the file is larger than 1 MiB"),
   fileName: z.string().max(200).optional(),
+  /** On confirm: add the areas and rooms the file names that the site lacks (the preview lists them). */
+  addUnknownPlaces: z.boolean().optional(),
 });
 export type ImportRequest = z.infer<typeof importRequestSchema>;

@@ -3,7 +3,9 @@ import { Op, type Transaction } from "sequelize";
 import { db } from "./db";
 import { audit } from "./audit";
 import { ApiError, notFound } from "./errors";
-import { findSite } from "./sites";
+import { findSite, loadStructure } from "./sites";
+import { addPlaces } from "./site-structure";
+import { describePlace, matchPlace, unknownPlaces, type KnownArea, type UnknownPlace } from "@/lib/sites/places";
 import { effectiveCatalogFor } from "./catalogs";
 import type { Actor } from "./session";
 import { Layout, LayoutReview, LayoutRevision, ScheduleDetectorRecord } from "@/models";
@@ -169,30 +171,45 @@ export interface ImportPreview {
   errors: CsvRowError[];
   /** Records in the file besides the header and blank lines. */
   records: number;
+  /** Areas and rooms the file names that the site does not have: added only when the import is confirmed with addUnknownPlaces. */
+  unknownPlaces: UnknownPlace[];
 }
 
-function preview(csv: string, catalog: Catalog): ImportPreview {
+function preview(csv: string, catalog: Catalog, areas: KnownArea[]): ImportPreview {
   // a NUL byte means a binary file behind a .csv name; refused as a whole, like a catalog upload
   const nul = csv.indexOf("\u0000");
-  if (nul >= 0) return { rows: [], errors: [{ row: csv.slice(0, nul).split("\n").length, column: null, message: "the file contains a NUL byte, so it is not a text file: save it as UTF-8 CSV" }], records: 0 };
+  if (nul >= 0) return { rows: [], errors: [{ row: csv.slice(0, nul).split("\n").length, column: null, message: "the file contains a NUL byte, so it is not a text file: save it as UTF-8 CSV" }], records: 0, unknownPlaces: [] };
   const parsed = parseScheduleCsv(csv, catalog);
-  const rows = parsed.rows.map((detector, i) => ({ row: parsed.rowNumbers[i], detector }));
+  // names the site already has are stored in the site's own spelling
+  const rows = parsed.rows.map((detector, i) => {
+    const m = matchPlace(areas, detector.area, detector.room);
+    return { row: parsed.rowNumbers[i], detector: { ...detector, area: m.area, room: m.room } };
+  });
   const badRows = new Set(parsed.errors.filter((e) => e.row > 1).map((e) => e.row));
-  return { rows, errors: parsed.errors, records: rows.length + badRows.size };
+  const unknown = unknownPlaces(areas, rows.map((r) => ({ row: r.row, area: r.detector.area, room: r.detector.room })));
+  return { rows, errors: parsed.errors, records: rows.length + badRows.size, unknownPlaces: unknown };
+}
+
+async function previewFor(actor: Actor, siteId: number, csv: string) {
+  await findSite(actor, siteId);
+  const [catalog, floors] = await Promise.all([catalogFor(actor.organisationId), loadStructure(siteId)]);
+  return { floors, p: preview(csv, catalog, floors.flatMap((f) => f.areas)) };
 }
 
 /** Parse and check a CSV file; nothing is stored. */
 export async function previewImport(actor: Actor, siteId: number, csv: string): Promise<ImportPreview> {
   ensureCan(actor, "schedule:write");
-  await findSite(actor, siteId);
-  return preview(csv, await catalogFor(actor.organisationId));
+  return (await previewFor(actor, siteId, csv)).p;
 }
 
-/** Store every row of the file after the site's existing rows, in one transaction; a file with any error stores nothing (422). */
-export async function confirmImport(actor: Actor, siteId: number, csv: string, fileName?: string): Promise<{ imported: number; detectors: ScheduleDetector[] }> {
+/**
+ * Store every row of the file after the site's existing rows, in one transaction; a file with any error stores nothing (422).
+ * A file naming areas or rooms the site lacks is refused (409, listing them) unless `addUnknownPlaces` is set: then they are
+ * added to the site's structure in the same transaction.
+ */
+export async function confirmImport(actor: Actor, siteId: number, csv: string, fileName?: string, addUnknownPlaces = false): Promise<{ imported: number; detectors: ScheduleDetector[]; addedPlaces: UnknownPlace[] }> {
   ensureCan(actor, "schedule:write");
-  await findSite(actor, siteId);
-  const p = preview(csv, await catalogFor(actor.organisationId));
+  const { floors, p } = await previewFor(actor, siteId, csv);
   if (p.errors.length)
     throw new ApiError(
       422,
@@ -201,7 +218,18 @@ export async function confirmImport(actor: Actor, siteId: number, csv: string, f
       { errors: p.errors },
     );
   if (p.rows.length === 0) throw new ApiError(422, "The file has no detector rows; nothing was imported.");
+  if (p.unknownPlaces.length && !addUnknownPlaces)
+    throw new ApiError(
+      409,
+      `The file names ${p.unknownPlaces.length} area${p.unknownPlaces.length === 1 ? "" : "s"} or room${p.unknownPlaces.length === 1 ? "" : "s"} this site does not have: ${p.unknownPlaces.map(describePlace).join(", ")}. Add them to the site, or correct the file; nothing was imported.`,
+      p.unknownPlaces.map((u) => ({ path: `rows ${u.rows.join(", ")}`, message: `${describePlace(u)} is not in the site's structure` })),
+      { unknownPlaces: p.unknownPlaces },
+    );
   const created = await db().transaction(async (transaction) => {
+    if (p.unknownPlaces.length) {
+      await addPlaces(siteId, floors, p.unknownPlaces, transaction);
+      await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "site.places.add", entityType: "site", entityId: siteId, detail: { fromImport: fileName ?? null, places: p.unknownPlaces.map(({ area, room }) => ({ area, room })) } }, transaction);
+    }
     const base = await nextPosition(siteId, transaction);
     const recs = await ScheduleDetectorRecord.bulkCreate(
       p.rows.map((r, i) => ({ siteId, position: base + i, ...rowColumns(r.detector) }) as ScheduleDetectorRecord),
@@ -210,7 +238,7 @@ export async function confirmImport(actor: Actor, siteId: number, csv: string, f
     await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "schedule.import", entityType: "site", entityId: siteId, detail: { fileName: fileName ?? null, rows: recs.length } }, transaction);
     return recs.length;
   });
-  return { imported: created, detectors: await loadSchedule(siteId) };
+  return { imported: created, detectors: await loadSchedule(siteId), addedPlaces: p.unknownPlaces };
 }
 
 export async function exportScheduleCsv(actor: Actor, siteId: number): Promise<{ csv: string; fileName: string }> {

@@ -1,5 +1,5 @@
 import "server-only";
-import { bindModels, db } from "./db";
+import { db } from "./db";
 import { audit } from "./audit";
 import { ApiError } from "./errors";
 import { env } from "./env";
@@ -8,7 +8,7 @@ import { ensureCan } from "./schedules";
 import { createHash } from "node:crypto";
 import { fileStem, findLayoutForReview, getTerminalSheet, loadSheetContext, sheetMetaOf, type SheetOptions } from "./sheets";
 import type { Actor } from "./session";
-import { Membership, Site, User } from "@/models";
+import { siteInstallers } from "./sites";
 import { NOT_APPROVED_MARKING, type PageSize } from "@/lib/server/pdf/pdf-kit";
 import { SOLO_APPROVAL_WORDS } from "@/lib/review/effective-state";
 import { paperOf } from "@/lib/sheet/sheet-request-schema";
@@ -43,19 +43,16 @@ export interface SiteInstaller {
   email: string;
 }
 
-/** The installer assigned to the layout's site, if there is one and they are still a member of the organisation. */
-export async function installerOfSite(actor: Actor, siteInstallerUserId: number | null): Promise<SiteInstaller | null> {
-  if (siteInstallerUserId == null) return null;
-  bindModels();
-  const m = await Membership.findOne({ where: { organisationId: actor.organisationId, userId: siteInstallerUserId }, include: [{ model: User, attributes: ["id", "name", "email"] }] });
-  const u = (m as (Membership & { User?: User }) | null)?.User;
-  return u ? { userId: u.id, name: u.name, email: u.email } : null;
+/** The installers assigned to the layout's site who are still installers of the organisation. */
+export async function layoutInstallers(actor: Actor, layoutId: number): Promise<SiteInstaller[]> {
+  const { site } = await findLayoutForReview(actor, layoutId);
+  return siteInstallers(actor.organisationId, site.id);
 }
 
-export async function layoutInstaller(actor: Actor, layoutId: number): Promise<SiteInstaller | null> {
-  const { site } = await findLayoutForReview(actor, layoutId);
-  const full = await Site.findOne({ where: { id: site.id, organisationId: actor.organisationId }, attributes: ["id", "installerUserId"] });
-  return installerOfSite(actor, full?.installerUserId ?? null);
+/** The site's installers as one addressee line (names and addresses comma-joined), or null when none is assigned. */
+export async function layoutInstaller(actor: Actor, layoutId: number): Promise<{ name: string; email: string } | null> {
+  const all = await layoutInstallers(actor, layoutId);
+  return all.length ? { name: all.map((i) => i.name).join(", "), email: all.map((i) => i.email).join(", ") } : null;
 }
 
 export interface SentSheet {

@@ -1,5 +1,5 @@
 import type { Transaction } from "sequelize";
-import { Area, AuditEntry, Membership, Organisation, Room, Site, User } from "@/models";
+import { Area, AuditEntry, Floor, Membership, Organisation, Room, Site, SiteInstaller, User } from "@/models";
 import type { Role } from "@/lib/auth/permissions";
 import { shippedCatalog } from "@/lib/catalog/shipped";
 import { seedDemoDesign } from "./seed-demo-design";
@@ -41,12 +41,15 @@ export async function seedDemo(transaction: Transaction, hash: (password: string
     users[u.role] = user.id;
   }
   const site = await Site.create(
-    { organisationId: org.id, name: demoBuilding.name, address: demoBuilding.address, description: demoBuilding.description, installerUserId: users.installer },
+    { organisationId: org.id, name: demoBuilding.name, address: demoBuilding.address, description: demoBuilding.description, contactName: "Facilities desk", contactPhone: "", contactEmail: "facilities@quillfen-library.example" },
     { transaction },
   );
+  await SiteInstaller.create({ siteId: site.id, userId: users.installer }, { transaction });
+  // each storey is a floor holding one area of its name: the schedule names the storey as the detector's area
   for (const [position, a] of demoBuilding.areas.entries()) {
-    const area = await Area.create({ siteId: site.id, name: a.name, position }, { transaction });
-    await Room.bulkCreate(a.rooms.map((name) => ({ areaId: area.id, name })), { transaction });
+    const floor = await Floor.create({ siteId: site.id, name: a.name, position }, { transaction });
+    const area = await Area.create({ siteId: site.id, floorId: floor.id, name: a.name, position: 0 }, { transaction });
+    await Room.bulkCreate(a.rooms.map((name, i) => ({ areaId: area.id, name, position: i })), { transaction });
   }
   await seedDemoDesign(transaction, { organisationId: org.id, siteId: site.id, userId: users.designer }, shippedCatalog().catalog);
   await AuditEntry.create({ organisationId: org.id, userId: users.admin, action: "demo.seed", entityType: "organisation", entityId: String(org.id), detail: null }, { transaction });

@@ -1,5 +1,5 @@
 import type { Transaction } from "sequelize";
-import { Area, Membership, Organisation, Room, Site, User } from "@/models";
+import { Area, Floor, Membership, Organisation, Room, Site, SiteInstaller, User } from "@/models";
 import type { Role } from "@/lib/auth/permissions";
 
 // Test-only: a second fictional organisation, so the browser tests can check that one organisation never
@@ -31,10 +31,12 @@ export async function seedRivalOrganisation(transaction: Transaction, hash: (pas
     users[u.role] = user.id;
   }
   const site = await Site.create(
-    { organisationId: org.id, name: rivalSiteName, address: "4 Tiller Street, Westmere", description: "Single-storey joinery workshop (test data of the rival organisation).", installerUserId: users.installer },
+    { organisationId: org.id, name: rivalSiteName, address: "4 Tiller Street, Westmere", description: "Single-storey joinery workshop (test data of the rival organisation)."},
     { transaction },
   );
-  const area = await Area.create({ siteId: site.id, name: "Ground floor", position: 0 }, { transaction });
+  await SiteInstaller.create({ siteId: site.id, userId: users.installer }, { transaction });
+  const floor = await Floor.create({ siteId: site.id, name: "Ground floor", position: 0 }, { transaction });
+  const area = await Area.create({ siteId: site.id, floorId: floor.id, name: "Ground floor", position: 0 }, { transaction });
   await Room.bulkCreate([{ areaId: area.id, name: "Workshop" }, { areaId: area.id, name: "Office" }], { transaction });
   return { organisationId: org.id, siteId: site.id, users };
 }

@@ -54,6 +54,10 @@ export interface DemoObjects {
 export interface Fixtures {
   /** A site of the demo organisation with a small device schedule, made once per run. */
   scratchSite(): Promise<{ siteId: number; detectorIds: string[] }>;
+  /** A new site of the demo organisation with one floor, one area and one room, and no schedule. */
+  newSite(): Promise<{ siteId: number; areaId: number }>;
+  /** A new site as above, archived by the demo admin. */
+  archivedSite(): Promise<{ siteId: number }>;
   /** A new detector on the scratch site. */
   newDetector(): Promise<{ siteId: number; detectorId: string }>;
   /** A new layout on the scratch site (revision 1, version 1) and its document. */

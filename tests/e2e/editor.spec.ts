@@ -177,7 +177,7 @@ test("a second browser saving the same layout meanwhile: the first gets the conf
   test.setTimeout(120_000);
   const siteId = await newSite(page, `Conflict shop ${Date.now()}`);
   const csv = (await import("node:fs")).readFileSync(fixture("corner-shop.csv"), "utf8");
-  expect((await page.request.post(`/api/sites/${siteId}/schedule/import`, { data: { mode: "confirm", csv } })).status()).toBe(200);
+  expect((await page.request.post(`/api/sites/${siteId}/schedule/import`, { data: { mode: "confirm", csv, addUnknownPlaces: true } })).status()).toBe(200);
   const url = await createLayout(page, siteId, "Shared desk", /^Compact 8 control panel/);
 
   const other = await browser.newContext(signedInAs("designer"));
@@ -208,7 +208,7 @@ test("a designer takes a hardware suggestion as a new layout, changes it, and re
   test.setTimeout(120_000);
   const siteId = await newSite(page, `Suggested shop ${Date.now()}`);
   const csv = (await import("node:fs")).readFileSync(fixture("corner-shop.csv"), "utf8");
-  expect((await page.request.post(`/api/sites/${siteId}/schedule/import`, { data: { mode: "confirm", csv } })).status()).toBe(200);
+  expect((await page.request.post(`/api/sites/${siteId}/schedule/import`, { data: { mode: "confirm", csv, addUnknownPlaces: true } })).status()).toBe(200);
   await page.goto(`/sites/${siteId}/layouts`);
   await page.getByRole("button", { name: "Suggest hardware" }).click();
   const single = page.getByTestId("suggestion-single");
@@ -241,7 +241,7 @@ test("with the server out of reach the editor says so and retries, and a reload 
   test.setTimeout(120_000);
   const siteId = await newSite(page, `Offline shop ${Date.now()}`);
   const csv = (await import("node:fs")).readFileSync(fixture("corner-shop.csv"), "utf8");
-  expect((await page.request.post(`/api/sites/${siteId}/schedule/import`, { data: { mode: "confirm", csv } })).status()).toBe(200);
+  expect((await page.request.post(`/api/sites/${siteId}/schedule/import`, { data: { mode: "confirm", csv, addUnknownPlaces: true } })).status()).toBe(200);
   await createLayout(page, siteId, "Offline option", /^Compact 8 control panel/);
 
   // every save fails as if the network were down

@@ -30,8 +30,8 @@ test("a designer keeps a device schedule: add, edit, import, sort, filter, bulk 
   await expect(form).toContainText("a label is needed");
   await form.getByLabel("Label").fill("Till drawer contact");
   await form.getByLabel("Detector type").selectOption({ label: "Surface door contact" });
-  await form.getByLabel("Area").fill("Shop floor");
-  await form.getByLabel("Room").fill("Counter");
+  await form.getByLabel("Area").selectOption("Shop floor");
+  await form.getByLabel("Room").selectOption("Counter");
   await form.getByLabel("Cable run (m)").fill("5.5");
   await form.getByLabel("Gauge").fill("0.22 mm2");
   await form.getByRole("button", { name: "Add detector" }).click();

@@ -228,7 +228,7 @@ export function makeFixtures(admin: APIRequestContext, conn: mariadb.Connection,
   const scratchSite = () =>
     (scratch ??= (async () => {
       const site = await ok(await admin.post("/api/sites", { data: { name: `${scratchPrefix}scratch site`, address: "3 Test Row", areas: [{ name: "Ground floor", rooms: ["Hall"] }] } }), "scratch site");
-      const imported = await ok(await admin.post(`/api/sites/${site.id}/schedule/import`, { data: { mode: "confirm", csv: scheduleCsv, fileName: "scratch.csv" } }), "scratch schedule");
+      const imported = await ok(await admin.post(`/api/sites/${site.id}/schedule/import`, { data: { mode: "confirm", csv: scheduleCsv, fileName: "scratch.csv", addUnknownPlaces: true } }), "scratch schedule");
       return { siteId: site.id as number, detectorIds: (imported.detectors as { id: string }[]).map((d) => d.id) };
     })());
 
@@ -256,6 +256,11 @@ export function makeFixtures(admin: APIRequestContext, conn: mariadb.Connection,
     created.userIds.push(Number(insertId));
     await conn.query("INSERT INTO memberships (organisation_id, user_id, role, created_at, updated_at) VALUES (?, ?, ?, ?, ?)", [await organisationOf(caller), insertId, caller.role ?? "admin", now, now]);
     return { email, password: THROWAWAY_PASSWORD };
+  };
+
+  const newSite = async () => {
+    const site = await ok(await admin.post("/api/sites", { data: { name: `${scratchPrefix}site ${++unique}`, floors: [{ name: "Ground floor", areas: [{ name: "Front", rooms: [{ name: "Hall" }] }] }] } }), "new site");
+    return { siteId: site.id as number, areaId: site.areas[0].id as number };
   };
 
   return {
@@ -294,6 +299,12 @@ export function makeFixtures(admin: APIRequestContext, conn: mariadb.Connection,
     async organisationSettings(caller: Caller) {
       const [o] = await conn.query("SELECT name, currency, locale, time_zone AS timeZone, paper, units, solo_approval AS soloApproval FROM organisations WHERE id = ?", [await organisationOf(caller)]);
       return { ...o, soloApproval: !!o.soloApproval };
+    },
+    newSite,
+    async archivedSite() {
+      const { siteId } = await newSite();
+      await ok(await admin.post(`/api/sites/${siteId}/archive`), "archived site");
+      return { siteId };
     },
     goodCatalogFile,
     uniqueEmail,

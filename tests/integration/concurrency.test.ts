@@ -22,7 +22,7 @@ afterEach(() => {
 async function fixture(detectors = 6) {
   const o = await makeOrganisation("Concurrency");
   const site = await createSite(o.actors.designer, { name: "Concurrency site", address: "", description: "", areas: [] });
-  await confirmImport(o.actors.designer, site.id, scheduleCsvOf(detectors));
+  await confirmImport(o.actors.designer, site.id, scheduleCsvOf(detectors), undefined, true);
   const ids = (await listSchedule(o.actors.designer, site.id)).map((d) => d.id);
   const doc = (busCableM: number): LayoutDocument => largeLayoutDocument(ids, busCableM);
   const { layout } = await createLayout(o.actors.designer, site.id, { name: "Shared layout", document: doc(0) });
@@ -130,7 +130,7 @@ describe("multi-row writes are all or nothing", () => {
   it("a schedule import whose audit entry fails stores none of its rows", async () => {
     const { actors, site } = await fixture(3);
     failAudit();
-    await expect(confirmImport(actors.designer, site.id, scheduleCsvOf(40))).rejects.toThrow(/injected failure/);
+    await expect(confirmImport(actors.designer, site.id, scheduleCsvOf(40), undefined, true)).rejects.toThrow(/injected failure/);
     expect(await ScheduleDetectorRecord.count({ where: { siteId: site.id } })).toBe(3);
   });
 

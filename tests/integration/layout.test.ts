@@ -21,7 +21,7 @@ const csv = [
 async function fixture() {
   const o = await makeOrganisation("Layouts");
   const site = await createSite(o.actors.designer, { name: "Layout site", address: "", description: "", areas: [] });
-  await confirmImport(o.actors.designer, site.id, csv);
+  await confirmImport(o.actors.designer, site.id, csv, undefined, true);
   const schedule = await listSchedule(o.actors.designer, site.id);
   const doc = (n: number): LayoutDocument => ({
     panelId: "panel-large-32",

@@ -34,7 +34,7 @@ async function counted<T>(fn: () => Promise<T>): Promise<{ result: T; count: num
 
 async function layoutOf(actor: Actor, detectors: number) {
   const site = await createSite(actor, { name: `Query count, ${detectors} detectors`, address: "", description: "", areas: [] });
-  await confirmImport(actor, site.id, scheduleCsvOf(detectors));
+  await confirmImport(actor, site.id, scheduleCsvOf(detectors), undefined, true);
   const ids = (await listSchedule(actor, site.id)).map((d) => d.id);
   const { layout } = await createLayout(actor, site.id, { name: `${detectors} detectors`, document: largeLayoutDocument(ids) });
   return { siteId: site.id, layoutId: layout.id };

@@ -26,7 +26,7 @@ export function documentFor(schedule: ScheduleDetector[], n = schedule.length): 
 export async function reviewFixture(label = "Review") {
   const o = await makeOrganisation(label);
   const site = await createSite(o.actors.designer, { name: `${label} site`, address: "", description: "", areas: [] });
-  await confirmImport(o.actors.designer, site.id, csv);
+  await confirmImport(o.actors.designer, site.id, csv, undefined, true);
   const schedule = await listSchedule(o.actors.designer, site.id);
   const { layout } = await createLayout(o.actors.designer, site.id, { name: "Option A", document: documentFor(schedule) });
   return { ...o, site, schedule, layout };

@@ -66,7 +66,7 @@ describe("device schedule in MariaDB", () => {
     expect(p.rows.map((r) => r.row)).toEqual([2, 3, 4]);
     expect(p.rows[1].detector).toMatchObject({ room: "Hall, east", cableM: 18.5, gauge: { mm2: 0.5 }, supervision: "single-eol" });
     expect(await ScheduleDetectorRecord.count({ where: { siteId: site.id } })).toBe(0);
-    const r = await confirmImport(actors.designer, site.id, good, "library.csv");
+    const r = await confirmImport(actors.designer, site.id, good, "library.csv", true);
     expect(r.imported).toBe(3);
     expect(r.detectors.map((d) => d.label)).toEqual(["Front door", "Hall motion", "Back door"]);
     expect(await AuditEntry.count({ where: { action: "schedule.import", entityId: String(site.id) } })).toBe(1);
@@ -91,7 +91,7 @@ describe("device schedule in MariaDB", () => {
 
   it("exports what it imports (round trip through the CSV parser)", async () => {
     const { actors, site } = await siteWithOrg();
-    await confirmImport(actors.designer, site.id, good);
+    await confirmImport(actors.designer, site.id, good, undefined, true);
     const { csv, fileName } = await exportScheduleCsv(actors.installer, site.id);
     expect(fileName).toBe("test-library-device-schedule.csv");
     const back = parseScheduleCsv(csv, shippedCatalog().catalog);
@@ -102,7 +102,7 @@ describe("device schedule in MariaDB", () => {
   it("deletes all or nothing, and never across organisations (404)", async () => {
     const a = await siteWithOrg();
     const b = await siteWithOrg();
-    await confirmImport(a.actors.designer, a.site.id, good);
+    await confirmImport(a.actors.designer, a.site.id, good, undefined, true);
     const ids = (await listSchedule(a.actors.designer, a.site.id)).map((d) => d.id);
     await expect(listSchedule(b.actors.admin, a.site.id)).rejects.toMatchObject({ status: 404 });
     await expect(deleteDetectors(b.actors.designer, a.site.id, ids)).rejects.toMatchObject({ status: 404 });

@@ -8,7 +8,7 @@ import { reviewAction } from "@/lib/server/review";
 import { updateDetector } from "@/lib/server/schedules";
 import { sendSheetToInstaller, terminalSheetPdfCached } from "@/lib/server/send-sheet";
 import { ApiError } from "@/lib/server/errors";
-import { AuditEntry, Site } from "@/models";
+import { AuditEntry, SiteInstaller } from "@/models";
 import { readPdf } from "@/tests/support/pdf-text";
 
 // The terminal sheet sent to the site's installer: through a local SMTP server started here, with the PDF attached.
@@ -44,7 +44,7 @@ describe("sending the terminal sheet", () => {
     const f = await reviewFixture("Send sheet");
     expect(await status(sendSheetToInstaller(f.actors.designer, f.layout.id))).toBe(403); // sheet:send is admin and engineer
     expect(await status(sendSheetToInstaller(f.actors.engineer, f.layout.id))).toBe(409); // no installer assigned yet
-    await Site.update({ installerUserId: f.actors.installer.userId }, { where: { id: f.site.id } });
+    await SiteInstaller.create({ siteId: f.site.id, userId: f.actors.installer.userId });
 
     // an unapproved revision goes out only once the sender confirms it is for review only
     const before = received.length;

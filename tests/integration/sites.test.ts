@@ -37,12 +37,14 @@ describe("sites in MariaDB", () => {
     expect(await Site.count()).toBe(before);
   });
 
-  it("refuses an installer from another organisation", async () => {
+  it("refuses an installer from another organisation, and a member who is not an installer", async () => {
     const a = await makeOrganisation("A");
     const b = await makeOrganisation("B");
     const site = await createSite(a.actors.designer, { name: "S", address: "", description: "", areas: [] });
-    await expect(updateSite(a.actors.admin, site.id, { installerUserId: b.actors.installer.userId })).rejects.toMatchObject({ status: 422 });
-    const ok = await updateSite(a.actors.admin, site.id, { installerUserId: a.actors.installer.userId });
-    expect(ok.installerUserId).toBe(a.actors.installer.userId);
+    await expect(updateSite(a.actors.admin, site.id, { installerUserIds: [b.actors.installer.userId] })).rejects.toMatchObject({ status: 422 });
+    await expect(updateSite(a.actors.admin, site.id, { installerUserIds: [a.actors.designer.userId] })).rejects.toMatchObject({ status: 422 });
+    expect((await getSite(a.actors.admin, site.id)).installers).toEqual([]);
+    const ok = await updateSite(a.actors.admin, site.id, { installerUserIds: [a.actors.installer.userId] });
+    expect(ok.installers.map((i) => i.userId)).toEqual([a.actors.installer.userId]);
   });
 });

@@ -7,6 +7,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { Refusal } from "@/components/ui/refusal";
 import { Card } from "@/components/ui/card";
 import { orNotFound } from "@/lib/server/page-load";
+import { can } from "@/lib/auth/permissions";
 
 export default async function SitePage({ params }: { params: Promise<{ siteId: string }> }) {
   const { siteId } = await params;
@@ -22,6 +23,9 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
         subtitle={site.address}
         actions={
           <>
+            <Link href={`/sites/${site.id}/edit`} className="rounded-md border border-line bg-white px-3 py-2 text-sm font-medium hover:bg-slate-50">
+              {can(actor.role, "site:write") ? "Edit site" : "Site details"}
+            </Link>
             <Link href={`/sites/${site.id}/schedule`} className="rounded-md border border-line bg-white px-3 py-2 text-sm font-medium hover:bg-slate-50">
               Device schedule
             </Link>
@@ -34,17 +38,40 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
           </>
         }
       />
-      <p className="mb-6 max-w-3xl text-sm">{site.description}</p>
-      <h2 className="mb-3 text-lg font-semibold">Floors and areas</h2>
+      {site.archivedAt ? (
+        <p className="mb-4 rounded border border-line bg-slate-100 p-2 text-sm" role="status">
+          This site is archived ({site.archivedAt.slice(0, 10)}): it is hidden from the site list; everything it holds is kept.
+        </p>
+      ) : null}
+      <p className="mb-4 max-w-3xl text-sm">{site.description}</p>
+      <dl className="mb-6 grid max-w-3xl gap-x-4 gap-y-1 text-sm sm:grid-cols-[10rem_1fr]">
+        <dt className="text-slate-500">Customer contact</dt>
+        <dd>{[site.contactName, site.contactPhone, site.contactEmail].filter(Boolean).join(" · ") || "none recorded"}</dd>
+        <dt className="text-slate-500">Installers</dt>
+        <dd data-testid="site-installer-names">{site.installers.map((i) => i.name).join(", ") || "none assigned"}</dd>
+        {site.notes ? (
+          <>
+            <dt className="text-slate-500">Notes</dt>
+            <dd className="whitespace-pre-line">{site.notes}</dd>
+          </>
+        ) : null}
+      </dl>
+      <h2 className="mb-3 text-lg font-semibold">Floors, areas and rooms</h2>
+      {site.floors.length === 0 ? <p className="text-sm text-slate-600">No floors yet.</p> : null}
       <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
-        {site.areas.map((a) => (
-          <Card key={a.id}>
-            <p className="font-medium">{a.name}</p>
-            <ul className="mt-2 text-sm text-slate-600">
-              {a.rooms.map((r) => (
-                <li key={r.id}>{r.name}</li>
-              ))}
-            </ul>
+        {site.floors.map((f) => (
+          <Card key={f.id}>
+            <p className="font-medium">{f.name}</p>
+            {f.areas.map((a) => (
+              <div key={a.id} className="mt-2 text-sm">
+                {a.name === f.name ? null : <p className="font-medium text-slate-700">{a.name}</p>}
+                <ul className="text-slate-600">
+                  {a.rooms.map((r) => (
+                    <li key={r.id}>{r.name}</li>
+                  ))}
+                </ul>
+              </div>
+            ))}
           </Card>
         ))}
       </div>

@@ -10,6 +10,8 @@ import { isLifeSafety } from "@/lib/catalog/life-safety";
 import { PageHeader } from "@/components/ui/page-header";
 import { Refusal } from "@/components/ui/refusal";
 import { ScheduleManager } from "@/components/schedule/schedule-manager";
+import { SiteAreasProvider } from "@/components/schedule/site-areas-context";
+import { siteAreasOf } from "@/components/schedule/schedule-labels";
 import { FireCaution } from "@/components/editor/fire-caution";
 import { orNotFound } from "@/lib/server/page-load";
 
@@ -43,7 +45,9 @@ export default async function SchedulePage({ params }: { params: Promise<{ siteI
           <FireCaution />
         </div>
       ) : null}
-      <ScheduleManager siteId={site.id} initial={schedule} types={types} areas={site.areas.map((a) => ({ name: a.name, rooms: a.rooms.map((r) => r.name) }))} canWrite={can(actor.role, "schedule:write")} />
+      <SiteAreasProvider siteId={site.id} initial={siteAreasOf(site)} canAddRooms={can(actor.role, "site:write")}>
+        <ScheduleManager siteId={site.id} initial={schedule} types={types} areas={siteAreasOf(site)} canWrite={can(actor.role, "schedule:write")} />
+      </SiteAreasProvider>
     </>
   );
 }

@@ -1,0 +1,33 @@
+import type { SiteDetails } from "@/lib/sites/site-schema";
+import { Field } from "@/components/ui/field";
+
+const area = "mt-1 block w-full rounded-md border bg-white px-3 py-2 text-sm";
+
+/** The site's details as form fields (read with FormData), each with its error beside it. */
+export function SiteDetailsFields({ values, errors }: { values?: Partial<SiteDetails>; errors: Record<string, string> }) {
+  const textarea = (name: "description" | "notes", label: string, rows: number) => (
+    <label className="block text-sm sm:col-span-2" htmlFor={name}>
+      <span className="font-medium">{label}</span>
+      <textarea id={name} name={name} rows={rows} defaultValue={values?.[name] ?? ""} aria-invalid={!!errors[name]} className={`${area} ${errors[name] ? "border-fault" : "border-line"}`} />
+      {errors[name] ? <span className="mt-1 block text-xs text-fault">{errors[name]}</span> : null}
+    </label>
+  );
+  return (
+    <div className="grid gap-3 sm:grid-cols-2">
+      <Field label="Site name" name="name" defaultValue={values?.name ?? ""} error={errors.name} maxLength={200} />
+      <Field label="Address" name="address" defaultValue={values?.address ?? ""} error={errors.address} maxLength={500} />
+      <Field label="Customer contact" name="contactName" defaultValue={values?.contactName ?? ""} error={errors.contactName} maxLength={200} />
+      <Field label="Contact phone" name="contactPhone" type="tel" defaultValue={values?.contactPhone ?? ""} error={errors.contactPhone} maxLength={60} />
+      <Field label="Contact e-mail" name="contactEmail" type="email" defaultValue={values?.contactEmail ?? ""} error={errors.contactEmail} maxLength={254} />
+      <div />
+      {textarea("description", "Description", 2)}
+      {textarea("notes", "Notes", 3)}
+    </div>
+  );
+}
+
+/** The detail fields of a form, as the site schemas read them. */
+export function readDetails(form: FormData): Record<keyof SiteDetails, string> {
+  const v = (k: keyof SiteDetails) => String(form.get(k) ?? "");
+  return { name: v("name"), address: v("address"), description: v("description"), contactName: v("contactName"), contactPhone: v("contactPhone"), contactEmail: v("contactEmail"), notes: v("notes") };
+}
