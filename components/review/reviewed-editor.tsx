@@ -4,7 +4,6 @@ import Link from "next/link";
 import { useState } from "react";
 import type { EffectiveReview } from "@/lib/review/effective-state";
 import { LayoutEditor, type LayoutEditorProps } from "@/components/editor/layout-editor";
-import { LayoutTabs } from "@/components/review/layout-tabs";
 
 /** The frozen-revision words the editor shows when the current revision is approved or commissioned. */
 export function frozenReason(review: EffectiveReview): string | null {
@@ -26,7 +25,6 @@ export function ReviewedEditor({ review, editor }: { review: EffectiveReview; ed
   const base = `/sites/${editor.site.id}/layouts/${editor.layout.id}`;
   return (
     <>
-      <LayoutTabs compact siteId={editor.site.id} layoutId={editor.layout.id} review={review} current="editor" />
       {frozen && editor.canWrite ? (
         <div className="no-print mb-3 flex flex-wrap items-center justify-between gap-3 rounded-md border border-signal bg-signal-soft p-3 text-sm" data-testid="frozen-note">
           {newDraft ? (

@@ -6,7 +6,6 @@ import { layoutInstaller } from "@/lib/server/send-sheet";
 import { idParam } from "@/lib/server/route";
 import { can, refusal } from "@/lib/auth/permissions";
 import { Refusal } from "@/components/ui/refusal";
-import { LayoutTabs } from "@/components/review/layout-tabs";
 import { TerminalSheetView } from "@/components/sheet/terminal-sheet-view";
 import { orNotFound } from "@/lib/server/page-load";
 
@@ -26,9 +25,6 @@ export default async function SheetPage({ params, searchParams }: { params: Prom
   const installer = await layoutInstaller(actor, view.layoutId);
   const canSend = can(actor.role, "sheet:send");
   return (
-    <>
-      <LayoutTabs siteId={view.siteId} siteName={view.meta.siteName} layoutId={view.layoutId} layoutName={view.meta.layoutName} review={view.review} current="sheet" />
-      <TerminalSheetView view={view} installer={installer ? { name: installer.name, email: installer.email } : null} canSend={canSend} sendRefusal={canSend ? "" : refusal(actor.role, "sheet:send")} />
-    </>
+    <TerminalSheetView view={view} installer={installer ? { name: installer.name, email: installer.email } : null} canSend={canSend} sendRefusal={canSend ? "" : refusal(actor.role, "sheet:send")} />
   );
 }
