@@ -1,0 +1,34 @@
+import type { PaperSize } from "@/lib/sheet/sheet-request-schema";
+
+const PAGE_CSS: Record<PaperSize, string> = { A4: "A4 portrait", LETTER: "letter portrait" };
+
+/** A CSS string literal from any text: quotes and backslashes escaped, "<" written as a CSS escape so the style element cannot be closed early. */
+export function cssString(text: string): string {
+  return `"${text.replace(/[\\"]/g, "\\$&").replace(/[\n\r\f]/g, " ").replace(/</g, "\\3c ")}"`;
+}
+
+/**
+ * Printing the terminal sheet from the browser: the chosen paper, a new page for each board, the compact board
+ * table instead of the screen's cards, and the sheet's name with "page N of M" in the footer (@page margin boxes).
+ */
+export function SheetPrintStyle({ size, footer }: { size: PaperSize; footer: string }) {
+  return (
+    <style>{`
+      @media print {
+        @page {
+          size: ${PAGE_CSS[size]};
+          margin: 12mm 12mm 14mm;
+          @bottom-left { content: ${cssString(footer)}; font-size: 8pt; color: #444; }
+          @bottom-right { content: "page " counter(page) " of " counter(pages); font-size: 8pt; color: #444; }
+        }
+        .terminal-sheet { font-size: 9px; }
+        .sheet-board + .sheet-board { break-before: page; }
+        .sheet-print-input { break-inside: avoid; }
+        .sheet-print-table thead { display: table-header-group; }
+        .sheet-print-table td { overflow-wrap: anywhere; }
+        main { max-width: none !important; padding: 0 !important; }
+      }
+      .terminal-sheet { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
+    `}</style>
+  );
+}
