@@ -1,6 +1,6 @@
 import { REPORT_WORDS } from "@/lib/loop/row-labels";
 import type { ExpectedReading, SheetBoard, SheetInput, TestKey } from "@/lib/sheet/sheet-types";
-import { CARRIES_WORDS, FITTED_WORDS } from "@/components/sheet/sheet-words";
+import { boardSummary, CARRIES_WORDS, ranges } from "@/components/sheet/sheet-words";
 
 // The board as printed: one compact table, one row per input, the tests as columns with a space to write the
 // reading and tick it; the header repeats on every page the board runs to. The screen's cards and loop drawings
@@ -22,11 +22,18 @@ function Reading({ e, tag }: { e: ExpectedReading; tag: string }) {
   return (
     <span className="block">
       {tag ? `${tag}: ` : ""}
-      <strong className="whitespace-nowrap">{e.rangeText}</strong> {e.reports.map((r) => REPORT_WORDS[r]).join(" or ")}
+      <strong className="whitespace-nowrap">{e.minOhms === Infinity ? "OL" : e.rangeText}</strong> {e.reports.map((r) => REPORT_WORDS[r]).join(" or ")}
       {e.uncertain ? " (band edge)" : ""}
-      <span className="block whitespace-nowrap text-slate-600">read ________ ☐ ok</span>
+      <span className="block whitespace-nowrap text-slate-600">☐ ________</span>
     </span>
   );
+}
+
+/** "cores 1–2 loop, 3–4 power": the full map of what goes where is on screen and in the PDF. */
+function coresText(row: SheetInput): string {
+  const by = new Map<string, number[]>();
+  for (const c of row.cores) by.set(CARRIES_WORDS[c.carries], [...(by.get(CARRIES_WORDS[c.carries]) ?? []), c.core]);
+  return `cores ${[...by].map(([what, cores]) => `${ranges(cores)} ${what}`).join(", ")}`;
 }
 
 function InputRow({ row }: { row: SheetInput }) {
@@ -42,13 +49,16 @@ function InputRow({ row }: { row: SheetInput }) {
         {row.detectors.map((d) => (
           <span key={d.id} className="block">
             <strong>{d.label}</strong> · {d.area} / {d.room} · {d.deviceType}, {d.contact}
-            {d.tamper ? " + tamper" : ""}, {d.gaugeText} {d.cableM} m{d.lifeSafety ? " · LIFE SAFETY" : ""}
+            {d.tamper ? " + tamper" : ""}, {d.gaugeText} {d.cableM} m{d.powered ? `, powered from ${d.poweredFrom ?? "a supply"}` : ""}
+            {d.lifeSafety ? " · LIFE SAFETY" : ""}
           </span>
         ))}
         <span className="block">
-          {row.resistors.length ? row.resistors.map((r) => `${r.valueText} ±${r.tolerancePct} % ${r.bands.length ? `(${r.bands.join("-")})` : "(no colour code)"} ${FITTED_WORDS[r.fittedAt]}`).join("; ") : "no resistor"} · {row.schemeText}
+          {row.resistors.length ? row.resistors.map((r) => `${r.name.replace(/ resistor\b/, "")} ${r.valueText}${r.bands.length ? ` (${r.bands.join("-")})` : ""}`).join(", ") : "no resistor"}
         </span>
-        <span className="block text-slate-700">Cores: {row.cores.map((c) => `${c.core} ${CARRIES_WORDS[c.carries]} ${c.panelEnd} → ${c.farEnd}`).join("; ")}</span>
+        <span className="block text-slate-700">
+          {row.schemeText} · {row.placementText} · {coresText(row)}
+        </span>
         {row.findings.map((f, i) => (
           <span key={i} className="block font-medium">
             {f.severity}: {f.message}
@@ -75,13 +85,27 @@ function InputRow({ row }: { row: SheetInput }) {
 
 export function SheetBoardPrint({ board }: { board: SheetBoard }) {
   const used = board.rows.filter((r): r is SheetInput => !r.spare);
-  if (!used.length) return null;
   return (
     <table className="sheet-print-table hidden w-full table-fixed border-collapse print:table" data-testid={`print-board-${board.boardKey}`}>
+      <colgroup>
+        <col className="w-[5%]" />
+        <col className="w-[31%]" />
+        {PRINT_TEST_COLUMNS.map((c) => (
+          <col key={c.title} />
+        ))}
+      </colgroup>
       <thead>
         <tr>
-          <th className={`${th} w-[7%]`}>Input</th>
-          <th className={`${th} w-[33%]`}>Detectors, resistors, cores</th>
+          <th colSpan={2 + PRINT_TEST_COLUMNS.length} className="border-b-2 border-ink pb-0.5 text-left font-normal">
+            <strong className="text-[1.4em]">
+              {board.name} — {board.deviceName}
+            </strong>{" "}
+            · {boardSummary(board)}
+          </th>
+        </tr>
+        <tr>
+          <th className={th}>Input</th>
+          <th className={th}>Detectors, resistors, cores</th>
           {PRINT_TEST_COLUMNS.map((c) => (
             <th key={c.title} className={th}>
               {c.title}
@@ -93,6 +117,13 @@ export function SheetBoardPrint({ board }: { board: SheetBoard }) {
         {used.map((row) => (
           <InputRow key={row.input} row={row} />
         ))}
+        {used.length === 0 ? (
+          <tr>
+            <td colSpan={2 + PRINT_TEST_COLUMNS.length} className={td}>
+              No input of this board is used.
+            </td>
+          </tr>
+        ) : null}
       </tbody>
     </table>
   );

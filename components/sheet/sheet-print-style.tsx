@@ -19,13 +19,16 @@ export function SheetPrintStyle({ size, footer }: { size: PaperSize; footer: str
           size: ${PAGE_CSS[size]};
           margin: 12mm 12mm 14mm;
           @bottom-left { content: ${cssString(footer)}; font-size: 8pt; color: #444; }
-          @bottom-right { content: "page " counter(page) " of " counter(pages); font-size: 8pt; color: #444; }
+          @bottom-right { content: "page " counter(page) " of " counter(pages); font-size: 8pt; color: #444; white-space: nowrap; }
         }
-        .terminal-sheet { font-size: 9px; }
+        .terminal-sheet { font-size: 7pt; line-height: 1.25; }
         .sheet-board + .sheet-board { break-before: page; }
         .sheet-print-input { break-inside: avoid; }
         .sheet-print-table thead { display: table-header-group; }
         .sheet-print-table td { overflow-wrap: anywhere; }
+        .sheet-head { margin-bottom: 4px !important; }
+        .sheet-head p, .sheet-head li { font-size: 7pt !important; line-height: 1.25 !important; margin-top: 2px !important; padding-top: 1px !important; padding-bottom: 1px !important; }
+        .sheet-head h2 { font-size: 11pt !important; }
         main { max-width: none !important; padding: 0 !important; }
       }
       .terminal-sheet { -webkit-print-color-adjust: exact; print-color-adjust: exact; }

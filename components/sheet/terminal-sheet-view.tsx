@@ -3,6 +3,7 @@
 import { useState } from "react";
 import type { SheetView } from "@/lib/server/sheets";
 import type { SheetInput, SpareInput } from "@/lib/sheet/sheet-types";
+import { boardSummary, spareGroups } from "@/components/sheet/sheet-words";
 import type { PaperSize } from "@/lib/sheet/sheet-request-schema";
 import { SheetInputBlock } from "@/components/sheet/sheet-input-block";
 import { SheetBoardIndex, boardAnchor } from "@/components/sheet/sheet-board-index";
@@ -31,7 +32,7 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal, defau
       <SheetPrintStyle size={size} footer={footer} />
       <SheetToolbar layoutId={view.layoutId} siteId={view.siteId} revision={meta.revision} size={size} onSize={setSize} installer={installer} canSend={canSend} sendRefusal={sendRefusal} />
 
-      <header className="mb-3">
+      <header className="sheet-head mb-3">
         <h2 className="break-words text-xl font-semibold">Terminal sheet — {meta.siteName}</h2>
         <p className="text-sm">
           Layout “{meta.layoutName}”, revision {meta.revision} · {sheet.panel ? sheet.panel.name : "no control panel"} · {sheet.zoneCount} zones on {sheet.boards.length} board{sheet.boards.length === 1 ? "" : "s"} · generated {meta.generatedAt}
@@ -72,27 +73,24 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal, defau
         const spare = b.rows.filter((r): r is SpareInput => r.spare);
         return (
           <section key={b.boardKey} id={boardAnchor(b.boardKey)} className="sheet-board mb-8 scroll-mt-4" data-testid={`sheet-board-${b.boardKey}`}>
-            <div className="mb-2 border-b-2 border-ink pb-1">
-              <h2 className="text-lg font-semibold">
+            <div className="mb-2 border-b-2 border-ink pb-1 print:hidden">
+              <h2 className="break-words text-lg font-semibold">
                 {b.name} — {b.deviceName}
               </h2>
-              <p className="text-xs text-slate-700">
-                {b.inputType ? `${b.inputType.name}, parts ±${b.inputType.tolerancePct} %` : "input type unknown"}
-                {b.busAddress !== null ? ` · data bus address ${b.busAddress}` : ""} · {used.length} of {b.rows.length} inputs used
-                <span className="hidden print:inline"> · {meta.siteName}, “{meta.layoutName}” revision {meta.revision}{view.approved ? "" : " — NOT APPROVED, for review only"}</span>
-              </p>
+              <p className="text-xs text-slate-700">{boardSummary(b)}</p>
             </div>
             {used.map((r) => (
               <SheetInputBlock key={r.input} row={r} />
             ))}
             <SheetBoardPrint board={b} />
             {spare.length ? (
-              <div className="sheet-print-input mb-4 mt-2 text-xs">
-                <h3 className="text-sm font-semibold">Spare inputs</h3>
-                <ul className="mt-1 space-y-0.5">
-                  {spare.map((s) => (
-                    <li key={s.input}>
-                      <strong>Input {s.input}</strong> ({s.terminals}): {s.note}
+              <div className="sheet-print-input mb-4 mt-2 text-xs print:mb-1">
+                <h3 className="text-sm font-semibold print:inline print:text-xs">Spare inputs</h3>
+                <ul className="mt-1 space-y-0.5 print:inline print:space-y-0">
+                  {spareGroups(spare).map((g) => (
+                    <li key={g.inputs} className="print:inline">
+                      {" "}
+                      <strong>{g.inputs}</strong>: {g.note}
                     </li>
                   ))}
                 </ul>
