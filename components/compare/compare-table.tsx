@@ -47,6 +47,11 @@ export function CompareTable({ siteId, comparison }: { siteId: number; compariso
                     review
                   </Link>
                 </span>
+                {c.notRanked ? (
+                  <span className="mt-1 block text-xs font-medium text-fault" data-testid="not-ranked">
+                    {c.notRanked}: never marked best
+                  </span>
+                ) : null}
               </th>
             ))}
           </tr>

@@ -9,9 +9,8 @@ export function ComparisonChart({ columns }: { columns: readonly ChartInput[] })
   return (
     <figure className="overflow-x-auto">
       <svg viewBox={`0 0 ${m.width} ${m.height}`} role="img" aria-labelledby="cmp-chart-title" className="h-auto w-full min-w-[640px]" data-testid="comparison-chart" style={{ fontFamily: "inherit" }}>
-        <title id="cmp-chart-title">
-          Spare inputs and supervision coverage per layout: {m.rows.map((r) => `${r.name}: ${r.spare.label} spare, coverage ${r.coverage.label}`).join("; ")}
-        </title>
+        {/* one string: React renders a <title> with several children as empty on the server, and hydration then fails */}
+        <title id="cmp-chart-title">{`Spare inputs and supervision coverage per layout: ${m.rows.map((r) => `${r.name}: ${r.spare.label} spare, coverage ${r.coverage.label}`).join("; ")}`}</title>
         {m.panels.map((p, k) => (
           <g key={p.title}>
             <text x={p.x} y={16} fontSize={13} fontWeight={600} fill="#17202a">
@@ -42,7 +41,7 @@ export function ComparisonChart({ columns }: { columns: readonly ChartInput[] })
           <text key={i} x={0} y={r.y + (r.nameLines.length > 1 ? 6 : 13)} fontSize={13} fontWeight={600} fill="#17202a">
             {r.nameLines.map((l, k) => (
               <tspan key={k} x={0} dy={k === 0 ? 0 : 15}>
-                {l}
+                {k < r.nameLines.length - 1 ? `${l} ` : l}
               </tspan>
             ))}
           </text>

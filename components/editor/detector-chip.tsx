@@ -27,8 +27,10 @@ export function ChipFace({ detectorId }: { detectorId: string }) {
         <span className="line-clamp-2 break-words">{d?.label ?? `Unknown detector ${detectorId}`}</span>
         {c && isLifeSafety(c) ? <span className="mt-px shrink-0 rounded bg-fault px-1 text-[10px] font-semibold text-white">FIRE</span> : null}
       </span>
-      <span className="truncate text-[11px] text-slate-500">
-        {c?.name ?? d?.catalogId} · {d ? `${d.cableM} m` : ""}
+      {/* the cable length never gives way to a long type name: the name is cut, the length stays */}
+      <span className="flex min-w-0 gap-1 text-[11px] text-slate-500" title={`${c?.name ?? d?.catalogId ?? ""}${d ? ` · ${d.cableM} m` : ""}`}>
+        <span className="truncate">{c?.name ?? d?.catalogId}</span>
+        {d ? <span className="shrink-0 tabular-nums" data-testid={`cable-${detectorId}`}>· {d.cableM} m</span> : null}
       </span>
       {v ? (
         <span className={`text-[11px] ${v.ok ? "text-slate-500" : "font-semibold text-fault"}`} data-testid={`volts-${detectorId}`}>

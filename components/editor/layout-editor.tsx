@@ -59,7 +59,7 @@ export function LayoutEditor(props: LayoutEditorProps) {
     <EditorContext.Provider value={state}>
       {/* wider than the page frame: the editor wants the whole screen */}
       <div className="mx-[calc((100%-min(100vw-2rem,110rem))/2)]">
-        <EditorHeader site={site} meta={meta} version={autosave.version} saveState={autosave.state} readOnly={!canWrite} onHistory={history.openHistory} />
+        <EditorHeader meta={meta} version={autosave.version} saveState={autosave.state} readOnly={!canWrite} onHistory={history.openHistory} />
         <EditorNotices siteId={site.id} readOnlyReason={canWrite ? null : readOnlyReason} fire={fire} notice={notice} message={message} />
         <EditorWorkspace dnd={dnd} />
         {history.open ? <RevisionDrawer layoutId={meta.id} currentRevision={meta.currentRevision} canWrite={canWrite} busy={busy || autosave.state.kind !== "saved"} onRestore={history.restore} onClose={history.close} /> : null}

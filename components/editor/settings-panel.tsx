@@ -12,14 +12,15 @@ export function SettingsPanel() {
   const { doc, ctx, ix, canWrite, apply } = useEditor();
   const panel = ix.panels.get(doc.panelId);
   const family = panel?.family;
-  const choices: { kind: BoardKind; id: string; name: string; detail: string }[] = family
+  const choices: { kind: BoardKind; id: string; name: string; detail: string; onBus: boolean }[] = family
     ? [
-        ...ctx.catalog.expansionBoards.filter((b) => b.families.includes(family)).map((b) => ({ kind: "expansion" as const, id: b.id, name: b.name, detail: `${b.inputs.count} inputs` })),
-        ...ctx.catalog.keypads.filter((b) => b.families.includes(family)).map((b) => ({ kind: "keypad" as const, id: b.id, name: b.name, detail: b.inputs ? `keypad, ${b.inputs.count} inputs` : "keypad" })),
-        ...ctx.catalog.powerSupplies.filter((b) => b.families.includes(family)).map((b) => ({ kind: "supply" as const, id: b.id, name: b.name, detail: `${b.outputMa} mA supply` })),
+        ...ctx.catalog.expansionBoards.filter((b) => b.families.includes(family)).map((b) => ({ kind: "expansion" as const, id: b.id, name: b.name, detail: `${b.inputs.count} inputs`, onBus: b.takesBusAddress })),
+        ...ctx.catalog.keypads.filter((b) => b.families.includes(family)).map((b) => ({ kind: "keypad" as const, id: b.id, name: b.name, detail: b.inputs ? `keypad, ${b.inputs.count} inputs` : "keypad", onBus: b.takesBusAddress })),
+        ...ctx.catalog.powerSupplies.filter((b) => b.families.includes(family)).map((b) => ({ kind: "supply" as const, id: b.id, name: b.name, detail: `${b.outputMa} mA supply`, onBus: b.takesBusAddress })),
       ]
     : [];
   const [choice, setChoice] = useState(choices[0] ? `${choices[0].kind}:${choices[0].id}` : "");
+  const [busRun, setBusRun] = useState("");
   const setPower = (patch: Partial<LayoutPower>) => {
     const power = { ...doc.power, ...patch };
     apply({ ok: true, layout: { ...doc, power }, message: `Power settings: ${standbyProfile(power.standbyProfileId)?.label ?? power.standbyProfileId}, safety factor ${power.safetyFactor.toFixed(2)}` });
@@ -54,10 +55,27 @@ export function SettingsPanel() {
                 </option>
               ))}
             </select>
-            <button type="button" className="rounded bg-signal px-2 py-1 font-medium text-white" onClick={() => selectedChoice && apply(addBoard(doc, ctx, selectedChoice.kind, selectedChoice.id))}>
+            <button
+              type="button"
+              className="rounded bg-signal px-2 py-1 font-medium text-white"
+              onClick={() => {
+                if (!selectedChoice) return;
+                // a bus device asks for its run of bus cable; addBoard refuses a blank or 0 m with a plain message
+                const edit = addBoard(doc, ctx, selectedChoice.kind, selectedChoice.id, undefined, selectedChoice.onBus ? Number(busRun || "0") : undefined);
+                apply(edit);
+                if (edit.ok) setBusRun("");
+              }}
+            >
               Add board
             </button>
           </div>
+          {selectedChoice?.onBus ? (
+            <label className="mt-1 block">
+              Data bus cable to it (m)
+              <input type="number" min={0} step="any" inputMode="decimal" required className="mt-1 block w-full rounded border border-line px-2 py-1" value={busRun} onChange={(e) => setBusRun(e.target.value)} data-testid="add-board-bus-run" />
+              <span className="text-slate-600">Added to the data bus total ({doc.busCableM} m now).</span>
+            </label>
+          ) : null}
         </div>
       ) : null}
       <label className="mt-3 block">

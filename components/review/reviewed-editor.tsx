@@ -4,7 +4,6 @@ import Link from "next/link";
 import { useState } from "react";
 import type { EffectiveReview } from "@/lib/review/effective-state";
 import { LayoutEditor, type LayoutEditorProps } from "@/components/editor/layout-editor";
-import { LayoutTabs } from "@/components/review/layout-tabs";
 import { ScheduleDriftNotice } from "@/components/review/schedule-drift-notice";
 import type { ApprovedDrift } from "@/lib/server/schedule-drift";
 
@@ -28,7 +27,6 @@ export function ReviewedEditor({ review, editor, drift = null }: { review: Effec
   const base = `/sites/${editor.site.id}/layouts/${editor.layout.id}`;
   return (
     <>
-      <LayoutTabs compact siteId={editor.site.id} layoutId={editor.layout.id} review={review} current="editor" />
       {frozen && editor.canWrite ? (
         <div className="no-print mb-3 flex flex-wrap items-center justify-between gap-3 rounded-md border border-signal bg-signal-soft p-3 text-sm" data-testid="frozen-note">
           {newDraft ? (

@@ -3,13 +3,14 @@
 import { useState } from "react";
 import type { ImportPreview } from "@/lib/server/schedules";
 import { scheduleCsvColumns } from "@/lib/schedule/csv";
-import { formatGauge } from "@/lib/schedule/schema";
+import { formatGauge, TEXT_LIMITS } from "@/lib/schedule/schema";
 import type { SiteDetail } from "@/lib/server/sites";
 import { importRequestSchema } from "@/lib/schedule/schedule-request-schema";
 import { describeError, fetcher, sendJson } from "@/lib/client/fetcher";
 import { useSiteAreas } from "@/components/schedule/site-areas-context";
 import { UnknownPlaces } from "@/components/schedule/unknown-places";
 import { Button } from "@/components/ui/button";
+import { LongText } from "@/components/ui/long-text";
 import { siteAreasOf, supervisionLabels, type DetectorType } from "@/components/schedule/schedule-labels";
 
 /** Upload a CSV file, see every row and every problem with its row number, and only then store it. */
@@ -63,7 +64,7 @@ export function CsvImport({ siteId, types, onImported }: { siteId: number; types
     <div data-testid="csv-import">
       <p className="text-sm text-slate-600">
         Columns: <code className="text-xs">{scheduleCsvColumns.join(", ")}</code>. <code className="text-xs">type</code> is a detector id from the catalog; gauge as &quot;22 AWG&quot; or &quot;0.5 mm2&quot;; a blank
-        supervision means single end-of-line. Imported rows are added after the existing ones; nothing is stored until you confirm.
+        supervision means single end-of-line. A label is at most {TEXT_LIMITS.label} characters, an area or a room at most {TEXT_LIMITS.area}; a longer one is refused with its row, never cut. Imported rows are added after the existing ones; nothing is stored until you confirm.
       </p>
       <label className="mt-3 block text-sm">
         <span className="font-medium">CSV file</span>
@@ -88,7 +89,7 @@ export function CsvImport({ siteId, types, onImported }: { siteId: number; types
             )}
           </p>
           {preview.errors.length ? (
-            <ul className="mt-2 max-h-48 overflow-y-auto rounded border border-fault bg-fault-soft p-2 text-xs" data-testid="import-errors">
+            <ul className="mt-2 max-h-48 overflow-y-auto rounded border border-fault bg-fault-soft p-2 text-xs [overflow-wrap:anywhere]" data-testid="import-errors">
               {[...errorsByRow.entries()].map(([row, msgs]) => (
                 <li key={row}>
                   <span className="font-semibold">Row {row}</span>
@@ -116,10 +117,16 @@ export function CsvImport({ siteId, types, onImported }: { siteId: number; types
                 {preview.rows.map((r) => (
                   <tr key={r.row} className="border-t border-line">
                     <td className="py-1 pr-2 font-mono">{r.row}</td>
-                    <td className="pr-2">{r.detector.label}</td>
+                    <td className="max-w-[14rem] pr-2">
+                      <LongText text={r.detector.label} />
+                    </td>
                     <td className="pr-2">{typeName.get(r.detector.catalogId) ?? r.detector.catalogId}</td>
-                    <td className="pr-2">{r.detector.area}</td>
-                    <td className="pr-2">{r.detector.room}</td>
+                    <td className="max-w-[10rem] pr-2">
+                      <LongText text={r.detector.area} />
+                    </td>
+                    <td className="max-w-[10rem] pr-2">
+                      <LongText text={r.detector.room} />
+                    </td>
                     <td className="pr-2 text-right">{r.detector.cableM} m</td>
                     <td className="pr-2">{formatGauge(r.detector.gauge)}</td>
                     <td>{supervisionLabels[r.detector.supervision]}</td>

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { createDetectorFormSchema, formatGauge, parseGauge, supervisionPreferenceSchema, type ScheduleDetector } from "@/lib/schedule/schema";
+import { createDetectorFormSchema, formatGauge, parseGauge, supervisionPreferenceSchema, TEXT_LIMITS, type ScheduleDetector } from "@/lib/schedule/schema";
 import { Button } from "@/components/ui/button";
 import { supervisionLabels, type DetectorType, type SiteArea } from "@/components/schedule/schedule-labels";
 import { PlacePicker } from "@/components/schedule/place-picker";
@@ -54,15 +54,21 @@ export function DetectorForm({ types, areas, initial, submitLabel, onSubmit, onC
   const field = "mt-1 block w-full rounded-md border bg-white px-2 py-1.5 text-sm";
   const err = (k: string) =>
     errors[k] ? (
-      <span className="mt-0.5 block text-xs text-fault" id={`${formId}-${k}-error`}>
+      <span className="mt-0.5 block text-xs text-fault [overflow-wrap:anywhere]" id={`${formId}-${k}-error`} role="alert">
         {errors[k]}
       </span>
     ) : null;
+  const limit = (k: keyof typeof TEXT_LIMITS) => (
+    <span className="mt-0.5 block text-xs text-slate-600" id={`${formId}-${k}-limit`}>
+      up to {TEXT_LIMITS[k]} characters
+    </span>
+  );
   return (
     <form onSubmit={submit} className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4" aria-label={submitLabel} noValidate>
       <label className="text-sm sm:col-span-2">
         <span className="font-medium">Label</span>
-        <input name="label" defaultValue={start.label} className={`${field} ${errors.label ? "border-fault" : "border-line"}`} aria-invalid={!!errors.label} maxLength={200} />
+        <input name="label" defaultValue={start.label} className={`${field} ${errors.label ? "border-fault" : "border-line"}`} aria-invalid={!!errors.label} aria-describedby={`${formId}-label-limit`} />
+        {limit("label")}
         {err("label")}
       </label>
       <label className="text-sm sm:col-span-2">

@@ -2,6 +2,7 @@
 
 import { formatGauge, type ScheduleDetector } from "@/lib/schedule/schema";
 import { DetectorForm } from "@/components/schedule/detector-form";
+import { LongText } from "@/components/ui/long-text";
 import { nextSort, SCHEDULE_COLUMNS, type ScheduleSort } from "@/components/schedule/schedule-rows";
 import { supervisionLabels, type DetectorType, type SiteArea } from "@/components/schedule/schedule-labels";
 
@@ -87,13 +88,19 @@ export function ScheduleTable(props: ScheduleTableProps) {
                     <input type="checkbox" aria-label={`Select ${d.label}`} checked={selected.has(d.id)} onChange={() => toggle(d.id)} />
                   </td>
                 ) : null}
-                <td className="px-2 py-1.5 font-medium">{d.label}</td>
+                <td className="max-w-[16rem] px-2 py-1.5 font-medium">
+                  <LongText text={d.label} />
+                </td>
                 <td className="px-2 py-1.5">
                   {typeName.get(d.catalogId) ?? <span className="text-fault">{d.catalogId} (not in the catalog)</span>}
                   {fire.has(d.catalogId) ? <span className="ml-1 rounded bg-fault px-1 text-[10px] font-semibold text-white">FIRE</span> : null}
                 </td>
-                <td className="px-2 py-1.5">{d.area}</td>
-                <td className="px-2 py-1.5">{d.room}</td>
+                <td className="max-w-[12rem] px-2 py-1.5">
+                  <LongText text={d.area} />
+                </td>
+                <td className="max-w-[12rem] px-2 py-1.5">
+                  <LongText text={d.room} />
+                </td>
                 <td className="px-2 py-1.5 text-right tabular-nums">{d.cableM} m</td>
                 <td className="px-2 py-1.5">{formatGauge(d.gauge)}</td>
                 <td className="px-2 py-1.5">{supervisionLabels[d.supervision]}</td>

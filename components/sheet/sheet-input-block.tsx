@@ -4,9 +4,8 @@ import { LoopSchematic } from "@/components/loop-schematic/loop-schematic";
 import { ResistorBands } from "@/components/sheet/resistor-bands";
 import { sheetLoopSpec } from "@/components/sheet/loop-spec";
 import { TEST_WORDS } from "@/components/sheet/test-words";
+import { CARRIES_WORDS, FITTED_WORDS } from "@/components/sheet/sheet-words";
 
-const FITTED_WORDS = { "at-detector": "at the detector", "at-panel-terminals": "at the panel terminals", "loop-back": "at the panel, on the loop-back cores" } as const;
-const CARRIES_WORDS = { loop: "loop", "loop-back": "loop-back", power: "power" } as const;
 
 const th = "border border-line bg-slate-50 px-1.5 py-1 text-left font-semibold";
 const td = "border border-line px-1.5 py-1 align-top";
@@ -16,7 +15,7 @@ export function SheetInputBlock({ row }: { row: SheetInput }) {
   const lifeSafety = row.detectors.some((d) => d.lifeSafety);
   const zones = row.zones.length === 1 ? `zone ${row.zones[0]}` : `zones ${row.zones.join(", ")}`;
   return (
-    <section className="sheet-input mb-5 rounded-md border border-line bg-white p-3" data-testid={`sheet-input-${row.boardKey}-${row.input}`} aria-label={`Input ${row.input}`}>
+    <section className="sheet-input mb-5 rounded-md border border-line bg-white p-3 print:hidden" data-testid={`sheet-input-${row.boardKey}-${row.input}`} aria-label={`Input ${row.input}`}>
       <header className="flex flex-wrap items-baseline justify-between gap-2 border-b border-line pb-1">
         <h3 className="text-base font-semibold">
           Input {row.input} · terminals {row.terminals} · {zones}
@@ -33,7 +32,7 @@ export function SheetInputBlock({ row }: { row: SheetInput }) {
       ) : null}
       <div className="mt-2 flex flex-col gap-3">
         <div className="min-w-0 space-y-2 text-xs">
-          <table className="w-full border-collapse">
+          <table className="stack-narrow w-full border-collapse">
             <thead>
               <tr>
                 <th className={th}>Zone</th>
@@ -47,20 +46,20 @@ export function SheetInputBlock({ row }: { row: SheetInput }) {
             <tbody>
               {row.detectors.map((d) => (
                 <tr key={d.id}>
-                  <td className={`${td} font-semibold tabular-nums`}>{d.zone}</td>
-                  <td className={`${td} font-medium`}>{d.label}</td>
-                  <td className={td}>
+                  <td data-label="Zone" className={`${td} font-semibold tabular-nums`}>{d.zone}</td>
+                  <td data-label="Detector" className={`${td} font-medium`}>{d.label}</td>
+                  <td data-label="Area / room" className={td}>
                     {d.area} / {d.room}
                   </td>
-                  <td className={td}>
+                  <td data-label="Device type" className={td}>
                     {d.deviceType}
                     {d.powered ? <span className="block text-slate-600">powered from {d.poweredFrom ?? "a supply"}</span> : null}
                   </td>
-                  <td className={td}>
+                  <td data-label="Contact" className={td}>
                     {d.contact === "NC" ? "normally closed (NC)" : "normally open (NO)"}
                     {d.tamper ? ", tamper contact" : ""}
                   </td>
-                  <td className={`${td} tabular-nums`}>
+                  <td data-label="Cable" className={`${td} tabular-nums`}>
                     {d.gaugeText}, {d.cableM} m
                   </td>
                 </tr>
@@ -69,7 +68,7 @@ export function SheetInputBlock({ row }: { row: SheetInput }) {
           </table>
 
           {row.resistors.length ? (
-            <table className="w-full border-collapse">
+            <table className="stack-narrow w-full border-collapse">
               <thead>
                 <tr>
                   <th className={th}>Resistor</th>
@@ -81,14 +80,14 @@ export function SheetInputBlock({ row }: { row: SheetInput }) {
               <tbody>
                 {row.resistors.map((r) => (
                   <tr key={r.role} data-testid="sheet-resistor">
-                    <td className={td}>{r.name}</td>
-                    <td className={`${td} whitespace-nowrap tabular-nums`}>
+                    <td data-label="Resistor" className={td}>{r.name}</td>
+                    <td data-label="Value" className={`${td} tabular-nums sm:whitespace-nowrap`}>
                       <strong className="text-sm">{r.valueText}</strong> ±{r.tolerancePct} %{r.series ? <span className="block text-slate-600">{r.series} value</span> : <span className="block text-warn">not an E12/E24 value</span>}
                     </td>
-                    <td className={td}>
+                    <td data-label="Colour bands" className={td}>
                       <ResistorBands r={r} />
                     </td>
-                    <td className={td}>
+                    <td data-label="Where fitted" className={td}>
                       <strong>{FITTED_WORDS[r.fittedAt]}</strong>: {r.where}
                     </td>
                   </tr>
@@ -99,7 +98,7 @@ export function SheetInputBlock({ row }: { row: SheetInput }) {
             <p>No resistor on this loop: the panel sees the contacts only, so a short or a cut is not told apart from normal.</p>
           )}
 
-          <table className="w-full border-collapse">
+          <table className="stack-narrow w-full border-collapse">
             <thead>
               <tr>
                 <th className={th}>Core</th>
@@ -111,10 +110,10 @@ export function SheetInputBlock({ row }: { row: SheetInput }) {
             <tbody>
               {row.cores.map((c) => (
                 <tr key={c.core}>
-                  <td className={`${td} tabular-nums`}>{c.core}</td>
-                  <td className={td}>{CARRIES_WORDS[c.carries]}</td>
-                  <td className={td}>{c.panelEnd}</td>
-                  <td className={td}>{c.farEnd}</td>
+                  <td data-label="Core" className={`${td} tabular-nums`}>{c.core}</td>
+                  <td data-label="Carries" className={td}>{CARRIES_WORDS[c.carries]}</td>
+                  <td data-label="Panel end" className={td}>{c.panelEnd}</td>
+                  <td data-label="Far end" className={td}>{c.farEnd}</td>
                 </tr>
               ))}
             </tbody>
@@ -131,7 +130,7 @@ export function SheetInputBlock({ row }: { row: SheetInput }) {
       </div>
 
       {row.expected.length ? (
-        <table className="mt-2 w-full border-collapse text-xs" data-testid="sheet-tests">
+        <table className="stack-narrow mt-2 w-full border-collapse text-xs" data-testid="sheet-tests">
           <thead>
             <tr>
               <th className={th}>Test</th>
@@ -145,18 +144,18 @@ export function SheetInputBlock({ row }: { row: SheetInput }) {
           <tbody>
             {row.expected.map((e) => (
               <tr key={e.test}>
-                <td className={`${td} font-medium`}>{TEST_WORDS[e.test]}</td>
-                <td className={td}>{e.instruction}</td>
-                <td className={`${td} whitespace-nowrap font-semibold tabular-nums`} data-testid="expected-range">
+                <td data-label="Test" className={`${td} font-medium`}>{TEST_WORDS[e.test]}</td>
+                <td data-label="What to do" className={td}>{e.instruction}</td>
+                <td data-label="Meter reading expected" className={`${td} font-semibold tabular-nums sm:whitespace-nowrap`} data-testid="expected-range">
                   {e.rangeText}
                   {e.uncertain ? <span className="block font-normal text-warn">straddles a band edge</span> : null}
                 </td>
-                <td className={td}>
+                <td data-label="Panel reports" className={td}>
                   {e.reports.map((r) => REPORT_WORDS[r]).join(" or ")}
                   {e.reports.length === 1 && e.reports[0] !== e.expectedReport ? <span className="block text-fault">should be {REPORT_WORDS[e.expectedReport]}</span> : null}
                 </td>
-                <td className={`${td} h-7`} />
-                <td className={td} />
+                <td data-label="Measured" className={`${td} sheet-write h-7`} />
+                <td data-label="Pass / fail" className={`${td} sheet-write`} />
               </tr>
             ))}
           </tbody>

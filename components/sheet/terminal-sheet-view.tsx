@@ -3,10 +3,13 @@
 import { useState } from "react";
 import type { SheetView } from "@/lib/server/sheets";
 import type { SheetInput, SpareInput } from "@/lib/sheet/sheet-types";
-import { PAPER_WORDS, sendSheetSchema, type PaperSize } from "@/lib/sheet/sheet-request-schema";
-import { Button } from "@/components/ui/button";
-import { describeError, FetchError, sendJson } from "@/lib/client/fetcher";
+import { boardSummary, spareGroups } from "@/components/sheet/sheet-words";
+import type { PaperSize } from "@/lib/sheet/sheet-request-schema";
 import { SheetInputBlock } from "@/components/sheet/sheet-input-block";
+import { SheetBoardIndex, boardAnchor } from "@/components/sheet/sheet-board-index";
+import { SheetBoardPrint } from "@/components/sheet/sheet-board-print";
+import { SheetPrintStyle } from "@/components/sheet/sheet-print-style";
+import { SheetToolbar } from "@/components/sheet/sheet-toolbar";
 
 export interface TerminalSheetViewProps {
   view: SheetView;
@@ -14,104 +17,23 @@ export interface TerminalSheetViewProps {
   installer: { name: string; email: string } | null;
   canSend: boolean;
   sendRefusal: string;
+  /** The paper the organisation uses, when it has said; A4 otherwise. */
+  defaultPaper?: PaperSize;
 }
 
-const PAGE_CSS: Record<PaperSize, string> = { A4: "A4 portrait", LETTER: "letter portrait" };
-
-export function TerminalSheetView({ view, installer, canSend, sendRefusal }: TerminalSheetViewProps) {
-  const [size, setSize] = useState<PaperSize>("A4");
-  const [sending, setSending] = useState(false);
-  const [sent, setSent] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
-  // An unapproved sheet is sent only after the sender says so: the e-mail and every PDF page are marked.
-  const [confirming, setConfirming] = useState(false);
+/** The terminal sheet on screen (cards, stacked on a phone), with a board index, and on paper (a compact table per board). */
+export function TerminalSheetView({ view, installer, canSend, sendRefusal, defaultPaper = "A4" }: TerminalSheetViewProps) {
+  const [size, setSize] = useState<PaperSize>(defaultPaper);
   const { sheet, meta } = view;
-  const rev = `revision=${meta.revision}`;
-  const pdf = (s: PaperSize) => `/api/layouts/${view.layoutId}/sheet/pdf?size=${s}&${rev}`;
-
-  async function send(confirmUnapproved = false) {
-    if (!view.approved && !confirmUnapproved) {
-      setConfirming(true);
-      return;
-    }
-    setConfirming(false);
-    setSending(true);
-    setSent(null);
-    try {
-      const body = sendSheetSchema.parse({ size, ...(view.approved ? {} : { confirmUnapproved: true }) });
-      const r = await sendJson<{ sent: { to: string; installer: string; fileName: string; sizeBytes: number } }>(`/api/layouts/${view.layoutId}/sheet/send`, "POST", body);
-      setSent({ kind: "ok", text: `Sent to ${r.sent.installer} <${r.sent.to}> with ${r.sent.fileName} (${Math.max(1, Math.round(r.sent.sizeBytes / 1024))} KiB, ${PAPER_WORDS[size]}).` });
-    } catch (e) {
-      setSent({ kind: "error", text: e instanceof FetchError && e.unreachable ? "The server could not be reached; nothing was sent." : describeError(e) });
-    } finally {
-      setSending(false);
-    }
-  }
+  const footer = `Terminal sheet · ${meta.siteName} · “${meta.layoutName}” revision ${meta.revision}${view.approved ? "" : " · NOT APPROVED, for review only"}`;
 
   return (
-    <div className="terminal-sheet" data-testid="terminal-sheet" data-paper={size}>
-      <style>{`
-        @media print {
-          @page { size: ${PAGE_CSS[size]}; margin: 12mm; }
-          .terminal-sheet { font-size: 10px; }
-          .sheet-board + .sheet-board { break-before: page; }
-          .sheet-input { break-inside: avoid; }
-          main { max-width: none !important; padding: 0 !important; }
-        }
-        .terminal-sheet { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
-      `}</style>
+    <div className="terminal-sheet min-w-0" data-testid="terminal-sheet" data-paper={size}>
+      <SheetPrintStyle size={size} footer={footer} />
+      <SheetToolbar approved={view.approved} layoutId={view.layoutId} siteId={view.siteId} revision={meta.revision} size={size} onSize={setSize} installer={installer} canSend={canSend} sendRefusal={sendRefusal} />
 
-      <div className="no-print mb-4 flex flex-wrap items-end gap-3 rounded-lg border border-line bg-white p-3 text-sm" data-testid="sheet-toolbar">
-        <fieldset className="flex items-center gap-2">
-          <legend className="sr-only">Paper</legend>
-          <span className="font-medium">Paper</span>
-          {(["A4", "LETTER"] as const).map((s) => (
-            <label key={s} className={`cursor-pointer rounded-md border px-2 py-1 ${size === s ? "border-signal bg-signal-soft font-semibold" : "border-line"}`}>
-              <input type="radio" name="paper" className="sr-only" checked={size === s} onChange={() => setSize(s)} />
-              {PAPER_WORDS[s]}
-            </label>
-          ))}
-        </fieldset>
-        <Button variant="secondary" onClick={() => window.print()}>
-          Print
-        </Button>
-        <a className="rounded-md bg-signal px-3 py-2 font-medium text-white hover:bg-[#0c5a5a]" href={pdf(size)} data-testid="download-pdf">
-          Download PDF ({size === "A4" ? "A4" : "Letter"})
-        </a>
-        <a className="text-signal underline" href={`/api/sites/${view.siteId}/exports/zones.csv?layoutId=${view.layoutId}&${rev}`} data-testid="zones-csv">
-          Zone list (CSV)
-        </a>
-        <a className="text-signal underline" href={`/api/sites/${view.siteId}/exports/bom.csv?layoutId=${view.layoutId}&${rev}`} data-testid="bom-csv">
-          Bill of materials (CSV)
-        </a>
-        <div className="ml-auto flex flex-col items-end gap-1">
-          <Button onClick={() => void send()} disabled={!canSend || !installer || sending} data-testid="send-sheet" title={!canSend ? sendRefusal : !installer ? "Assign an installer to the site first." : undefined}>
-            {sending ? "Sending…" : `E-mail to the site's installer${installer ? ` (${installer.name})` : ""}`}
-          </Button>
-          {!canSend ? <span className="max-w-sm text-right text-xs text-slate-600">{sendRefusal}</span> : !installer ? <span className="text-xs text-slate-600">The site has no installer assigned.</span> : null}
-        </div>
-        {confirming ? (
-          <div role="alertdialog" aria-label="Send an unapproved sheet?" data-testid="send-confirm" className="basis-full rounded-md border-2 border-fault bg-fault-soft p-3 text-sm">
-            <p className="font-semibold text-fault">Revision {meta.revision} is not approved.</p>
-            <p>The e-mail will say it is not approved and every page of the PDF carries “NOT APPROVED — FOR REVIEW ONLY”: the installer must not wire to it. Send it for review anyway?</p>
-            <div className="mt-2 flex gap-2">
-              <Button onClick={() => void send(true)} data-testid="send-confirm-yes">
-                Send it, marked not approved
-              </Button>
-              <Button variant="secondary" onClick={() => setConfirming(false)}>
-                Cancel
-              </Button>
-            </div>
-          </div>
-        ) : null}
-        {sent ? (
-          <p aria-live="polite" data-testid="send-message" className={`basis-full text-sm ${sent.kind === "error" ? "font-medium text-fault" : "text-signal"}`}>
-            {sent.text}
-          </p>
-        ) : null}
-      </div>
-
-      <header className="mb-3">
-        <h2 className="text-xl font-semibold">Terminal sheet — {meta.siteName}</h2>
+      <header className="sheet-head mb-3">
+        <h2 className="break-words text-xl font-semibold">Terminal sheet — {meta.siteName}</h2>
         <p className="text-sm">
           Layout “{meta.layoutName}”, revision {meta.revision} · {sheet.panel ? sheet.panel.name : "no control panel"} · {sheet.zoneCount} zones on {sheet.boards.length} board{sheet.boards.length === 1 ? "" : "s"} · generated {meta.generatedAt}
         </p>
@@ -146,40 +68,40 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal }: Ter
         ) : null}
       </header>
 
+      <SheetBoardIndex boards={sheet.boards} />
+
       {sheet.boards.map((b) => {
         const used = b.rows.filter((r): r is SheetInput => !r.spare);
         const spare = b.rows.filter((r): r is SpareInput => r.spare);
         return (
-          <section key={b.boardKey} className="sheet-board mb-8" data-testid={`sheet-board-${b.boardKey}`}>
-            <div className="mb-2 border-b-2 border-ink pb-1">
-              <h2 className="text-lg font-semibold">
+          <section key={b.boardKey} id={boardAnchor(b.boardKey)} className="sheet-board mb-8 scroll-mt-4" data-testid={`sheet-board-${b.boardKey}`}>
+            <div className="mb-2 border-b-2 border-ink pb-1 print:hidden">
+              <h2 className="break-words text-lg font-semibold">
                 {b.name} — {b.deviceName}
               </h2>
-              <p className="text-xs text-slate-700">
-                {b.inputType ? `${b.inputType.name}, parts ±${b.inputType.tolerancePct} %` : "input type unknown"}
-                {b.busAddress !== null ? ` · data bus address ${b.busAddress}` : ""} · {used.length} of {b.rows.length} inputs used
-                <span className="hidden print:inline"> · {meta.siteName}, “{meta.layoutName}” revision {meta.revision}{view.approved ? "" : " — NOT APPROVED, for review only"}</span>
-              </p>
+              <p className="text-xs text-slate-700">{boardSummary(b)}</p>
             </div>
             {used.map((r) => (
               <SheetInputBlock key={r.input} row={r} />
             ))}
+            <SheetBoardPrint board={b} />
             {spare.length ? (
-              <div className="sheet-input mb-4 text-xs">
-                <h3 className="text-sm font-semibold">Spare inputs</h3>
-                <ul className="mt-1 space-y-0.5">
-                  {spare.map((s) => (
-                    <li key={s.input}>
-                      <strong>Input {s.input}</strong> ({s.terminals}): {s.note}
+              <div className="sheet-print-input mb-4 mt-2 text-xs print:mb-1">
+                <h3 className="text-sm font-semibold print:inline print:text-xs">Spare inputs</h3>
+                <ul className="mt-1 space-y-0.5 print:inline print:space-y-0">
+                  {spareGroups(spare).map((g) => (
+                    <li key={g.inputs} className="print:inline">
+                      {" "}
+                      <strong>{g.inputs}</strong>: {g.note}
                     </li>
                   ))}
                 </ul>
               </div>
             ) : null}
-            <div className="sheet-input mt-4 grid gap-3 rounded-md border border-ink p-3 text-sm sm:grid-cols-3" data-testid="sign-off">
+            <div className="sheet-print-input mt-4 grid gap-3 rounded-md border border-ink p-3 text-sm sm:grid-cols-3 print:mt-2 print:grid-cols-3 print:gap-1 print:p-2" data-testid="sign-off">
               <p className="font-semibold sm:col-span-3">Sign-off: {b.name}</p>
               {b.signOff.map((line, i) => (
-                <p key={i} className="whitespace-pre">
+                <p key={i} className="whitespace-pre-wrap break-words">
                   {line}
                 </p>
               ))}

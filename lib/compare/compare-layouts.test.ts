@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { shippedCatalog } from "@/lib/catalog/shipped";
 import type { LayoutDocument } from "@/lib/layout/schema";
-import { compareLayouts } from "@/lib/compare/compare-layouts";
+import fc from "fast-check";
+import { bestOf, compareLayouts, notRankedReason } from "@/lib/compare/compare-layouts";
 import { largeLayout, largeSchedule } from "@/lib/sheet/testing/sample-layouts";
 
 const { catalog } = shippedCatalog();
@@ -72,5 +73,60 @@ describe("comparing layouts", () => {
     expect(panel.batteryAh).toBe(7);
     expect(a.findings.error).toBe(0);
     expect(Object.keys(a.findings)).toEqual(["error", "warning", "note"]);
+  });
+});
+
+describe("a layout with detectors not placed or with errors is never best", () => {
+  it("is left out of every measure and says why", () => {
+    // D: A with the door taken off its input (one detector unplaced): it would win on spare inputs otherwise
+    const unplacedDoc: LayoutDocument = { ...largeLayout, inputs: largeLayout.inputs.slice(1) };
+    const r = compareLayouts(
+      [
+        { id: 1, name: "A shared", layout: largeLayout },
+        { id: 4, name: "D door missing", layout: unplacedDoc },
+      ],
+      largeSchedule,
+      catalog,
+    );
+    const [ranked, missing] = r.columns;
+    expect(missing.unplaced).toBeGreaterThan(0);
+    expect(missing.inputs.spare).toBeGreaterThan(ranked.inputs.spare);
+    expect(missing.notRanked).toMatch(/^not ranked: \d+ detectors? (is|are) not placed/);
+    expect(ranked.notRanked).toBeNull();
+    for (const list of Object.values(r.best)) expect(list).not.toContain(1);
+    expect(r.best.spare).toEqual([0]);
+    expect(r.summary.some((s) => s.startsWith("D door missing is not ranked:"))).toBe(true);
+  });
+
+  it("holds for any set of columns (bestOf)", () => {
+    const column = fc.record({
+      cost: fc.integer({ min: 0, max: 5000 }),
+      coverage: fc.record({ used: fc.constant(1), covered: fc.constant(1), share: fc.option(fc.double({ min: 0, max: 1, noNaN: true }), { nil: null }) }),
+      findings: fc.record({ error: fc.integer({ min: 0, max: 3 }), warning: fc.constant(0), note: fc.constant(0) }),
+      inputs: fc.record({ used: fc.constant(1), total: fc.constant(8), spare: fc.integer({ min: 0, max: 8 }) }),
+      unplaced: fc.integer({ min: 0, max: 3 }),
+    });
+    fc.assert(
+      fc.property(fc.array(column, { minLength: 1, maxLength: 6 }), (cols) => {
+        const withReason = cols.map((c) => ({ ...c, notRanked: notRankedReason(c) }));
+        const best = bestOf(withReason);
+        for (const list of Object.values(best))
+          for (const i of list) {
+            expect(withReason[i].unplaced).toBe(0);
+            expect(withReason[i].findings.error).toBe(0);
+          }
+        // a complete layout is still ranked: the lowest cost among complete layouts is best on cost
+        const complete = withReason.filter((c) => c.notRanked === null);
+        if (complete.length) expect(best.cost.map((i) => withReason[i].cost)[0]).toBe(Math.min(...complete.map((c) => c.cost)));
+        else expect(best.cost).toEqual([]);
+      }),
+    );
+  });
+
+  it("words the reason in the singular and plural", () => {
+    expect(notRankedReason({ unplaced: 1, findings: { error: 0 } })).toBe("not ranked: 1 detector is not placed");
+    expect(notRankedReason({ unplaced: 8, findings: { error: 2 } })).toBe("not ranked: 8 detectors are not placed and 2 errors");
+    expect(notRankedReason({ unplaced: 0, findings: { error: 1 } })).toBe("not ranked: 1 error");
+    expect(notRankedReason({ unplaced: 0, findings: { error: 0 } })).toBeNull();
   });
 });

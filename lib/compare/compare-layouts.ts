@@ -57,6 +57,8 @@ export interface ComparisonColumn {
   findingList: { severity: Severity; message: string }[];
   shared: SharedTradeoff[];
   bom: BillOfMaterials;
+  /** Why the layout is left out of "best" on every measure (detectors not placed, errors); null when it is ranked. */
+  notRanked: string | null;
 }
 
 export interface LayoutComparison {
@@ -67,6 +69,25 @@ export interface LayoutComparison {
   summary: string[];
   /** The schedule holds smoke, heat or other life-safety devices: the comparison carries the fire caution. */
   lifeSafety: boolean;
+}
+
+/** A layout that leaves detectors off its inputs or has errors is incomplete: it is never "best" on any measure. */
+export function notRankedReason(c: { unplaced: number; findings: { error: number } }): string | null {
+  const why: string[] = [];
+  if (c.unplaced > 0) why.push(`${c.unplaced} ${c.unplaced === 1 ? "detector is" : "detectors are"} not placed`);
+  if (c.findings.error > 0) why.push(`${c.findings.error} ${c.findings.error === 1 ? "error" : "errors"}`);
+  return why.length ? `not ranked: ${why.join(" and ")}` : null;
+}
+
+/** Column indices best on each measure, among the ranked columns only (ties give several). */
+export function bestOf(columns: readonly Pick<ComparisonColumn, "cost" | "coverage" | "findings" | "inputs" | "notRanked">[]): LayoutComparison["best"] {
+  const ranked = <T,>(f: (c: (typeof columns)[number]) => T | null) => columns.map((c) => (c.notRanked === null ? f(c) : null));
+  return {
+    cost: argBest(ranked((c) => c.cost), (a, b) => a < b),
+    coverage: argBest(ranked((c) => c.coverage.share), (a, b) => a > b),
+    errors: argBest(ranked((c) => c.findings.error), (a, b) => a < b),
+    spare: argBest(ranked((c) => c.inputs.spare), (a, b) => a > b),
+  };
 }
 
 function argBest(values: (number | null)[], better: (a: number, b: number) => boolean): number[] {
@@ -118,23 +139,22 @@ export function compareLayouts(candidates: readonly CompareCandidate[], schedule
         return { boardKey: e.boardKey, input: e.input, detectors: labels, inputsSaved: 1, lost: [...e.lost], text: tradeoffText(where, labels, e.lost) };
       }),
       bom,
+      notRanked: notRankedReason({ unplaced: r.totals.unplacedIds.length, findings: r.counts }),
     };
   });
 
-  const best = {
-    cost: argBest(columns.map((c) => c.cost), (a, b) => a < b),
-    coverage: argBest(columns.map((c) => c.coverage.share), (a, b) => a > b),
-    errors: argBest(columns.map((c) => c.findings.error), (a, b) => a < b),
-    spare: argBest(columns.map((c) => c.inputs.spare), (a, b) => a > b),
-  };
+  const best = bestOf(columns);
 
   const summary: string[] = [];
-  if (columns.length > 1 && best.cost.length) {
-    const cheapest = columns[best.cost[0]];
+  // the price difference is a fact about every layout, ranked or not
+  const lowest = argBest(columns.map((c) => c.cost), (a, b) => a < b);
+  if (columns.length > 1 && lowest.length) {
+    const cheapest = columns[lowest[0]];
     for (const c of columns) if (c !== cheapest && c.cost !== cheapest.cost) summary.push(`${c.name} costs ${money(c.cost - cheapest.cost)} more than ${cheapest.name} (${money(c.cost)} against ${money(cheapest.cost)}).`);
   }
   for (const c of columns) {
     summary.push(`${c.name}: ${c.inputs.used} of ${c.inputs.total} inputs used, ${c.inputs.spare} spare; supervision coverage ${pct(c.coverage.share)}; ${c.findings.error} error${c.findings.error === 1 ? "" : "s"}, ${c.findings.warning} warning${c.findings.warning === 1 ? "" : "s"}.`);
+    if (c.notRanked) summary.push(`${c.name} is ${c.notRanked}, so it is not marked best on any measure until that is put right.`);
     if (c.shared.length) summary.push(`${c.name} saves ${c.shared.length} input${c.shared.length === 1 ? "" : "s"} by sharing: ${c.shared.map((s) => s.text).join(" ")}`);
   }
   const inputs = [{ schedule, catalog }, ...candidates.flatMap((c) => (c.frozen ? [c.frozen] : []))];

@@ -124,3 +124,30 @@ describe("layout operations", () => {
     );
   });
 });
+
+describe("the data bus cable of a new bus device", () => {
+  it("adds the run to the new board to the layout's bus cable total and says so", () => {
+    const doc = { ...emptyLayout("fx-panel-small"), busCableM: 12 };
+    const r = addBoard(doc, ctx, "expansion", "fx-exp-8", undefined, 25.5);
+    expect(r).toMatchObject({ ok: true, message: "Expansion board 1 added at bus address 1; data bus cable now 37.5 m" });
+    expect(r.layout.busCableM).toBe(37.5);
+  });
+  it("refuses a run of 0 m or less, or not a number, and changes nothing", () => {
+    const doc = emptyLayout("fx-panel-small");
+    for (const bad of [0, -3, Number.NaN, Number.POSITIVE_INFINITY]) {
+      const r = addBoard(doc, ctx, "expansion", "fx-exp-8", undefined, bad);
+      expect(r.ok, String(bad)).toBe(false);
+      expect(r.layout).toBe(doc);
+      expect(r.message).toBe("Give the length of data bus cable to the new board, more than 0 m");
+    }
+  });
+  it("holds for any positive run: the total grows by exactly that run, to the centimetre", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 50_000 }), fc.integer({ min: 1, max: 50_000 }), (startCm, runCm) => {
+        const doc = { ...emptyLayout("fx-panel-small"), busCableM: startCm / 100 };
+        const r = addBoard(doc, ctx, "expansion", "fx-exp-8", undefined, runCm / 100);
+        expect(Math.round(r.layout.busCableM * 100)).toBe(startCm + runCm);
+      }),
+    );
+  });
+});

@@ -164,7 +164,7 @@ export function makeShared(doc: LayoutDocument, ctx: LayoutContext, detectorId: 
 }
 
 /** Add a board at the end, with the lowest free bus address when it takes one. */
-export function addBoard(doc: LayoutDocument, ctx: LayoutContext, kind: BoardKind, catalogId: string, boardLabel?: string): LayoutEdit {
+export function addBoard(doc: LayoutDocument, ctx: LayoutContext, kind: BoardKind, catalogId: string, boardLabel?: string, busRunM?: number): LayoutEdit {
   const ix = indexCatalog(ctx.catalog);
   const entry = boardEntry(ix, kind, catalogId);
   if (!entry) return refuse(doc, `${catalogId} is not a ${kind === "supply" ? "power supply" : kind === "keypad" ? "keypad" : "expansion board"} in the catalog`);
@@ -185,11 +185,16 @@ export function addBoard(doc: LayoutDocument, ctx: LayoutContext, kind: BoardKin
         break;
       }
   }
+  // a bus device adds its run of data bus cable to the total; a run of 0 m or less is refused rather than kept
+  const onBus = entry.entry.takesBusAddress;
+  if (onBus && busRunM !== undefined && !(Number.isFinite(busRunM) && busRunM > 0)) return refuse(doc, "Give the length of data bus cable to the new board, more than 0 m");
   const board: LayoutBoard = { key: `b${n}`, kind, catalogId, busAddress, ...(boardLabel ? { label: boardLabel } : {}) };
-  const layout = { ...doc, boards: [...doc.boards, board] };
+  const busCableM = onBus && busRunM !== undefined ? Math.round((doc.busCableM + busRunM) * 100) / 100 : doc.busCableM;
+  const layout = { ...doc, boards: [...doc.boards, board], busCableM };
   const name = boardName(layout, board.key);
-  const where = !entry.entry.takesBusAddress ? "" : busAddress === null ? ", with no free bus address" : ` at bus address ${busAddress}`;
-  return done(layout, `${name} added${where}`);
+  const where = !onBus ? "" : busAddress === null ? ", with no free bus address" : ` at bus address ${busAddress}`;
+  const run = busCableM !== doc.busCableM ? `; data bus cable now ${busCableM} m` : "";
+  return done(layout, `${name} added${where}${run}`);
 }
 
 /** Remove a board; its detectors go back to the unplaced, boards it powered go back to the panel's auxiliary output. */

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { parseScheduleCsv, serializeScheduleCsv } from "@/lib/schedule/csv";
-import { scheduleRowSchema, type ScheduleRow } from "@/lib/schedule/schema";
+import { scheduleRowSchema, TEXT_LIMITS, type ScheduleRow } from "@/lib/schedule/schema";
 import { fixtureCatalog } from "@/lib/solver/testing/fixture-catalog";
 import { isLifeSafety } from "@/lib/catalog/life-safety";
 
@@ -94,5 +94,15 @@ describe("serialize then parse", () => {
       }),
       { numRuns: 300 },
     );
+  });
+});
+
+describe("long text in an import", () => {
+  it("refuses a label over the limit with its row and column, and imports nothing of that row", () => {
+    const long = "L".repeat(TEXT_LIMITS.label + 1);
+    const csv = `label,type,area,room,cable_m,gauge\nShort one,contact-door-surface,Ground,Hall,10,22 AWG\n${long},contact-door-surface,Ground,Hall,10,22 AWG\n`;
+    const r = parseScheduleCsv(csv, { detectors: [{ id: "contact-door-surface" }] } as never);
+    expect(r.rows.map((x) => x.label)).toEqual(["Short one"]);
+    expect(r.errors).toEqual([{ row: 3, column: "label", message: `the label is ${TEXT_LIMITS.label + 1} characters long; at most ${TEXT_LIMITS.label} are allowed` }]);
   });
 });

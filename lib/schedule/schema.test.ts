@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { applyBulkEdit, bulkEditPatchSchema, createDetectorFormSchema, formatGauge, parseGauge, scheduleSchema, updateDetectorFormSchema } from "@/lib/schedule/schema";
+import { applyBulkEdit, bulkEditPatchSchema, createDetectorFormSchema, formatGauge, parseGauge, scheduleRowSchema, scheduleSchema, TEXT_LIMITS, updateDetectorFormSchema } from "@/lib/schedule/schema";
 import { det } from "@/lib/solver/testing/fixture-schedule";
 
 describe("schedule schemas", () => {
@@ -32,5 +32,24 @@ describe("schedule schemas", () => {
     const edit = bulkEditPatchSchema.parse({ ids: ["b"], patch: { area: "Upper", cableM: "30" } });
     const out = applyBulkEdit([det("a", "fx-door"), det("b", "fx-door")], edit);
     expect(out.map((d) => [d.id, d.area, d.cableM])).toEqual([["a", "Ground", 20], ["b", "Upper", 30]]);
+  });
+});
+
+describe("text limits", () => {
+  const row = { label: "Front door", catalogId: "contact-door-surface", area: "Ground floor", room: "Hall", cableM: 10, gauge: { awg: 22 }, supervision: "single-eol" as const };
+
+  it("refuses a label, area or room over its limit with its length, and never cuts it", () => {
+    for (const [field, max] of Object.entries(TEXT_LIMITS)) {
+      const long = "x".repeat(max + 1);
+      const r = scheduleRowSchema.safeParse({ ...row, [field]: long });
+      expect(r.success, field).toBe(false);
+      expect(r.error!.issues[0]).toMatchObject({ path: [field], message: `the ${field} is ${max + 1} characters long; at most ${max} are allowed` });
+      const ok = scheduleRowSchema.safeParse({ ...row, [field]: "x".repeat(max) });
+      expect(ok.success && ok.data[field as keyof typeof ok.data]).toBe("x".repeat(max));
+    }
+  });
+
+  it("counts after trimming, as it is stored", () => {
+    expect(scheduleRowSchema.safeParse({ ...row, label: `  ${"y".repeat(TEXT_LIMITS.label)}  ` }).success).toBe(true);
   });
 });

@@ -11,17 +11,25 @@ export type SupervisionPreference = z.infer<typeof supervisionPreferenceSchema>;
 
 export type ScheduleCableGauge = CableGauge;
 
-const text = (max: number) => z.string().trim().max(max);
+/** Longest label, area and room a detector may have, in characters; stated in the form and the CSV import. */
+export const TEXT_LIMITS = { label: 200, area: 120, room: 120 } as const;
+
+/** Trimmed text of at most `max` characters: longer text is refused with its length, never cut. */
+const text = (what: string, max: number) =>
+  z
+    .string()
+    .trim()
+    .max(max, { error: (issue) => `the ${what} is ${typeof issue.input === "string" ? issue.input.length : "too many"} characters long; at most ${max} are allowed` });
 
 /** One-way cable run from the detector to its board, metres. */
 export const cableMSchema = z.number().positive("the cable run must be longer than 0 m").max(2000, "the cable run must be at most 2000 m").finite();
 
 const detectorFields = {
-  label: text(200).min(1, "a label is needed"),
+  label: text("label", TEXT_LIMITS.label).min(1, "a label is needed"),
   /** Detector id in the catalog. */
   catalogId: idSchema,
-  area: text(120),
-  room: text(120),
+  area: text("area", TEXT_LIMITS.area),
+  room: text("room", TEXT_LIMITS.room),
   cableM: cableMSchema,
   gauge: cableGaugeSchema.superRefine(scheduleGaugeRange),
   supervision: supervisionPreferenceSchema,

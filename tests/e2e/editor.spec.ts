@@ -137,8 +137,12 @@ test("a designer imports a schedule, places detectors by mouse and keyboard, out
 
   // an expansion board: the error goes, and the last two detectors find inputs on it
   await page.getByLabel("Add a board").selectOption({ label: "Compact 8-input expansion board (8 inputs)" });
+  // a bus device asks for its run of data bus cable: without one it is refused, not added at 0 m
   await page.getByRole("button", { name: "Add board" }).click();
-  await expect(page.getByTestId("editor-message")).toHaveText("Expansion board 1 added at bus address 1");
+  await expect(page.getByTestId("editor-message")).toContainText("Give the length of data bus cable to the new board");
+  await page.getByLabel("Data bus cable to it (m)").fill("15");
+  await page.getByRole("button", { name: "Add board" }).click();
+  await expect(page.getByTestId("editor-message")).toHaveText(/^Expansion board 1 added at bus address 1; data bus cable now \d+(\.\d+)? m$/);
   await expect(short).toHaveCount(0);
   await placeWithButton(page, "Office motion", "b1", 1);
   await keyboardDrag(page, "Office window", "Expansion board 1, input 2");

@@ -193,7 +193,7 @@ test.describe(() => {
       expect(pdf.pageCount).toBeGreaterThanOrEqual(boardCount);
       const printed = pdf.text;
       // every board after the first starts a page
-      const pageTexts = pdf.pages.map((p) => p.text.trim());
+      const pageTexts = pdf.pages.map((p) => p.text.replace(/^page \d+ of \d+[^\n]*\n/, "").trim()); // the footer ("page N of M", the sheet) comes first in drawing order
       for (const name of boardNames.slice(1)) expect(pageTexts.some((t) => t.startsWith(`${name} — `)), `${paper}: a page starts with ${name}`).toBe(true);
       expect(printed).toContain(row0Label);
       expect(printed).not.toContain("E-mail to the site's installer");

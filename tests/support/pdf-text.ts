@@ -11,6 +11,17 @@ export interface PdfPage {
   /** In PDF points (1/72 in), as displayed: the crop box, turned by the page's rotation. */
   width: number;
   height: number;
+  /** Each piece of text and where it sits, in points from the page's top-left corner (y grows downwards). */
+  items: PdfTextItem[];
+}
+
+export interface PdfTextItem {
+  str: string;
+  x: number;
+  /** The baseline's distance from the top edge, points. */
+  y: number;
+  /** The font size, points. */
+  size: number;
 }
 
 export interface PdfContent {
@@ -35,9 +46,17 @@ export async function readPdf(bytes: Uint8Array): Promise<PdfContent> {
     const pages: PdfPage[] = [];
     for (let n = 1; n <= doc.numPages; n++) {
       const page = await doc.getPage(n);
-      const { width, height } = page.getViewport({ scale: 1 });
+      const viewport = page.getViewport({ scale: 1 });
+      const { width, height } = viewport;
       const content = await page.getTextContent();
-      pages.push({ text: joinItems(content.items.filter((i): i is TextItem => "str" in i)), width, height });
+      const textItems = content.items.filter((i): i is TextItem => "str" in i);
+      const items = textItems
+        .filter((i) => i.str.trim() !== "")
+        .map((i) => {
+          const [x, y] = viewport.convertToViewportPoint(i.transform[4], i.transform[5]);
+          return { str: i.str, x, y, size: Math.hypot(i.transform[2], i.transform[3]) || i.height };
+        });
+      pages.push({ text: joinItems(textItems), width, height, items });
       page.cleanup();
     }
     return { pages, pageCount: pages.length, text: pages.map((p) => p.text).join("\f") };

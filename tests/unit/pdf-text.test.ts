@@ -28,6 +28,22 @@ describe("readPdf", { timeout: 30_000 }, () => {
     expect(squash(pdf.text)).toContain("First line of page one Second line of page one");
   });
 
+  it("places each piece of text from the page's top edge, so a test can tell how much of a page is used", async () => {
+    const { doc, toBuffer } = createPdf({ size: "A4", title: "Position check" });
+    doc.fontSize(12).text("Near the top", 72, 72);
+    doc.text("Half way down", 72, paper.A4.height / 2);
+    const [page] = (await readPdf(await toBuffer())).pages;
+    const top = page.items.find((i) => i.str.includes("Near the top"))!;
+    const middle = page.items.find((i) => i.str.includes("Half way down"))!;
+    // the baseline sits one ascent below where the text box starts: within a font size of it
+    expect(top.y).toBeGreaterThan(72);
+    expect(top.y).toBeLessThan(72 + 12 + 1);
+    expect(middle.y).toBeGreaterThan(paper.A4.height / 2);
+    expect(middle.y).toBeLessThan(paper.A4.height / 2 + 13);
+    expect(top.x).toBeCloseTo(72, 0);
+    expect(top.size).toBeCloseTo(12, 0);
+  });
+
   it("refuses bytes that are not a PDF", async () => {
     await expect(readPdf(Buffer.from("hello, not a PDF"))).rejects.toThrow(/not a PDF/);
   });

@@ -1,20 +1,12 @@
 import { Bone, LoadingPage } from "@/components/ui/skeleton";
-import { LayoutTabsSkeleton } from "@/components/review/layout-tabs-skeleton";
 
 // The layout editor's frame while the layout, schedule and catalog load: the same three columns as LayoutEditor.
 export default function LayoutEditorLoading() {
   return (
     <LoadingPage what="the layout editor">
-      <LayoutTabsSkeleton compact current="editor" />
       <div className="mx-[calc((100%-min(100vw-2rem,110rem))/2)]">
-        <div className="mb-4 flex flex-wrap items-start justify-between gap-3">
-          <div className="flex flex-col gap-1.5">
-            <p className="flex items-center gap-2 text-sm text-slate-600">
-              <Bone className="h-4 w-28" /> › Layouts
-            </p>
-            <Bone className="h-8 w-64" />
-            <Bone className="h-3 w-48" />
-          </div>
+        <div className="mb-3 flex flex-wrap items-center justify-between gap-3">
+          <Bone className="h-4 w-48" />
           <div className="flex items-start gap-2">
             <Bone className="h-9 w-24" />
             <span className="rounded-md border border-line bg-white px-3 py-2 text-sm font-medium text-slate-400">History</span>

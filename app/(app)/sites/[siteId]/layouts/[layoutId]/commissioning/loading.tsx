@@ -1,11 +1,9 @@
 import { Bone, LoadingPage } from "@/components/ui/skeleton";
-import { LayoutTabsSkeleton } from "@/components/review/layout-tabs-skeleton";
 
 // Commissioning's shape while the record and the sheet load: progress, the boards, the loops of the first board.
 export default function CommissioningLoading() {
   return (
     <LoadingPage what="the commissioning record">
-      <LayoutTabsSkeleton current="commissioning" />
       <div className="mx-auto flex max-w-3xl flex-col gap-4 text-base">
         <section className="rounded-lg border border-line bg-white p-3">
           <div className="flex flex-wrap items-baseline justify-between gap-2">

@@ -8,7 +8,6 @@ import { idParam } from "@/lib/server/route";
 import { can, refusal } from "@/lib/auth/permissions";
 import { usualValuesOf } from "@/lib/commissioning/diagnose";
 import { Refusal } from "@/components/ui/refusal";
-import { LayoutTabs } from "@/components/review/layout-tabs";
 import { CommissioningApp } from "@/components/commissioning/commissioning-app";
 import { orNotFound } from "@/lib/server/page-load";
 
@@ -32,7 +31,6 @@ export default async function CommissioningPage({ params }: { params: Promise<{ 
   const canRecord = can(actor.role, "commissioning:record");
   return (
     <>
-      <LayoutTabs siteId={ref.site.id} siteName={ref.site.name} layoutId={ref.layout.id} layoutName={ref.layout.name} review={view.review} current="commissioning" />
       <CommissioningApp
         siteId={ref.site.id}
         layoutId={ref.layout.id}

@@ -1,12 +1,10 @@
 import { Bone, LoadingPage } from "@/components/ui/skeleton";
 import { Card } from "@/components/ui/card";
-import { LayoutTabsSkeleton } from "@/components/review/layout-tabs-skeleton";
 
 // Without this the editor's loading state (one folder up) would stand in for the review page.
 export default function ReviewLoading() {
   return (
     <LoadingPage what="the review">
-      <LayoutTabsSkeleton current="review" />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_26rem]">
         <div className="flex flex-col gap-4">
           {["Where this layout stands", "What you can do", ""].map((title, i) => (

@@ -4,12 +4,10 @@ import { pageActor } from "@/lib/server/session";
 import { getReview } from "@/lib/server/review";
 import { getLayout } from "@/lib/server/layouts";
 import { getTerminalSheet } from "@/lib/server/sheets";
-import { getSite } from "@/lib/server/sites";
 import { orNotFound } from "@/lib/server/page-load";
 import { idParam } from "@/lib/server/route";
 import { can } from "@/lib/auth/permissions";
 import { Refusal } from "@/components/ui/refusal";
-import { LayoutTabs } from "@/components/review/layout-tabs";
 import { ReviewPanel } from "@/components/review/review-panel";
 
 export const metadata: Metadata = { title: "Review" };
@@ -23,11 +21,10 @@ export default async function ReviewPage({ params }: { params: Promise<{ siteId:
   if (!sid.success || !lid.success) notFound();
   const view = await orNotFound(getReview(actor, lid.data));
   if (view.siteId !== sid.data) notFound();
-  const [site, current, sheet] = await Promise.all([getSite(actor, view.siteId), getLayout(actor, view.layoutId), getTerminalSheet(actor, view.layoutId, { revision: view.review.currentRevision })]);
+  const [current, sheet] = await Promise.all([getLayout(actor, view.layoutId), getTerminalSheet(actor, view.layoutId, { revision: view.review.currentRevision })]);
   const s = current.layout.summary;
   return (
     <>
-      <LayoutTabs siteId={site.id} siteName={site.name} layoutId={view.layoutId} layoutName={view.name} review={view.review} current="review" />
       <ReviewPanel
         initial={view}
         summary={{ counts: s.counts, inputsUsed: s.inputsUsed, inputsTotal: s.inputsTotal, zonesUsed: s.zonesUsed, unplaced: s.unplaced, coverage: s.coverage, findings: s.findings }}

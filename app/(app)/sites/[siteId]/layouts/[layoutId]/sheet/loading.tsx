@@ -1,5 +1,4 @@
 import { Bone, LoadingPage, TableSkeleton } from "@/components/ui/skeleton";
-import { LayoutTabsSkeleton } from "@/components/review/layout-tabs-skeleton";
 
 // The terminal sheet's shape while the sheet is built: toolbar, header, then one block per input as in SheetInputBlock.
 const DETECTOR_COLUMNS = ["Zone", "Detector", "Area / room", "Device type", "Contact", "Cable"] as const;
@@ -7,7 +6,6 @@ const DETECTOR_COLUMNS = ["Zone", "Detector", "Area / room", "Device type", "Con
 export default function TerminalSheetLoading() {
   return (
     <LoadingPage what="the terminal sheet">
-      <LayoutTabsSkeleton current="sheet" />
       <div className="mb-4 flex flex-wrap items-center gap-3 rounded-lg border border-line bg-white p-3 text-sm">
         <span className="font-medium">Paper</span>
         <Bone className="h-7 w-16" />

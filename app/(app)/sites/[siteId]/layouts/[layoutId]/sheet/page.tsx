@@ -6,11 +6,11 @@ import { layoutInstaller } from "@/lib/server/send-sheet";
 import { idParam } from "@/lib/server/route";
 import { can, refusal } from "@/lib/auth/permissions";
 import { Refusal } from "@/components/ui/refusal";
-import { LayoutTabs } from "@/components/review/layout-tabs";
 import { TerminalSheetView } from "@/components/sheet/terminal-sheet-view";
 import { orNotFound } from "@/lib/server/page-load";
 import { approvedScheduleDrift } from "@/lib/server/schedule-drift";
 import Link from "next/link";
+import { paperOf } from "@/lib/sheet/sheet-request-schema";
 
 export const metadata: Metadata = { title: "Terminal sheet" };
 
@@ -29,7 +29,6 @@ export default async function SheetPage({ params, searchParams }: { params: Prom
   const canSend = can(actor.role, "sheet:send");
   return (
     <>
-      <LayoutTabs siteId={view.siteId} siteName={view.meta.siteName} layoutId={view.layoutId} layoutName={view.meta.layoutName} review={view.review} current="sheet" />
       {drift?.headline && drift.approvedRevision === view.meta.revision ? (
         <p role="note" className="no-print mb-3 rounded-md border-2 border-warn bg-warn-soft p-3 text-sm" data-testid="schedule-drift">
           <strong>{drift.headline}</strong> This sheet stays as approved.{" "}
@@ -38,7 +37,7 @@ export default async function SheetPage({ params, searchParams }: { params: Prom
           </Link>
         </p>
       ) : null}
-      <TerminalSheetView view={view} installer={installer ? { name: installer.name, email: installer.email } : null} canSend={canSend} sendRefusal={canSend ? "" : refusal(actor.role, "sheet:send")} />
+      <TerminalSheetView view={view} installer={installer ? { name: installer.name, email: installer.email } : null} canSend={canSend} sendRefusal={canSend ? "" : refusal(actor.role, "sheet:send")} defaultPaper={paperOf(actor.settings)} />
     </>
   );
 }
