@@ -9,6 +9,7 @@ import { useLayouts } from "@/lib/client/use-layouts";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { Field } from "@/components/ui/field";
+import { plural } from "@/lib/vocabulary/plural";
 
 interface PanelChoice {
   id: string;
@@ -18,7 +19,6 @@ interface PanelChoice {
   listPrice: number;
 }
 
-const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
 const money = (v: number) => v.toLocaleString(undefined, { minimumFractionDigits: 0, maximumFractionDigits: 2 });
 
 function Counts({ c }: { c: { error: number; warning: number; note: number } }) {
@@ -104,7 +104,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
   }
 
   async function remove(l: LayoutMeta) {
-    if (!window.confirm(`Delete the layout "${l.name}" and its ${l.currentRevision} revision${l.currentRevision === 1 ? "" : "s"}?`)) return;
+    if (!window.confirm(`Delete the layout "${l.name}" and its ${plural(l.currentRevision, "revision")}?`)) return;
     try {
       await sendJson(`/api/layouts/${l.id}`, "DELETE");
       setMessage({ kind: "ok", text: `Layout "${l.name}" deleted.` });
@@ -141,7 +141,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
                   <Counts c={l.summary.counts} />
                 </p>
                 <p className="text-xs text-slate-600">
-                  {l.summary.detectorsPlaced} detectors placed, {l.summary.unplaced} unplaced · {l.summary.inputsUsed} of {l.summary.inputsTotal} inputs · {l.summary.boards} boards
+                  {plural(l.summary.detectorsPlaced, "detector")} placed, {l.summary.unplaced} unplaced · {l.summary.inputsUsed} of {plural(l.summary.inputsTotal, "input")} · {plural(l.summary.boards, "board")}
                 </p>
                 {canWrite ? (
                   <button type="button" className="mt-auto self-end text-xs text-fault hover:underline" onClick={() => remove(l)}>
@@ -172,7 +172,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
                 <select name="panelId" className="mt-1 block w-full rounded-md border border-line bg-white px-3 py-2">
                   {panels.map((p) => (
                     <option key={p.id} value={p.id}>
-                      {p.name} — {p.inputs} inputs, {p.maxZones} zones, {money(p.listPrice)}
+                      {p.name} — {plural(p.inputs, "input")}, {plural(p.maxZones, "zone")}, {money(p.listPrice)}
                     </option>
                   ))}
                 </select>
@@ -185,7 +185,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
           <Card className="lg:col-span-2">
             <h2 className="font-semibold">Suggest hardware</h2>
             <p className="mt-1 text-sm text-slate-600">
-              The cheapest catalog hardware that carries all {detectorCount} detectors of the device schedule without errors: once with one detector per input, once letting detectors that allow it share an input.
+              The cheapest catalog hardware that carries {detectorCount === 1 ? "the one detector" : `all ${plural(detectorCount, "detector")}`} of the device schedule without errors: once with one detector per input, once letting detectors that allow it share an input.
             </p>
             <Button className="mt-3" variant="secondary" disabled={busy || detectorCount === 0} onClick={suggest}>
               {busy && !suggestions ? "Working…" : "Suggest hardware"}

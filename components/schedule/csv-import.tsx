@@ -7,6 +7,7 @@ import { formatGauge } from "@/lib/schedule/schema";
 import { describeError, sendJson } from "@/lib/client/fetcher";
 import { Button } from "@/components/ui/button";
 import { supervisionLabels, type DetectorType } from "@/components/schedule/schedule-labels";
+import { plural } from "@/lib/vocabulary/plural";
 
 /** Upload a CSV file, see every row and every problem with its row number, and only then store it. */
 export function CsvImport({ siteId, types, onImported }: { siteId: number; types: DetectorType[]; onImported: (count: number) => void }) {
@@ -70,10 +71,10 @@ export function CsvImport({ siteId, types, onImported }: { siteId: number; types
       {preview ? (
         <div className="mt-3" data-testid="import-preview">
           <p className="text-sm" role="status">
-            {file?.name}: {preview.rows.length} row{preview.rows.length === 1 ? "" : "s"} ready
+            {file?.name}: {plural(preview.rows.length, "row")} ready
             {preview.errors.length ? (
               <span className="font-medium text-fault">
-                , {preview.errors.length} problem{preview.errors.length === 1 ? "" : "s"} in {errorsByRow.size} row{errorsByRow.size === 1 ? "" : "s"} — correct the file and choose it again; nothing will be imported while there are problems.
+                , {plural(preview.errors.length, "problem")} in {plural(errorsByRow.size, "row")} — correct the file and choose it again; nothing will be imported while there are problems.
               </span>
             ) : (
               "."
@@ -121,7 +122,7 @@ export function CsvImport({ siteId, types, onImported }: { siteId: number; types
           </div>
           <div className="mt-3 flex gap-2">
             <Button onClick={confirm} disabled={busy || preview.errors.length > 0 || preview.rows.length === 0}>
-              Import {preview.rows.length} detector{preview.rows.length === 1 ? "" : "s"}
+              Import {plural(preview.rows.length, "detector")}
             </Button>
             <Button variant="secondary" onClick={() => (setFile(null), setPreview(null))}>
               Cancel

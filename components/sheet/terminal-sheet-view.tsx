@@ -7,6 +7,7 @@ import { PAPER_WORDS, sendSheetSchema, type PaperSize } from "@/lib/sheet/sheet-
 import { Button } from "@/components/ui/button";
 import { describeError, FetchError, sendJson } from "@/lib/client/fetcher";
 import { SheetInputBlock } from "@/components/sheet/sheet-input-block";
+import { plural } from "@/lib/vocabulary/plural";
 
 export interface TerminalSheetViewProps {
   view: SheetView;
@@ -91,7 +92,7 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal }: Ter
       <header className="mb-3">
         <h2 className="text-xl font-semibold">Terminal sheet — {meta.siteName}</h2>
         <p className="text-sm">
-          Layout “{meta.layoutName}”, revision {meta.revision} · {sheet.panel ? sheet.panel.name : "no control panel"} · {sheet.zoneCount} zones on {sheet.boards.length} board{sheet.boards.length === 1 ? "" : "s"} · generated {meta.generatedAt}
+          Layout “{meta.layoutName}”, revision {meta.revision} · {sheet.panel ? sheet.panel.name : "no control panel"} · {plural(sheet.zoneCount, "zone")} on {plural(sheet.boards.length, "board")} · generated {meta.generatedAt}
         </p>
         {view.approved ? (
           <p className="mt-1 text-sm font-semibold text-signal" data-testid="sheet-approval">
@@ -133,7 +134,7 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal }: Ter
               </h2>
               <p className="text-xs text-slate-700">
                 {b.inputType ? `${b.inputType.name}, parts ±${b.inputType.tolerancePct} %` : "input type unknown"}
-                {b.busAddress !== null ? ` · data bus address ${b.busAddress}` : ""} · {used.length} of {b.rows.length} inputs used
+                {b.busAddress !== null ? ` · data bus address ${b.busAddress}` : ""} · {used.length} of {plural(b.rows.length, "input")} used
                 <span className="hidden print:inline"> · {meta.siteName}, “{meta.layoutName}” revision {meta.revision}{view.approved ? "" : " — NOT APPROVED, for review only"}</span>
               </p>
             </div>

@@ -1,4 +1,5 @@
 import type { Permission } from "@/lib/auth/permissions";
+import { plural, pluralWord } from "@/lib/vocabulary/plural";
 
 // The review life of a layout: draft → in-review → approved → commissioned.
 // An approved (or commissioned) layout is frozen: a change is saved as a new draft, the approved one stays as it was.
@@ -109,7 +110,7 @@ export function transition(from: ReviewState, action: ReviewAction, ctx: Transit
     if (!p || p.loops === 0) return refuse("commissioning-incomplete", "No loop has been tested yet: every used input needs its commissioning readings first.");
     if (p.passed < p.loops) {
       const left = p.loops - p.passed;
-      return refuse("commissioning-incomplete", `${left} of ${p.loops} loop${p.loops === 1 ? "" : "s"} ${left === 1 ? "has" : "have"} not passed commissioning yet.`);
+      return refuse("commissioning-incomplete", `${left} of ${plural(p.loops, "loop")} ${pluralWord(left, "has", "have")} not passed commissioning yet.`);
     }
   }
   const newDraft = action === "edit" && from !== "draft";

@@ -12,6 +12,7 @@ import { Membership, Site, User } from "@/models";
 import type { PageSize } from "@/lib/server/pdf/pdf-kit";
 import { terminalSheetPdfOffLoop } from "@/lib/server/workers/off-loop";
 import { loopJsonReplacer } from "@/lib/loop/loop-json";
+import { plural } from "@/lib/vocabulary/plural";
 
 // The terminal sheet as a PDF, for download and e-mailed to the site's installer as an attachment.
 
@@ -78,7 +79,7 @@ export async function sendSheetToInstaller(actor: Actor, layoutId: number, opts:
     `Hello ${installer.name},`,
     "",
     `${actor.name} sent you the terminal sheet of ${view.meta.siteName}, layout "${view.meta.layoutName}" (${status}).`,
-    `It lists ${view.sheet.zoneCount} zone${view.sheet.zoneCount === 1 ? "" : "s"} on ${view.sheet.boards.length} board${view.sheet.boards.length === 1 ? "" : "s"}, with the resistors, the core map and the meter reading expected in each test.`,
+    `It lists ${plural(view.sheet.zoneCount, "zone")} on ${plural(view.sheet.boards.length, "board")}, with the resistors, the core map and the meter reading expected in each test.`,
     "",
     `The PDF is attached; the sheet is also online: ${link}`,
     ...(view.sheet.caution ? ["", view.sheet.caution] : []),

@@ -62,3 +62,24 @@ export function sentence(word: string): string {
 export function sentenceWords<K extends string>(words: Record<K, string>): Record<K, string> {
   return Object.fromEntries(Object.entries<string>(words).map(([k, w]) => [k, sentence(w)])) as Record<K, string>;
 }
+
+/** How an input is wired, to follow "is": "wired single end-of-line", "wired as a shared input", "wired with no resistor". */
+export function wiredWords(scheme: WiringScheme): string {
+  if (scheme === "shared") return "wired as a shared input";
+  if (scheme === "none") return "wired with no resistor";
+  return `wired ${SCHEME_WORDS[scheme]}`;
+}
+
+/** The wiring faults the engine injects, in words. */
+export const FAULT_WORDS: Record<"short-panel" | "short-detector" | "cut", string> = {
+  "short-panel": "a short at the panel end",
+  "short-detector": "a short at the detector end",
+  cut: "a cut conductor",
+};
+
+/** The kinds of board a layout holds, in words. */
+export const BOARD_KIND_WORDS: Record<"expansion" | "keypad" | "supply", string> = {
+  expansion: "expansion board",
+  keypad: "keypad",
+  supply: "power supply",
+};
