@@ -36,7 +36,7 @@ export function CompareTable({ siteId, comparison }: { siteId: number; compariso
             <th className="w-48 py-2 pr-3 text-slate-500">Measure</th>
             {cols.map((c, i) => (
               <th key={i} className="px-3 py-2">
-                <Link href={`/sites/${siteId}/layouts/${Number(c.id)}`} className="text-signal hover:underline">
+                <Link href={`/sites/${siteId}/layouts/${Number(c.id)}`} className="text-signal underline underline-offset-2">
                   {c.name}
                 </Link>
                 <span className="block text-xs font-normal text-slate-600">

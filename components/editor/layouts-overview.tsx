@@ -129,7 +129,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
             <li key={l.id}>
               <Card className="flex h-full flex-col gap-1">
                 <div className="flex items-baseline justify-between gap-2">
-                  <Link href={`/sites/${siteId}/layouts/${l.id}`} className="font-semibold text-signal hover:underline">
+                  <Link href={`/sites/${siteId}/layouts/${l.id}`} className="font-semibold text-signal underline underline-offset-2">
                     {l.name}
                   </Link>
                   <span className="rounded bg-slate-100 px-1.5 text-xs uppercase tracking-wide">{l.status}</span>

@@ -11,7 +11,7 @@ import { DetectorFaultControls, InputWiringControls } from "./wiring-controls";
 export function LoopBench({ inputTypes }: { inputTypes: InputType[] }) {
   const bench = useBench(inputTypes);
   return (
-    <div className="grid gap-6 lg:grid-cols-[22rem_minmax(0,1fr)]" data-testid="loop-bench">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[22rem_minmax(0,1fr)]" data-testid="loop-bench">
       {/* controls */}
       <div className="grid content-start gap-4">
         <InputWiringControls bench={bench} inputTypes={inputTypes} />

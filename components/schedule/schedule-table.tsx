@@ -99,7 +99,7 @@ export function ScheduleTable(props: ScheduleTableProps) {
                 <td className="px-2 py-1.5">{supervisionLabels[d.supervision]}</td>
                 {canWrite ? (
                   <td className="px-2 py-1.5 text-right">
-                    <button type="button" className="text-signal hover:underline" onClick={() => onEdit(d.id)} aria-label={`Edit ${d.label}`}>
+                    <button type="button" className="text-signal underline underline-offset-2" onClick={() => onEdit(d.id)} aria-label={`Edit ${d.label}`}>
                       Edit
                     </button>
                   </td>

@@ -83,3 +83,36 @@ export const BOARD_KIND_WORDS: Record<"expansion" | "keypad" | "supply", string>
   keypad: "keypad",
   supply: "power supply",
 };
+
+/** What an audit entry records, as the audit log shows it. */
+export const AUDIT_ACTION_WORDS: Record<string, string> = {
+  "catalog.upload": "catalog uploaded",
+  "commissioning.photo": "commissioning photo added",
+  "commissioning.reading": "commissioning reading recorded",
+  "demo.seed": "demo data added",
+  "layout.choose": "layout chosen",
+  "layout.comment": "comment on a layout",
+  "layout.create": "layout created",
+  "layout.delete": "layout deleted",
+  "layout.restore": "earlier revision restored",
+  "layout.save": "layout saved",
+  "layout.review.submit": "layout sent for review",
+  "layout.review.withdraw": "layout withdrawn from review",
+  "layout.review.approve": "layout approved",
+  "layout.review.reject": "layout sent back",
+  "layout.review.edit": "approved layout reopened as a draft",
+  "layout.review.commission": "layout marked commissioned",
+  "member.invite": "member invited",
+  "member.join": "member joined",
+  "member.role": "member's role changed",
+  "schedule.create": "detector added to the schedule",
+  "schedule.delete": "detectors deleted from the schedule",
+  "schedule.import": "device schedule imported",
+  "schedule.update": "device schedule changed",
+  "sheet.send": "terminal sheet sent",
+  "site.create": "site created",
+  "site.update": "site changed",
+};
+
+/** The kind of thing an audit entry is about. */
+export const AUDIT_ENTITY_WORDS: Record<string, string> = { invitation: "invitation", layout: "layout", membership: "member", organisation: "organisation", organisation_catalog: "catalog", schedule_detector: "detector", site: "site" };

@@ -93,8 +93,14 @@ async function checkPage(page: Page, path: string, problems: string[]): Promise<
   await page.waitForLoadState("networkidle", { timeout: 3_000 }).catch(() => undefined);
   if (!res || res.status() >= 400) found.push(`answered ${res?.status() ?? "nothing"}`);
   found.push(...problems);
-  const width = await page.evaluate(() => ({ scroll: document.documentElement.scrollWidth, inner: window.innerWidth }));
-  if (width.scroll > width.inner) found.push(`wider than the screen: ${width.scroll} px in ${width.inner} px`);
+  const width = await page.evaluate(() => {
+    const inner = window.innerWidth;
+    // the outermost elements that reach past the right edge, to say what makes the page too wide
+    const past = [...document.body.querySelectorAll("*")].filter((e) => e.getBoundingClientRect().right > inner + 1 && !(e.parentElement && e.parentElement.getBoundingClientRect().right > inner + 1));
+    const name = (e: Element) => `${e.tagName.toLowerCase()}${e.id ? `#${e.id}` : ""}${e.getAttribute("data-testid") ? `[data-testid=${e.getAttribute("data-testid")}]` : ""}.${[...e.classList].slice(0, 4).join(".")}`;
+    return { scroll: document.documentElement.scrollWidth, inner, culprits: past.slice(0, 3).map((e) => `${name(e)} (${Math.round(e.getBoundingClientRect().right)} px)`) };
+  });
+  if (width.scroll > width.inner) found.push(`wider than the screen: ${width.scroll} px in ${width.inner} px, from ${width.culprits.join(" | ")}`);
   const axe = await new AxeBuilder({ page }).analyze();
   for (const v of axe.violations.filter((x) => x.impact === "serious" || x.impact === "critical"))
     found.push(`axe ${v.impact} ${v.id}: ${v.help} — ${v.nodes.slice(0, 3).map((n) => n.target.join(" ")).join(" | ")}${v.nodes.length > 3 ? ` (+${v.nodes.length - 3})` : ""}`);
@@ -120,6 +126,7 @@ function describeRole(title: string, state: () => Parameters<Browser["newContext
     });
     for (const route of routes)
       test(route, async () => {
+        test.setTimeout(180_000); // a long terminal sheet takes axe a while on a busy machine
         const path = withIds(route);
         const failures: string[] = [];
         for (const vp of viewports) {
