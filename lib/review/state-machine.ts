@@ -1,4 +1,4 @@
-import type { Permission } from "@/lib/auth/permissions";
+import { permissionTable, roleLabels, type Permission, type Role } from "@/lib/auth/permissions";
 import { plural, pluralWord } from "@/lib/vocabulary/plural";
 
 // The review life of a layout: draft → in-review → approved → commissioned.
@@ -101,8 +101,8 @@ export function transition(from: ReviewState, action: ReviewAction, ctx: Transit
   const permission = rule.permission;
   const refuse = (code: RefusalCode, reason: string): TransitionResult => ({ ok: false, action, from, code, reason, permission });
   if (!rule.from.includes(from))
-    return refuse("wrong-state", FROM_REASONS[action]?.[from] ?? `A ${REVIEW_STATE_WORDS[from]} layout cannot ${REVIEW_ACTION_WORDS[action]}.`);
-  if (!ctx.can(permission)) return refuse("permission", `Your role cannot ${REVIEW_ACTION_WORDS[action]}: it needs the ${permission} permission.`);
+    return refuse("wrong-state", FROM_REASONS[action]?.[from] ?? `A layout that is ${REVIEW_STATE_WORDS[from]} cannot ${REVIEW_ACTION_WORDS[action]}.`);
+  if (!ctx.can(permission)) return refuse("permission", `Your role cannot ${REVIEW_ACTION_WORDS[action]}: only ${(permissionTable[permission] as readonly Role[]).map((r) => roleLabels[r].toLowerCase()).join(" or ")} members can.`);
   if (action === "reject" && !(ctx.reason && ctx.reason.trim().length > 0))
     return refuse("reason-required", "Say why it goes back to draft, so its author knows what to change.");
   if (action === "commission") {
