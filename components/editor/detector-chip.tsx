@@ -1,7 +1,7 @@
 "use client";
 
 import { useDraggable } from "@dnd-kit/core";
-import type { KeyboardEvent } from "react";
+import type { HTMLAttributes, KeyboardEvent } from "react";
 import { useEditor } from "@/components/editor/editor-context";
 import { detectorDragId } from "@/components/editor/editor-model";
 import { FindingMarker } from "@/components/editor/finding-marker";
@@ -9,39 +9,33 @@ import { voltsText } from "@/lib/solver/supply-lines";
 import { isLifeSafety } from "@/lib/catalog/life-safety";
 import { unassign } from "@/lib/layout/operations";
 
-/** What a chip shows; also drawn in the drag overlay. On a chip the name is the label alone and the rest is its
- * description (`describedBy`), so the badges and figures are hidden from the name but read out after it. */
-export function ChipFace({ detectorId, describedBy }: { detectorId: string; describedBy?: string }) {
+/** What a chip shows; also drawn in the drag overlay. On a chip the label is the control (`labelProps`), so its
+ * name is what it shows; the zone, the fire badge and the figures sit beside it. */
+export function ChipFace({ detectorId, labelProps }: { detectorId: string; labelProps?: HTMLAttributes<HTMLSpanElement> }) {
   const { detectorsById, ix, zones, result } = useEditor();
   const d = detectorsById.get(detectorId);
   const c = d ? ix.detectors.get(d.catalogId) : undefined;
   const zone = zones.get(detectorId);
   const v = result.detectors.find((x) => x.detectorId === detectorId);
-  const fire = c ? isLifeSafety(c) : false;
-  const hide = describedBy ? true : undefined;
-  const details = `${c?.name ?? "detector type not in the catalog"} · ${d ? `${d.cableM} m` : ""}`;
   return (
     <span className="flex min-w-0 flex-col text-left">
       <span className="flex items-start gap-1 font-medium leading-tight">
         {zone ? (
-          <span aria-hidden={hide} className="mt-px shrink-0 rounded bg-ink px-1 text-[10px] font-semibold text-white" title={`Zone ${zone}`}>
+          <span className="mt-px shrink-0 rounded bg-ink px-1 text-[10px] font-semibold text-white" title={`Zone ${zone}`}>
             Z{zone}
           </span>
         ) : null}
-        <span className="line-clamp-2 break-words">{d?.label ?? `Unknown detector ${detectorId}`}</span>
-        {fire ? <span aria-hidden={hide} className="mt-px shrink-0 rounded bg-fault px-1 text-[10px] font-semibold text-white">FIRE</span> : null}
+        <span className="line-clamp-2 break-words" {...labelProps}>
+          {d?.label ?? `Unknown detector ${detectorId}`}
+        </span>
+        {c && isLifeSafety(c) ? <span className="mt-px shrink-0 rounded bg-fault px-1 text-[10px] font-semibold text-white">FIRE</span> : null}
       </span>
-      <span aria-hidden={hide} className="truncate text-[11px] text-slate-500">
-        {details}
+      <span className="truncate text-[11px] text-slate-500">
+        {c?.name ?? "detector type not in the catalog"} · {d ? `${d.cableM} m` : ""}
       </span>
       {v ? (
-        <span aria-hidden={hide} className={`text-[11px] ${v.ok ? "text-slate-500" : "font-semibold text-fault"}`} data-testid={`volts-${detectorId}`}>
+        <span className={`text-[11px] ${v.ok ? "text-slate-500" : "font-semibold text-fault"}`} data-testid={`volts-${detectorId}`}>
           {voltsText(v)}
-        </span>
-      ) : null}
-      {describedBy ? (
-        <span id={describedBy} hidden>
-          {[zone ? `zone ${zone}` : null, fire ? "fire device" : null, details, v ? voltsText(v) : null].filter(Boolean).join(", ")}
         </span>
       ) : null}
     </span>
@@ -71,20 +65,8 @@ export function DetectorChip({ detectorId, onInput, sharedAs }: { detectorId: st
       data-testid={domId}
       className={`group flex items-center gap-1 rounded-md border bg-white px-2 py-1 text-xs shadow-sm ${isSelected ? "border-signal ring-2 ring-signal" : "border-line"} ${isDragging ? "opacity-40" : ""} ${highlighted === domId ? "ring-4 ring-warn" : ""}`}
     >
-      <div
-        ref={setNodeRef}
-        {...attributes}
-        {...listeners}
-        onKeyDown={onKeyDown}
-        onClick={() => canWrite && select(isSelected ? null : detectorId)}
-        aria-pressed={canWrite ? isSelected : undefined}
-        aria-label={label}
-        aria-describedby={`${domId}-about`}
-        role="button"
-        tabIndex={0}
-        className={`min-w-0 flex-1 ${canWrite ? "cursor-grab touch-none" : "cursor-default"}`}
-      >
-        <ChipFace detectorId={detectorId} describedBy={`${domId}-about`} />
+      <div ref={setNodeRef} {...listeners} onKeyDown={onKeyDown} onClick={() => canWrite && select(isSelected ? null : detectorId)} className={`min-w-0 flex-1 ${canWrite ? "cursor-grab touch-none" : "cursor-default"}`}>
+        <ChipFace detectorId={detectorId} labelProps={{ ...attributes, role: "button", tabIndex: 0, "aria-pressed": canWrite ? isSelected : undefined }} />
       </div>
       {sharedAs ? (
         <span className="shrink-0 rounded border border-line px-1 text-[10px] font-semibold text-slate-600" title={`Detector ${sharedAs} of the shared input: the ${sharedAs} resistor goes across its contact`}>

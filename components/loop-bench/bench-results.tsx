@@ -27,7 +27,7 @@ function Card({ title, children, testId, className = "" }: { title: string; chil
 export function BenchResults({ bench }: { bench: Bench }) {
   const { s, update, inputType, loop, analysis, states, reading } = bench;
   return (
-    <div className="grid min-w-0 content-start gap-4">
+    <div className="grid min-w-0 grid-cols-[minmax(0,1fr)] content-start gap-4">
       {bench.lifeSafety ? (
         <Caution testId="life-safety-caution" summary={<><strong className="text-warn">Life-safety devices:</strong> an aid, not an approval; the local fire code and the authority having jurisdiction decide.</>}>
           {LIFE_SAFETY_CAUTION} Installation and certification are for licensed people.

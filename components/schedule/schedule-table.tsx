@@ -33,7 +33,7 @@ export function ScheduleTable(props: ScheduleTableProps) {
   const span = SCHEDULE_COLUMNS.length + 2;
 
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-white">
+    <div className="relative overflow-x-auto rounded-lg border border-line bg-white">
       <table className="w-full text-sm" data-testid="schedule-table">
         <caption className="sr-only">Device schedule; select a column heading to sort</caption>
         <thead className="text-left text-slate-600">
