@@ -34,8 +34,8 @@ export function BenchResults({ bench }: { bench: Bench }) {
         </Caution>
       ) : null}
 
-      <section className="overflow-x-auto rounded-lg border border-line bg-white p-3 shadow-sm">
-        <h2 className="sr-only">The loop as wired</h2>
+      <section className="relative overflow-x-auto rounded-lg border border-line bg-white p-3 shadow-sm" tabIndex={0} aria-labelledby="bench-schematic-title">
+        <h2 id="bench-schematic-title" className="sr-only">The loop as wired</h2>
         <LoopSchematic loop={loop} states={states} fault={s.fault} inputType={inputType} readingText={reading ? formatOhms(reading.nominalOhms) : "–"} className="w-full" />
       </section>
 
