@@ -27,7 +27,7 @@ const PURE_FOLDERS = [
   "lib/solver",
   "lib/vocabulary",
 ];
-const pureFiles = [...PURE_FOLDERS.map((d) => `${d}/**/*.{ts,tsx}`), "lib/findings.ts", "lib/findings-grouping.ts"];
+const pureFiles = [...PURE_FOLDERS.map((d) => `${d}/**/*.{ts,tsx}`), "lib/findings.ts", "lib/findings-grouping.ts", "lib/finding-codes.ts"];
 /** Tests and their helpers beside the engine may read fixture files and the shipped catalog. */
 const pureTestFiles = PURE_FOLDERS.flatMap((d) => [`${d}/**/*.test.ts`, `${d}/**/testing/**`, `${d}/**/test-support/**`]);
 

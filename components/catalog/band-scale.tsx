@@ -38,6 +38,11 @@ function ScaleSvg({ id, title, bands, marks, f }: { id: string; title: string; b
               <text x={(s.x0 + end) / 2} y={barTop + BAR / 2 + 4} textAnchor="middle" fill={reportColour[s.report].text}>
                 {reportLabel[s.report]}
               </text>
+            ) : end - s.x0 > 10 ? (
+              // too narrow for its word: its first letter, so the colour is never the only sign
+              <text x={(s.x0 + end) / 2} y={barTop + BAR / 2 + 4} textAnchor="middle" fill={reportColour[s.report].text} aria-hidden>
+                {reportLabel[s.report].charAt(0).toUpperCase()}
+              </text>
             ) : null}
           </g>
         );

@@ -59,7 +59,7 @@ function KindTable({ kind, rows, state, onSort }: { kind: CatalogKind; rows: Cat
             {shown.map((r) => (
               <tr key={r.id} className="border-t border-line align-top" data-testid="catalog-row" data-entry-id={r.id}>
                 <td className="min-w-56 px-2 py-2">
-                  <Link href={`/catalog/${r.id}`} className="font-medium text-signal hover:underline">
+                  <Link href={`/catalog/${r.id}`} className="font-medium text-signal underline underline-offset-2">
                     {r.name}
                   </Link>
                   <div className="font-mono text-xs text-slate-500">{r.id}</div>

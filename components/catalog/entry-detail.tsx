@@ -134,7 +134,7 @@ export function RelatedList({ items }: { items: ReturnType<typeof relatedEntries
     <ul className="space-y-1 text-sm">
       {items.map((r) => (
         <li key={`${r.kind}:${r.id}`}>
-          <Link className="text-signal hover:underline" href={`/catalog/${r.id}`}>
+          <Link className="text-signal underline underline-offset-2" href={`/catalog/${r.id}`}>
             {r.name}
           </Link>{" "}
           <span className="text-slate-500">

@@ -35,7 +35,7 @@ export function UploadVersions({ uploads, inUseVersion, when }: { uploads: Catal
               <td className="pr-2">{u.uploadedBy?.name ?? "—"}</td>
               <td className="pr-2 whitespace-nowrap">{when(u.createdAt)}</td>
               <td>
-                <a className="text-signal hover:underline" href={`/api/catalog/uploads/${u.id}`} download={u.fileName}>
+                <a className="text-signal underline underline-offset-2" href={`/api/catalog/uploads/${u.id}`} download={u.fileName}>
                   Download<span className="sr-only"> version {u.version}</span>
                 </a>
               </td>

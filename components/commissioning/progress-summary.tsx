@@ -4,6 +4,7 @@ import { progressDetail } from "@/components/commissioning/progress-view";
 import { ProgressBar } from "@/components/commissioning/progress-bar";
 import { RefusedList } from "@/components/commissioning/refused-list";
 import { WaitingBanner } from "@/components/commissioning/waiting-banner";
+import { plural } from "@/lib/vocabulary/plural";
 
 interface ProgressSummaryProps {
   revision: number;
@@ -18,7 +19,7 @@ export function ProgressSummary({ revision, progress, queue }: ProgressSummaryPr
     <section className="rounded-lg border border-line bg-white p-3" aria-label="Progress">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <p className="text-lg font-semibold" data-testid="site-progress">
-          {t.passed} of {t.loops} loops passed
+          {t.passed} of {plural(t.loops, "loop")} passed
         </p>
         <p className="text-sm text-slate-600">{progressDetail(revision, t)}</p>
       </div>

@@ -1,3 +1,4 @@
+import { plural } from "@/lib/vocabulary/plural";
 // Readings that could not be sent yet, kept in the browser's storage so a reading taken in a plant room without
 // signal is never lost. Each has the client id it was made with: the server stores a client id once, so sending
 // one again after a lost answer is safe.
@@ -104,5 +105,5 @@ export async function flushQueue<T>(store: KeyValueStore, layoutId: number, send
 }
 
 export function waitingText(n: number): string {
-  return n === 0 ? "Every reading is sent." : `${n} reading${n === 1 ? "" : "s"} waiting to send`;
+  return n === 0 ? "Every reading is sent." : `${plural(n, "reading")} waiting to send`;
 }

@@ -22,7 +22,7 @@ export function CompareDetails({ column: c }: { column: ComparisonColumn }) {
         </ul>
       )}
       <h4 className="mt-3 text-sm font-semibold">Every finding ({c.findingList.length})</h4>
-      <ul className="mt-1 max-h-96 space-y-1 overflow-y-auto pr-1 text-sm" data-testid="compare-findings">
+      <ul className="mt-1 max-h-96 space-y-1 overflow-y-auto pr-1 text-sm" data-testid="compare-findings" tabIndex={0} aria-label="Findings (scrolls)">
         {c.findingList.map((f, k) => (
           <li key={k}>
             <span className={`font-medium ${SEVERITY_STYLE[f.severity]}`}>{f.severity}:</span> {f.message}

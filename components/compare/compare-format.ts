@@ -4,7 +4,7 @@ import type { BomLine } from "@/lib/bom/bill-of-materials";
 
 export const ma = (x: number) => `${Math.round(x)} mA`;
 export const pct = (x: number | null) => (x === null ? "no inputs used" : `${Math.round(x * 100)} %`);
-export const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
+export { plural } from "@/lib/vocabulary/plural";
 
 /** The bill of materials lines that are boards and supplies (not resistors, batteries or cable). */
 export const HARDWARE: BomLine["kind"][] = ["panel", "expansion", "keypad", "supply"];

@@ -27,7 +27,7 @@ export function ComparePicker({ siteId, layouts, selected, error }: { siteId: nu
               <span>
                 <span className="font-medium">{l.name}</span>
                 <span className="block text-xs text-slate-600">
-                  {l.status} · revision {l.currentRevision} · {l.inputsUsed} of {l.inputsTotal} inputs · {plural(l.errors, "error")}
+                  {l.status} · revision {l.currentRevision} · {l.inputsUsed} of {plural(l.inputsTotal, "input")} · {plural(l.errors, "error")}
                 </span>
               </span>
             </label>
@@ -36,7 +36,7 @@ export function ComparePicker({ siteId, layouts, selected, error }: { siteId: nu
       </ul>
       <div className="mt-3 flex items-center gap-3">
         <Button disabled={picked.length < 2} onClick={() => router.push(`/sites/${siteId}/compare?ids=${picked.join(",")}`)}>
-          Compare {picked.length} layouts
+          Compare {plural(picked.length, "layout")}
         </Button>
         <span className="text-xs text-slate-600">Two to six layouts.</span>
       </div>

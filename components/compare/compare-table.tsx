@@ -38,7 +38,7 @@ export function CompareTable({ siteId, comparison }: { siteId: number; compariso
             <th className="w-48 py-2 pr-3 text-slate-500">Measure</th>
             {cols.map((c, i) => (
               <th key={i} className="px-3 py-2">
-                <Link href={`/sites/${siteId}/layouts/${Number(c.id)}`} className="text-signal hover:underline">
+                <Link href={`/sites/${siteId}/layouts/${Number(c.id)}`} className="text-signal underline underline-offset-2">
                   {c.name}
                 </Link>
                 <span className="block text-xs font-normal text-slate-600">
@@ -87,7 +87,7 @@ export function CompareTable({ siteId, comparison }: { siteId: number; compariso
                 {c.inputs.used} of {c.inputs.total} used, <strong>{c.inputs.spare} spare</strong>
                 <Best on={bestOn(best.spare, i)} />
                 <span className="block text-xs text-slate-600">
-                  {c.zones} zones{c.unplaced ? `, ${c.unplaced} detectors not placed` : ""}
+                  {plural(c.zones, "zone")}{c.unplaced ? `, ${plural(c.unplaced, "detector")} not placed` : ""}
                 </span>
               </td>
             ))}
@@ -126,7 +126,7 @@ export function CompareTable({ siteId, comparison }: { siteId: number; compariso
           <Row label="Findings">
             {cols.map((c, i) => (
               <td key={i} className="px-3 py-2 tabular-nums">
-                <span className="text-fault">{c.findings.error} errors</span>, <span className="text-warn">{c.findings.warning} warnings</span>, {c.findings.note} notes
+                <span className="text-fault">{plural(c.findings.error, "error")}</span>, <span className="text-warn">{plural(c.findings.warning, "warning")}</span>, {plural(c.findings.note, "note")}
                 <Best on={bestOn(best.errors, i)} />
               </td>
             ))}

@@ -11,6 +11,7 @@ import { boardEntry, boardInputs } from "@/lib/layout/catalog-index";
 import { inputBlockOf, removeBoard, reorderBoards, setBusAddress, setPoweredBy } from "@/lib/layout/operations";
 import { boardName } from "@/lib/layout/names";
 import { PANEL_KEY, type LayoutBoard } from "@/lib/layout/schema";
+import { plural } from "@/lib/vocabulary/plural";
 
 function InputGrid({ boardKey }: { boardKey: string }) {
   const { doc, ix } = useEditor();
@@ -31,7 +32,7 @@ function Usage({ boardKey }: { boardKey: string }) {
   if (!f || f.inputsTotal === 0) return null;
   return (
     <span className="text-xs text-slate-600" data-testid={`usage-${boardKey}`}>
-      {f.inputsUsed} of {f.inputsTotal} inputs used · {f.inputsFree} free
+      {f.inputsUsed} of {plural(f.inputsTotal, "input")} used · {f.inputsFree} free
     </span>
   );
 }
@@ -73,7 +74,7 @@ export function PanelCard() {
       title="Control panel"
       subtitle={
         <>
-          {panel ? `${panel.name} · ${type?.name ?? panel.onboardInputs.inputType} · up to ${panel.maxZones} zones · ` : `${doc.panelId} is not in the catalog · `}
+          {panel ? `${panel.name} · ${type?.name ?? panel.onboardInputs.inputType} · up to ${plural(panel.maxZones, "zone")} · ` : "control panel not in the catalog · "}
           <Usage boardKey={PANEL_KEY} />
         </>
       }
@@ -118,7 +119,7 @@ export function BoardCard({ board, index }: { board: LayoutBoard; index: number 
       }
       subtitle={
         <>
-          {kindWord}: {entry ? entry.entry.name : `${board.catalogId} is not in the catalog`}
+          {kindWord}: {entry ? entry.entry.name : "not in the catalog"}
           {type ? ` · ${type.name}` : ""}
           {supplyFigures ? ` · output ${supplyFigures.ratingMa} mA at ${supplyFigures.volts} V, battery up to ${supplyFigures.maxBatteryAh} Ah` : ""}
           {ownSupply ? " · its own supply" : ""}

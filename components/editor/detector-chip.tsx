@@ -1,7 +1,7 @@
 "use client";
 
 import { useDraggable } from "@dnd-kit/core";
-import type { KeyboardEvent } from "react";
+import type { HTMLAttributes, KeyboardEvent } from "react";
 import { useEditor } from "@/components/editor/editor-context";
 import { detectorDragId } from "@/components/editor/editor-model";
 import { FindingMarker } from "@/components/editor/finding-marker";
@@ -9,8 +9,9 @@ import { voltsText } from "@/lib/solver/supply-lines";
 import { isLifeSafety } from "@/lib/catalog/life-safety";
 import { unassign } from "@/lib/layout/operations";
 
-/** What a chip shows; also drawn in the drag overlay. */
-export function ChipFace({ detectorId }: { detectorId: string }) {
+/** What a chip shows; also drawn in the drag overlay. On a chip the label is the control (`labelProps`), so its
+ * name is what it shows; the zone, the fire badge and the figures sit beside it. */
+export function ChipFace({ detectorId, labelProps }: { detectorId: string; labelProps?: HTMLAttributes<HTMLSpanElement> }) {
   const { detectorsById, ix, zones, result } = useEditor();
   const d = detectorsById.get(detectorId);
   const c = d ? ix.detectors.get(d.catalogId) : undefined;
@@ -24,12 +25,14 @@ export function ChipFace({ detectorId }: { detectorId: string }) {
             Z{zone}
           </span>
         ) : null}
-        <span className="line-clamp-2 break-words">{d?.label ?? `Unknown detector ${detectorId}`}</span>
+        <span className="line-clamp-2 break-words" {...labelProps}>
+          {d?.label ?? `Unknown detector ${detectorId}`}
+        </span>
         {c && isLifeSafety(c) ? <span className="mt-px shrink-0 rounded bg-fault px-1 text-[10px] font-semibold text-white">FIRE</span> : null}
       </span>
       {/* the cable length never gives way to a long type name: the name is cut, the length stays */}
-      <span className="flex min-w-0 gap-1 text-[11px] text-slate-500" title={`${c?.name ?? d?.catalogId ?? ""}${d ? ` · ${d.cableM} m` : ""}`}>
-        <span className="truncate">{c?.name ?? d?.catalogId}</span>
+      <span className="flex min-w-0 gap-1 text-[11px] text-slate-500" title={`${c?.name ?? "detector type not in the catalog"}${d ? ` · ${d.cableM} m` : ""}`}>
+        <span className="truncate">{c?.name ?? "detector type not in the catalog"}</span>
         {d ? <span className="shrink-0 tabular-nums" data-testid={`cable-${detectorId}`}>· {d.cableM} m</span> : null}
       </span>
       {v ? (
@@ -64,19 +67,8 @@ export function DetectorChip({ detectorId, onInput, sharedAs }: { detectorId: st
       data-testid={domId}
       className={`group flex items-center gap-1 rounded-md border bg-white px-2 py-1 text-xs shadow-sm ${isSelected ? "border-signal ring-2 ring-signal" : "border-line"} ${isDragging ? "opacity-40" : ""} ${highlighted === domId ? "ring-4 ring-warn" : ""}`}
     >
-      <div
-        ref={setNodeRef}
-        {...attributes}
-        {...listeners}
-        onKeyDown={onKeyDown}
-        onClick={() => canWrite && select(isSelected ? null : detectorId)}
-        aria-pressed={canWrite ? isSelected : undefined}
-        aria-label={`${label}${canWrite ? (isSelected ? ", selected" : "") : ""}`}
-        role="button"
-        tabIndex={0}
-        className={`min-w-0 flex-1 ${canWrite ? "cursor-grab touch-none" : "cursor-default"}`}
-      >
-        <ChipFace detectorId={detectorId} />
+      <div ref={setNodeRef} {...listeners} onKeyDown={onKeyDown} onClick={() => canWrite && select(isSelected ? null : detectorId)} className={`min-w-0 flex-1 ${canWrite ? "cursor-grab touch-none" : "cursor-default"}`}>
+        <ChipFace detectorId={detectorId} labelProps={{ ...attributes, role: "button", tabIndex: 0, "aria-pressed": canWrite ? isSelected : undefined }} />
       </div>
       {sharedAs ? (
         <span className="shrink-0 rounded border border-line px-1 text-[10px] font-semibold text-slate-600" title={`Detector ${sharedAs} of the shared input: the ${sharedAs} resistor goes across its contact`}>

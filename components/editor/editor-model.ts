@@ -8,6 +8,7 @@ import { boardName, inputName } from "@/lib/layout/names";
 import type { LayoutDocument, LayoutInput } from "@/lib/layout/schema";
 import type { SolveResult } from "@/lib/solver";
 import { PLACEMENT_WORDS, SCHEME_WORDS } from "@/lib/vocabulary/words";
+import { plural } from "@/lib/vocabulary/plural";
 
 // Pure helpers of the editor: drag items and drop targets, zone numbers, finding anchors, resistor text.
 
@@ -185,7 +186,7 @@ export function hasLifeSafety(ctx: LayoutContext): boolean {
 export function changePanel(doc: LayoutDocument, ctx: LayoutContext, panelId: string): LayoutEdit {
   const ix = indexCatalog(ctx.catalog);
   const panel = ix.panels.get(panelId);
-  if (!panel) return { ok: false, layout: doc, message: `${panelId} is not a control panel in the catalog` };
+  if (!panel) return { ok: false, layout: doc, message: "That control panel is not in the catalog" };
   if (panelId === doc.panelId) return { ok: false, layout: doc, message: `${panel.name} is already the control panel` };
   const type = ix.inputTypes.get(panel.onboardInputs.inputType);
   let freed = 0;
@@ -204,7 +205,7 @@ export function changePanel(doc: LayoutDocument, ctx: LayoutContext, panelId: st
     return e && !e.entry.families.includes(panel.family);
   }).length;
   const parts = [`Control panel changed to ${panel.name}`];
-  if (freed) parts.push(`${freed} detector${freed === 1 ? "" : "s"} back to unplaced`);
+  if (freed) parts.push(`${plural(freed, "detector")} back to unplaced`);
   if (others) parts.push(`${others} board${others === 1 ? " is" : "s are"} of another family`);
   return { ok: true, layout: { ...doc, panelId, inputs }, message: parts.join("; ") };
 }

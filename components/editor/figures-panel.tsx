@@ -5,6 +5,7 @@ import { FindingMarker } from "@/components/editor/finding-marker";
 import { Bar, SupplyFiguresItem } from "@/components/editor/supply-figures";
 import { CHECK_EDITION, CUSTOM_PROFILE_ID } from "@/lib/solver/standby-profiles";
 import { voltsText } from "@/lib/solver/supply-lines";
+import { plural } from "@/lib/vocabulary/plural";
 
 /** Capacity, bus, power and supervision figures of the live solve. */
 export function FiguresPanel() {
@@ -32,10 +33,10 @@ export function FiguresPanel() {
         <dt>Shared inputs</dt>
         <dd>
           {result.shared.inputs}
-          {result.shared.inputsSaved ? ` (${result.shared.inputsSaved} inputs saved)` : ""}
+          {result.shared.inputsSaved ? ` (${plural(result.shared.inputsSaved, "input")} saved)` : ""}
         </dd>
         <dt>Supervision coverage</dt>
-        <dd data-testid="figure-coverage">{result.coverage.share === null ? "no inputs used" : `${result.coverage.covered} of ${result.coverage.used} inputs (${Math.round(result.coverage.share * 100)} %)`}</dd>
+        <dd data-testid="figure-coverage">{result.coverage.share === null ? "no inputs used" : `${result.coverage.covered} of ${plural(result.coverage.used, "input")} (${Math.round(result.coverage.share * 100)} %)`}</dd>
       </dl>
       <h3 className="mt-3 font-semibold">Per board</h3>
       <ul className="mt-1 flex flex-col gap-1">
@@ -49,7 +50,7 @@ export function FiguresPanel() {
                   {b.inputsUsed}/{b.inputsTotal} used
                 </span>
               </span>
-              <Bar warnNearFull={false} value={b.inputsUsed} max={b.inputsTotal} label={`${b.name}: ${b.inputsUsed} of ${b.inputsTotal} inputs used`} />
+              <Bar warnNearFull={false} value={b.inputsUsed} max={b.inputsTotal} label={`${b.name}: ${b.inputsUsed} of ${plural(b.inputsTotal, "input")} used`} />
             </li>
           ))}
       </ul>
@@ -57,7 +58,7 @@ export function FiguresPanel() {
         <>
           <h3 className="mt-3 font-semibold">Data bus</h3>
           <p>
-            {result.bus.devices} of {result.bus.maxDevices} devices · addresses {result.bus.addressMin}–{result.bus.addressMax} · cable {result.bus.cableM} m of {result.bus.maxCableM} m
+            {result.bus.devices} of {plural(result.bus.maxDevices, "device")} · addresses {result.bus.addressMin}–{result.bus.addressMax} · cable {result.bus.cableM} m of {result.bus.maxCableM} m
           </p>
           {result.bus.duplicateAddresses.length ? <p className="text-fault">Address used twice: {result.bus.duplicateAddresses.join(", ")}</p> : null}
         </>

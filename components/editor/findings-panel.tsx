@@ -6,8 +6,8 @@ import { targetDomId } from "@/components/editor/editor-model";
 import { FindingGroupItem } from "@/components/editor/finding-group-item";
 import type { Severity } from "@/lib/findings";
 import { groupFindings } from "@/lib/findings-grouping";
+import { plural } from "@/lib/vocabulary/plural";
 
-const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
 
 const sections: { severity: Severity; title: string; tone: string }[] = [
   { severity: "error", title: "Errors", tone: "text-fault" },

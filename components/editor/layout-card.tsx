@@ -6,9 +6,9 @@ import type { LayoutMeta } from "@/lib/server/layouts";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { useFormat } from "@/components/format/format-provider";
+import { plural } from "@/lib/vocabulary/plural";
 import { DuplicateLayout } from "@/components/editor/duplicate-layout";
 
-const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
 
 function Counts({ c }: { c: { error: number; warning: number; note: number } }) {
   return (
@@ -37,7 +37,7 @@ export function LayoutCard({ siteId, layout: l, canWrite, onDelete, onArchive }:
   return (
     <Card className={`flex h-full flex-col gap-1 ${archived ? "opacity-80" : ""}`} data-testid={`layout-card-${l.id}`}>
       <div className="flex items-baseline justify-between gap-2">
-        <Link href={`/sites/${siteId}/layouts/${l.id}`} className="font-semibold text-signal hover:underline">
+        <Link href={`/sites/${siteId}/layouts/${l.id}`} className="font-semibold text-signal underline underline-offset-2">
           {l.name}
         </Link>
         <span className="flex gap-1">
@@ -52,7 +52,7 @@ export function LayoutCard({ siteId, layout: l, canWrite, onDelete, onArchive }:
         <Counts c={l.summary.counts} />
       </p>
       <p className="text-xs text-slate-600">
-        {l.summary.detectorsPlaced} detectors placed, {l.summary.unplaced} unplaced · {l.summary.inputsUsed} of {l.summary.inputsTotal} inputs · {l.summary.boards} boards
+        {plural(l.summary.detectorsPlaced, "detector")} placed, {l.summary.unplaced} unplaced · {l.summary.inputsUsed} of {plural(l.summary.inputsTotal, "input")} · {plural(l.summary.boards, "board")}
       </p>
       {canWrite ? <DuplicateLayout siteId={siteId} layoutId={l.id} name={l.name} /> : null}
       {canWrite ? (

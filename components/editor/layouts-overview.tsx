@@ -10,6 +10,7 @@ import { Card } from "@/components/ui/card";
 import { Field } from "@/components/ui/field";
 import { LayoutCard } from "@/components/editor/layout-card";
 import { useFormat } from "@/components/format/format-provider";
+import { plural } from "@/lib/vocabulary/plural";
 
 interface PanelChoice {
   id: string;
@@ -19,7 +20,6 @@ interface PanelChoice {
   listPrice: number;
 }
 
-const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
 
 function Counts({ c }: { c: { error: number; warning: number; note: number } }) {
   return (
@@ -163,7 +163,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
                 <select name="panelId" className="mt-1 block w-full rounded-md border border-line bg-white px-3 py-2">
                   {panels.map((p) => (
                     <option key={p.id} value={p.id}>
-                      {p.name} — {p.inputs} inputs, {p.maxZones} zones, {money(p.listPrice)}
+                      {p.name} — {plural(p.inputs, "input")}, {plural(p.maxZones, "zone")}, {money(p.listPrice)}
                     </option>
                   ))}
                 </select>
@@ -176,7 +176,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
           <Card className="lg:col-span-2">
             <h2 className="font-semibold">Suggest hardware</h2>
             <p className="mt-1 text-sm text-slate-600">
-              The cheapest catalog hardware that carries all {detectorCount} detectors of the device schedule without errors: once with one detector per input, once letting detectors that allow it share an input.
+              The cheapest catalog hardware that carries {detectorCount === 1 ? "the one detector" : `all ${plural(detectorCount, "detector")}`} of the device schedule without errors: once with one detector per input, once letting detectors that allow it share an input.
             </p>
             <Button className="mt-3" variant="secondary" disabled={busy || detectorCount === 0} onClick={suggest}>
               {busy && !suggestions ? "Working…" : "Suggest hardware"}

@@ -3,8 +3,8 @@
 import { useRevisions } from "@/lib/client/use-revisions";
 import { Button } from "@/components/ui/button";
 import { useFormat } from "@/components/format/format-provider";
+import { plural } from "@/lib/vocabulary/plural";
 
-const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
 
 /** The layout's history, newest first; restoring makes a new revision with the old document. */
 export function RevisionDrawer({ layoutId, currentRevision, canWrite, busy, onRestore, onClose }: { layoutId: number; currentRevision: number; canWrite: boolean; busy: boolean; onRestore: (revision: number) => void; onClose: () => void }) {
@@ -41,7 +41,7 @@ export function RevisionDrawer({ layoutId, currentRevision, canWrite, busy, onRe
               </p>
               <p className="mt-1 text-xs">
                 <span className="text-fault">{plural(r.summary.counts.error, "error")}</span> · <span className="text-warn">{plural(r.summary.counts.warning, "warning")}</span> · {plural(r.summary.counts.note, "note")} · {r.summary.detectorsPlaced} placed, {r.summary.unplaced} unplaced ·{" "}
-                {r.summary.inputsUsed}/{r.summary.inputsTotal} inputs
+                {r.summary.inputsUsed} of {plural(r.summary.inputsTotal, "input")}
               </p>
               {canWrite && r.revision !== currentRevision ? (
                 <Button variant="secondary" className="mt-2" disabled={busy} onClick={() => onRestore(r.revision)}>

@@ -6,6 +6,7 @@ import { changePanel } from "@/components/editor/editor-model";
 import { addBoard } from "@/lib/layout/operations";
 import type { BoardKind, LayoutPower } from "@/lib/layout/schema";
 import { CUSTOM_PROFILE_ID, safetyFactors, standbyProfile, standbyProfiles } from "@/lib/solver";
+import { plural } from "@/lib/vocabulary/plural";
 
 /** Hardware choices that are not drag and drop: the panel, adding boards, power and bus settings. */
 export function SettingsPanel() {
@@ -14,8 +15,8 @@ export function SettingsPanel() {
   const family = panel?.family;
   const choices: { kind: BoardKind; id: string; name: string; detail: string; onBus: boolean }[] = family
     ? [
-        ...ctx.catalog.expansionBoards.filter((b) => b.families.includes(family)).map((b) => ({ kind: "expansion" as const, id: b.id, name: b.name, detail: `${b.inputs.count} inputs`, onBus: b.takesBusAddress })),
-        ...ctx.catalog.keypads.filter((b) => b.families.includes(family)).map((b) => ({ kind: "keypad" as const, id: b.id, name: b.name, detail: b.inputs ? `keypad, ${b.inputs.count} inputs` : "keypad", onBus: b.takesBusAddress })),
+        ...ctx.catalog.expansionBoards.filter((b) => b.families.includes(family)).map((b) => ({ kind: "expansion" as const, id: b.id, name: b.name, detail: plural(b.inputs.count, "input"), onBus: b.takesBusAddress })),
+        ...ctx.catalog.keypads.filter((b) => b.families.includes(family)).map((b) => ({ kind: "keypad" as const, id: b.id, name: b.name, detail: b.inputs ? `keypad, ${plural(b.inputs.count, "input")}` : "keypad", onBus: b.takesBusAddress })),
         ...ctx.catalog.powerSupplies.filter((b) => b.families.includes(family)).map((b) => ({ kind: "supply" as const, id: b.id, name: b.name, detail: `${b.outputMa} mA supply`, onBus: b.takesBusAddress })),
       ]
     : [];
@@ -37,7 +38,7 @@ export function SettingsPanel() {
         <select className="mt-1 block w-full rounded border border-line px-2 py-1" value={doc.panelId} disabled={!canWrite} onChange={(e) => apply(changePanel(doc, ctx, e.target.value))}>
           {ctx.catalog.panels.map((p) => (
             <option key={p.id} value={p.id}>
-              {p.name} ({p.onboardInputs.count} inputs, {p.maxZones} zones)
+              {p.name} ({plural(p.onboardInputs.count, "input")}, {plural(p.maxZones, "zone")})
             </option>
           ))}
         </select>

@@ -21,7 +21,7 @@ export function BandStrip({ bands, minOhms, maxOhms, nominalOhms }: { bands: rea
   const a = has ? x(minOhms!) : 0;
   const b = has ? x(maxOhms!) : 0;
   return (
-    <svg viewBox={`0 0 ${W} 72`} className="w-full" role="img" aria-label={`Report bands over ohms${has ? `, with the reading marked` : ""}`}>
+    <svg viewBox={`0 0 ${W} 72`} className="w-full" role="img" aria-label={`Report bands over ohms: ${bands.map((band) => `${reportWord(band.report)} ${formatOhms(band.fromOhms)} to ${band.toOhms === null ? "∞" : formatOhms(band.toOhms)}`).join("; ")}${has ? `; the reading ${formatOhms(minOhms!)} to ${formatOhms(maxOhms!)} is marked` : ""}`}>
       {bands.map((band, i) => {
         const x0 = x(Math.max(band.fromOhms, LO));
         const x1 = band.toOhms === null ? W : x(band.toOhms);
@@ -31,9 +31,14 @@ export function BandStrip({ bands, minOhms, maxOhms, nominalOhms }: { bands: rea
             <rect x={x0} y={y0} width={Math.max(w, 0.5)} height={h} fill={REPORT_FILL[band.report]} stroke="#fff" strokeWidth={1}>
               <title>{`${reportWord(band.report)}: ${formatOhms(band.fromOhms)} to ${band.toOhms === null ? "∞" : formatOhms(band.toOhms)}`}</title>
             </rect>
+            {/* a band too narrow for its word carries its first letter, so the colour is never the only sign */}
             {w > 46 ? (
               <text x={x0 + w / 2} y={y0 + h / 2 + 4} textAnchor="middle" fontSize={10.5} fontWeight={600} fill={band.report === "trouble" ? "#7a1a12" : "#fff"}>
                 {reportWord(band.report).replace(" (alarm)", "")}
+              </text>
+            ) : w > 9 ? (
+              <text x={x0 + w / 2} y={y0 + h / 2 + 4} textAnchor="middle" fontSize={10} fontWeight={600} fill={band.report === "trouble" ? "#7a1a12" : "#fff"} aria-hidden>
+                {reportWord(band.report).charAt(0).toUpperCase()}
               </text>
             ) : null}
           </g>

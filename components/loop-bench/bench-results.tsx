@@ -28,15 +28,15 @@ function Card({ title, children, testId, className = "" }: { title: string; chil
 export function BenchResults({ bench }: { bench: Bench }) {
   const { s, update, inputType, loop, analysis, states, reading, conductor } = bench;
   return (
-    <div className="grid min-w-0 content-start gap-4">
+    <div className="grid min-w-0 grid-cols-[minmax(0,1fr)] content-start gap-4">
       {bench.lifeSafety ? (
         <Caution testId="life-safety-caution" summary={<><strong className="text-warn">Life-safety devices:</strong> an aid, not an approval; the local fire code and the authority having jurisdiction decide.</>}>
           {LIFE_SAFETY_CAUTION} Installation and certification are for licensed people.
         </Caution>
       ) : null}
 
-      <section className="overflow-x-auto rounded-lg border border-line bg-white p-3 shadow-sm">
-        <h2 className="sr-only">The loop as wired</h2>
+      <section className="relative overflow-x-auto rounded-lg border border-line bg-white p-3 shadow-sm" tabIndex={0} aria-labelledby="bench-schematic-title">
+        <h2 id="bench-schematic-title" className="sr-only">The loop as wired</h2>
         <LoopSchematic loop={loop} states={states} fault={s.fault} inputType={inputType} readingText={reading ? formatOhms(reading.nominalOhms) : "–"} className="w-full" conductorFault={s.conductor ? (conductor?.fault ?? null) : undefined} />
       </section>
 

@@ -12,9 +12,9 @@ import { DetectorFaultControls, InputWiringControls } from "./wiring-controls";
 export function LoopBench({ inputTypes }: { inputTypes: InputType[] }) {
   const bench = useBench(inputTypes);
   return (
-    <div className="grid gap-6 lg:grid-cols-[22rem_minmax(0,1fr)]" data-testid="loop-bench">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[22rem_minmax(0,1fr)]" data-testid="loop-bench">
       {/* controls */}
-      <div className="grid content-start gap-4">
+      <div className="grid min-w-0 grid-cols-[minmax(0,1fr)] content-start gap-4">
         <InputWiringControls bench={bench} inputTypes={inputTypes} />
         <DetectorFaultControls bench={bench} />
         <ConductorFaultControls bench={bench} />

@@ -55,7 +55,7 @@ export function StatesTable({ rows, detectors, current, onSelect }: { rows: read
                     </th>
                   )}
                   <td className="py-1.5 pr-3">
-                    <button type="button" className="whitespace-nowrap text-left hover:text-signal hover:underline" onClick={() => onSelect([...r.states], r.fault)} aria-label={`Show on the bench: ${r.label}`}>
+                    <button type="button" className="whitespace-nowrap text-left hover:text-signal underline underline-offset-2" onClick={() => onSelect([...r.states], r.fault)} aria-label={`${r.fault === "none" ? "none" : FAULT_CHOICES[r.fault]}: show on the bench (${r.label})`}>
                       {r.fault === "none" ? "none" : FAULT_CHOICES[r.fault]}
                     </button>
                   </td>

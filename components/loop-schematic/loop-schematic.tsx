@@ -9,6 +9,7 @@ import { CoreOverlay } from "./core-overlay";
 import { PLACEMENT_WORDS, SCHEME_WORDS } from "@/lib/vocabulary/words";
 import { schematicModel, type ContactEl, type ParallelEl, type ResistorEl, type Rung, type SeriesEl } from "./schematic-model";
 import { ContactH, ContactV, Dot, FAULT, INK, MUTED, ResistorH, ResistorV, WARN } from "./symbols";
+import { plural, pluralWord } from "@/lib/vocabulary/plural";
 
 export interface LoopSchematicProps {
   loop: LoopSpec;
@@ -81,7 +82,7 @@ function Parallel({ p, x, yA, tol }: { p: ParallelEl; x: number; yA: number; tol
 function describe(loop: LoopSpec, states: readonly DetectorState[], fault: Fault): string {
   const where = loop.scheme === "none" ? SCHEME_WORDS.none : PLACEMENT_WORDS[loop.placement];
   const f = fault === "none" ? "no fault" : FAULT_WORDS[fault];
-  return `${SCHEME_WORDS[loop.scheme]} loop, ${where}, ${loop.detectors.length} detector${loop.detectors.length > 1 ? "s" : ""} (${statesLabel(loop.detectors, states)}), ${f}; cable ${loop.cable.lengthM} m of ${gaugeText(loop)}.`;
+  return `${SCHEME_WORDS[loop.scheme]} loop, ${where}, ${plural(loop.detectors.length, "detector")} (${statesLabel(loop.detectors, states)}), ${f}; cable ${loop.cable.lengthM} m of ${gaugeText(loop)}.`;
 }
 
 export function LoopSchematic({ loop, states: given, fault = "none", inputType, readingText, className, conductorFault }: LoopSchematicProps) {
@@ -159,7 +160,7 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
       ) : null}
       <rect x={FX - 16} y={yA - 60} width={width - FX + 8} height={(loopBack ? bottom - 10 : yB + 48) - (yA - 60)} rx={8} fill="none" stroke="#b9b4a6" strokeDasharray="5 4" />
       <text x={FX - 8} y={yA - 42} fontSize={12.5} fontWeight={600} fill={MUTED}>
-        at the detector{loop.detectors.length > 1 ? "s" : ""}
+        at the {pluralWord(loop.detectors.length, "detector")}
       </text>
 
       {/* meter across the input terminals */}

@@ -14,6 +14,7 @@ import { useReview } from "@/lib/client/use-review";
 import { DECISION_WORDS, STEP_HINTS, STEP_LABELS } from "@/components/review/review-words";
 import { Comments } from "@/components/review/review-comments";
 import { useFormat } from "@/components/format/format-provider";
+import { plural } from "@/lib/vocabulary/plural";
 
 export interface ReviewSummary {
   counts: { error: number; warning: number; note: number };
@@ -154,7 +155,7 @@ export function ReviewPanel({ initial, summary, boards, canComment, lifeSafety }
               <div>
                 <dt className="text-slate-500">Findings</dt>
                 <dd className="font-semibold tabular-nums">
-                  <span className="text-fault">{summary.counts.error} errors</span>, <span className="text-warn">{summary.counts.warning} warnings</span>, {summary.counts.note} notes
+                  <span className="text-fault">{plural(summary.counts.error, "error")}</span>, <span className="text-warn">{plural(summary.counts.warning, "warning")}</span>, {plural(summary.counts.note, "note")}
                 </dd>
               </div>
               <div>

@@ -12,6 +12,7 @@ import { UnknownPlaces } from "@/components/schedule/unknown-places";
 import { Button } from "@/components/ui/button";
 import { LongText } from "@/components/ui/long-text";
 import { siteAreasOf, supervisionLabels, type DetectorType } from "@/components/schedule/schedule-labels";
+import { plural } from "@/lib/vocabulary/plural";
 
 /** Upload a CSV file, see every row and every problem with its row number, and only then store it. */
 export function CsvImport({ siteId, types, onImported }: { siteId: number; types: DetectorType[]; onImported: (count: number) => void }) {
@@ -79,10 +80,10 @@ export function CsvImport({ siteId, types, onImported }: { siteId: number; types
       {preview ? (
         <div className="mt-3" data-testid="import-preview">
           <p className="text-sm" role="status">
-            {file?.name}: {preview.rows.length} row{preview.rows.length === 1 ? "" : "s"} ready
+            {file?.name}: {plural(preview.rows.length, "row")} ready
             {preview.errors.length ? (
               <span className="font-medium text-fault">
-                , {preview.errors.length} problem{preview.errors.length === 1 ? "" : "s"} in {errorsByRow.size} row{errorsByRow.size === 1 ? "" : "s"} — correct the file and choose it again; nothing will be imported while there are problems.
+                , {plural(preview.errors.length, "problem")} in {plural(errorsByRow.size, "row")} — correct the file and choose it again; nothing will be imported while there are problems.
               </span>
             ) : (
               "."
@@ -138,7 +139,7 @@ export function CsvImport({ siteId, types, onImported }: { siteId: number; types
           <div className="mt-3 flex gap-2">
             <Button onClick={confirm} disabled={busy || preview.errors.length > 0 || preview.rows.length === 0 || (preview.unknownPlaces.length > 0 && !addPlaces)}>
               {preview.unknownPlaces.length && addPlaces ? `Add ${preview.unknownPlaces.length} and import ` : "Import "}
-              {preview.rows.length} detector{preview.rows.length === 1 ? "" : "s"}
+              {plural(preview.rows.length, "detector")}
             </Button>
             <Button variant="secondary" onClick={() => (setFile(null), setPreview(null))}>
               Cancel

@@ -11,6 +11,7 @@ import { scheduleRows, type ScheduleSort } from "@/components/schedule/schedule-
 import { ScheduleTable } from "@/components/schedule/schedule-table";
 import { supervisionLabels, type DetectorType, type SiteArea } from "@/components/schedule/schedule-labels";
 import { useScheduleEdits } from "@/components/schedule/use-schedule-edits";
+import { plural } from "@/lib/vocabulary/plural";
 
 /** The device schedule: a sortable, filterable table with add, edit, bulk edit, CSV import and export. */
 export function ScheduleManager({ siteId, initial, types, areas, canWrite }: { siteId: number; initial: ScheduleDetector[]; types: DetectorType[]; areas: SiteArea[]; canWrite: boolean }) {
@@ -47,7 +48,7 @@ export function ScheduleManager({ siteId, initial, types, areas, canWrite }: { s
           </select>
         </label>
         <p className="text-sm text-slate-600" aria-live="polite">
-          {rows.length} of {detectors.length} detectors shown{sort ? "" : ", in schedule order"}
+          {rows.length} of {plural(detectors.length, "detector")} shown{sort ? "" : ", in schedule order"}
           {sort ? (
             <button type="button" className="ml-2 text-signal underline" onClick={() => setSort(null)}>
               schedule order
@@ -104,7 +105,7 @@ export function ScheduleManager({ siteId, initial, types, areas, canWrite }: { s
           onClear={() => setSelected(new Set())}
           onApply={(patch) => void edits.patchMany([...selected], patch)}
           onDelete={() => {
-            if (!window.confirm(`Delete ${selected.size} detectors from the schedule? Layouts that place them will lose them at their next opening.`)) return;
+            if (!window.confirm(`Delete ${plural(selected.size, "detector")} from the schedule? Layouts that place them will lose them at their next opening.`)) return;
             void edits.deleteMany([...selected], () => setSelected(new Set()));
           }}
         />

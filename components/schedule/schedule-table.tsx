@@ -34,7 +34,7 @@ export function ScheduleTable(props: ScheduleTableProps) {
   const span = SCHEDULE_COLUMNS.length + 2;
 
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-white">
+    <div className="relative overflow-x-auto rounded-lg border border-line bg-white">
       <table className="w-full text-sm" data-testid="schedule-table">
         <caption className="sr-only">Device schedule; select a column heading to sort</caption>
         <thead className="text-left text-slate-600">
@@ -106,7 +106,7 @@ export function ScheduleTable(props: ScheduleTableProps) {
                 <td className="px-2 py-1.5">{supervisionLabels[d.supervision]}</td>
                 {canWrite ? (
                   <td className="px-2 py-1.5 text-right">
-                    <button type="button" className="text-signal hover:underline" onClick={() => onEdit(d.id)} aria-label={`Edit ${d.label}`}>
+                    <button type="button" className="text-signal underline underline-offset-2" onClick={() => onEdit(d.id)} aria-label={`Edit ${d.label}`}>
                       Edit
                     </button>
                   </td>

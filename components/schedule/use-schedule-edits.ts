@@ -4,6 +4,7 @@ import { useState } from "react";
 import type { BulkEditPatch, ScheduleDetector } from "@/lib/schedule/schema";
 import { describeError, FetchError, sendJson } from "@/lib/client/fetcher";
 import { useSchedule } from "@/lib/client/use-schedule";
+import { plural } from "@/lib/vocabulary/plural";
 
 // The device schedule as read through its SWR hook, and every change to it: each one says what it did (or
 // why it was refused) in the message line, then the schedule is read again.
@@ -35,7 +36,7 @@ export function useScheduleEdits(siteId: number, initial: ScheduleDetector[]) {
     message,
     add: (v: Values) => run(async () => (await sendJson<ScheduleDetector>(url, "POST", v), `${v.label} added.`)),
     save: (d: ScheduleDetector, v: Values) => run(async () => (await sendJson(`${url}/${d.id}`, "PATCH", v), `${v.label} saved.`)),
-    patchMany: (ids: string[], patch: BulkEditPatch["patch"]) => run(async () => (await sendJson(url, "PATCH", { ids, patch }), `${ids.length} detectors changed.`)),
+    patchMany: (ids: string[], patch: BulkEditPatch["patch"]) => run(async () => (await sendJson(url, "PATCH", { ids, patch }), `${plural(ids.length, "detector")} changed.`)),
     deleteMany: (ids: string[], then: () => void) =>
       run(async () => {
         let r: { deleted: number; approvedLayouts: { name: string }[] };
@@ -48,11 +49,11 @@ export function useScheduleEdits(siteId: number, initial: ScheduleDetector[]) {
         }
         then();
         const kept = r.approvedLayouts.length ? ` The approved layouts (${r.approvedLayouts.map((u) => u.name).join(", ")}) keep them as approved.` : "";
-        return `${r.deleted} detectors deleted.${kept}`;
+        return `${plural(r.deleted, "detector")} deleted.${kept}`;
       }),
     /** After a CSV import (it has its own preview and confirm requests). */
     imported: (n: number) => {
-      setMessage({ kind: "ok", text: `${n} detector${n === 1 ? "" : "s"} imported.` });
+      setMessage({ kind: "ok", text: `${plural(n, "detector")} imported.` });
       void mutate();
     },
   };

@@ -10,6 +10,7 @@ import { SheetBoardIndex, boardAnchor } from "@/components/sheet/sheet-board-ind
 import { SheetBoardPrint } from "@/components/sheet/sheet-board-print";
 import { SheetPrintStyle } from "@/components/sheet/sheet-print-style";
 import { SheetToolbar } from "@/components/sheet/sheet-toolbar";
+import { plural } from "@/lib/vocabulary/plural";
 
 export interface TerminalSheetViewProps {
   view: SheetView;
@@ -35,7 +36,7 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal, defau
       <header className="sheet-head mb-3">
         <h2 className="break-words text-xl font-semibold">Terminal sheet — {meta.siteName}</h2>
         <p className="text-sm">
-          Layout “{meta.layoutName}”, revision {meta.revision} · {sheet.panel ? sheet.panel.name : "no control panel"} · {sheet.zoneCount} zones on {sheet.boards.length} board{sheet.boards.length === 1 ? "" : "s"} · generated {meta.generatedAt}
+          Layout “{meta.layoutName}”, revision {meta.revision} · {sheet.panel ? sheet.panel.name : "no control panel"} · {plural(sheet.zoneCount, "zone")} on {plural(sheet.boards.length, "board")} · generated {meta.generatedAt}
         </p>
         {view.approved ? (
           <p className="mt-1 text-sm font-semibold text-signal" data-testid="sheet-approval">

@@ -61,14 +61,14 @@ export function billOfMaterials(layout: LayoutDocument, schedule: Schedule, cata
   const notes: string[] = [];
   const panel = ix.panels.get(layout.panelId);
   if (panel) add(lines, { kind: "panel", key: panel.id, catalogId: panel.id, description: panel.name, quantity: 1, unitPrice: panel.listPrice, note: null });
-  else notes.push(`Control panel ${layout.panelId} is not in the catalog: left out.`);
+  else notes.push("The control panel chosen is not in the catalog: left out.");
 
   const typeOf = new Map<string, InputType | undefined>();
   if (panel) typeOf.set(PANEL_KEY, ix.inputTypes.get(panel.onboardInputs.inputType));
   for (const b of layout.boards) {
     const e = boardEntry(ix, b.kind, b.catalogId);
     if (!e) {
-      notes.push(`Board ${b.label ?? b.key} (${b.catalogId}) is not in the catalog: left out.`);
+      notes.push(`${b.label ?? "A board"}: its hardware is not in the catalog: left out.`);
       continue;
     }
     add(lines, { kind: b.kind, key: e.entry.id, catalogId: e.entry.id, description: e.entry.name, quantity: 1, unitPrice: e.entry.listPrice, note: null });
@@ -82,7 +82,7 @@ export function billOfMaterials(layout: LayoutDocument, schedule: Schedule, cata
   for (const d of schedule) {
     const cat = ix.detectors.get(d.catalogId);
     if (!cat) {
-      notes.push(`${d.label}: detector type ${d.catalogId} is not in the catalog: left out.`);
+      notes.push(`${d.label}: its detector type is not in the catalog: left out.`);
       continue;
     }
     if (isLifeSafety(cat)) lifeSafety = true;

@@ -1,5 +1,6 @@
 // The one way to talk to the API from the browser: JSON (or a multipart form) in, JSON out, and a thrown
 // FetchError for anything but 2xx. SWR hooks use `fetcher`; every mutation uses `sendJson` or `sendForm`.
+import { withFieldLabel } from "@/lib/vocabulary/field-labels";
 
 export interface ApiIssue {
   path: string;
@@ -82,7 +83,7 @@ export function sendForm<T = unknown>(url: string, form: FormData, method: Metho
 /** The error sentence with the field issues, for a message line. */
 export function describeError(e: unknown): string {
   if (e instanceof FetchError) {
-    const issues = e.issues.map((i) => (i.path && i.path !== "(body)" ? `${i.path}: ${i.message}` : i.message)).filter(Boolean);
+    const issues = e.issues.map((i) => (i.path && i.path !== "(body)" ? withFieldLabel(i.path, i.message) : i.message)).filter(Boolean);
     return issues.length ? `${e.message} ${issues.join("; ")}` : e.message;
   }
   return e instanceof Error ? e.message : String(e);

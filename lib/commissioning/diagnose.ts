@@ -7,6 +7,7 @@ import { closestPreferred } from "@/lib/resistors/e-series";
 import { formatOhms } from "@/lib/resistors/format-ohms";
 import type { ExpectedReading, SheetInput, TestKey } from "@/lib/sheet/sheet-types";
 import { rangeText } from "@/lib/sheet/test-readings";
+import type { DiagnosisCode } from "@/lib/finding-codes";
 
 // A commissioning reading against the loop's expected readings: pass or fail, which other test it looks like,
 // and what is probably wrong, in plain words. The diagnosis rules are trade rules of thumb.
@@ -41,19 +42,7 @@ export interface DiagnoseOptions {
   usualValues?: UsualValue[];
 }
 
-export type DiagnosisCode =
-  | "resistor-not-at-end"
-  | "open-at-rest"
-  | "open-at-rest-across"
-  | "resistor-across-contact-missing"
-  | "open-on-short-test"
-  | "open-unexpected"
-  | "near-zero-at-rest"
-  | "reads-as-other-test"
-  | "double-value"
-  | "slightly-high"
-  | "wrong-resistor"
-  | "closed-when-open-expected";
+export type { DiagnosisCode };
 
 export interface Diagnosis {
   code: DiagnosisCode;

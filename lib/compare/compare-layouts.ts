@@ -7,6 +7,7 @@ import type { Schedule } from "@/lib/schedule/schema";
 import { severityRank, type Severity } from "@/lib/findings";
 import { createSolver } from "@/lib/solver";
 import { isLifeSafety } from "@/lib/solver/resolve";
+import { plural } from "@/lib/vocabulary/plural";
 
 // Side by side: what each candidate layout costs, how many inputs it uses and leaves, what each supply carries,
 // how much of it is supervised, what the solver found, and what each shared input trades away.
@@ -153,9 +154,9 @@ export function compareLayouts(candidates: readonly CompareCandidate[], schedule
     for (const c of columns) if (c !== cheapest && c.cost !== cheapest.cost) summary.push(`${c.name} costs ${money(c.cost - cheapest.cost)} more than ${cheapest.name} (${money(c.cost)} against ${money(cheapest.cost)}).`);
   }
   for (const c of columns) {
-    summary.push(`${c.name}: ${c.inputs.used} of ${c.inputs.total} inputs used, ${c.inputs.spare} spare; supervision coverage ${pct(c.coverage.share)}; ${c.findings.error} error${c.findings.error === 1 ? "" : "s"}, ${c.findings.warning} warning${c.findings.warning === 1 ? "" : "s"}.`);
+    summary.push(`${c.name}: ${c.inputs.used} of ${c.inputs.total} inputs used, ${c.inputs.spare} spare; supervision coverage ${pct(c.coverage.share)}; ${plural(c.findings.error, "error")}, ${plural(c.findings.warning, "warning")}.`);
     if (c.notRanked) summary.push(`${c.name} is ${c.notRanked}, so it is not marked best on any measure until that is put right.`);
-    if (c.shared.length) summary.push(`${c.name} saves ${c.shared.length} input${c.shared.length === 1 ? "" : "s"} by sharing: ${c.shared.map((s) => s.text).join(" ")}`);
+    if (c.shared.length) summary.push(`${c.name} saves ${plural(c.shared.length, "input")} by sharing: ${c.shared.map((s) => s.text).join(" ")}`);
   }
   const inputs = [{ schedule, catalog }, ...candidates.flatMap((c) => (c.frozen ? [c.frozen] : []))];
   const lifeSafety = inputs.some((x) =>

@@ -4,6 +4,9 @@ import type { Schedule, ScheduleDetector, SupervisionPreference } from "@/lib/sc
 import { boardEntry, boardInputs, indexCatalog, type CatalogIndex } from "@/lib/layout/catalog-index";
 import { boardName, inputName } from "@/lib/layout/names";
 import { PANEL_KEY, type BoardKind, type InputRef, type LayoutBoard, type LayoutDocument, type LayoutInput } from "@/lib/layout/schema";
+import { plural } from "@/lib/vocabulary/plural";
+import { BOARD_KIND_WORDS, PLACEMENT_WORDS, SCHEME_WORDS } from "@/lib/vocabulary/words";
+import { formatOhms } from "@/lib/resistors/format-ohms";
 
 // Pure editor operations. Each returns a new document (the old one is untouched) and one sentence
 // describing the change, for the screen-reader announcement. A refused edit returns the same document.
@@ -163,11 +166,13 @@ export function makeShared(doc: LayoutDocument, ctx: LayoutContext, detectorId: 
   return done({ ...base, inputs }, `${det.label} shares ${inputName(doc, to)} with ${label(ctx, other)}`);
 }
 
+const RESISTOR_WORDS = { eolOhms: "end-of-line resistor", alarmOhms: "alarm resistor", sharedOhms: "shared input resistors" } as const;
+
 /** Add a board at the end, with the lowest free bus address when it takes one. */
 export function addBoard(doc: LayoutDocument, ctx: LayoutContext, kind: BoardKind, catalogId: string, boardLabel?: string, busRunM?: number): LayoutEdit {
   const ix = indexCatalog(ctx.catalog);
   const entry = boardEntry(ix, kind, catalogId);
-  if (!entry) return refuse(doc, `${catalogId} is not a ${kind === "supply" ? "power supply" : kind === "keypad" ? "keypad" : "expansion board"} in the catalog`);
+  if (!entry) return refuse(doc, `That ${BOARD_KIND_WORDS[kind]} is not in the catalog`);
   const keys = new Set(doc.boards.map((b) => b.key));
   let n = doc.boards.length + 1;
   for (let k = 1; ; k++)
@@ -212,8 +217,8 @@ export function removeBoard(doc: LayoutDocument, ctx: LayoutContext, boardKey: s
       return rest;
     });
   const parts = [`${name} removed`];
-  if (freed) parts.push(`${freed} detector${freed === 1 ? "" : "s"} back to unplaced`);
-  if (repowered) parts.push(`${repowered} board${repowered === 1 ? "" : "s"} now on the panel's auxiliary output`);
+  if (freed) parts.push(`${plural(freed, "detector")} back to unplaced`);
+  if (repowered) parts.push(`${plural(repowered, "board")} now on the panel's auxiliary output`);
   return done({ ...doc, boards, inputs: doc.inputs.filter((i) => i.boardKey !== boardKey) }, parts.join("; "));
 }
 
@@ -271,12 +276,16 @@ export function setInputWiring(doc: LayoutDocument, ctx: LayoutContext, at: Inpu
     else if (v !== undefined) (next as Record<string, unknown>)[k] = v;
   }
   const type = inputBlockOf(doc, indexCatalog(ctx.catalog), at.boardKey)?.inputType;
-  if (type && !type.schemes.includes(next.scheme)) return refuse(doc, `${inputName(doc, at)} does not support ${next.scheme}`);
+  if (type && !type.schemes.includes(next.scheme)) return refuse(doc, `${inputName(doc, at)} does not take ${SCHEME_WORDS[next.scheme]} wiring`);
   const inputs = doc.inputs.slice();
   inputs[i] = next;
   const bits: string[] = [];
-  if (patch.scheme) bits.push(patch.scheme);
-  if (patch.placement) bits.push(`resistors ${patch.placement}`);
-  for (const k of ["eolOhms", "alarmOhms", "sharedOhms"] as const) if (patch[k] !== undefined) bits.push(patch[k] === null ? `${k.replace("Ohms", "")} resistor as expected` : `${k.replace("Ohms", "")} ${JSON.stringify(patch[k])} Ω`);
+  if (patch.scheme) bits.push(SCHEME_WORDS[patch.scheme]);
+  if (patch.placement) bits.push(PLACEMENT_WORDS[patch.placement]);
+  for (const k of ["eolOhms", "alarmOhms", "sharedOhms"] as const) {
+    const v = patch[k];
+    if (v === undefined) continue;
+    bits.push(v === null ? `${RESISTOR_WORDS[k]} as the input type expects` : `${RESISTOR_WORDS[k]} ${(Array.isArray(v) ? v : [v]).map(formatOhms).join(" and ")}`);
+  }
   return done({ ...doc, inputs }, `${inputName(doc, at)} wiring set: ${bits.join(", ") || "no change"}`);
 }

@@ -11,6 +11,7 @@ import { buildFindings } from "./loop-findings";
 import { resistorUses } from "./resistor-uses";
 import { attachWiring, wiringProblems } from "./wiring-analysis";
 import type { Fault, LoopAnalysis, LoopSpec, Reading } from "./types";
+import { withFieldLabel } from "@/lib/vocabulary/field-labels";
 
 const LAYOUT: FindingTarget = { kind: "layout" };
 function expectedFor(m: LoopModel, code: Uint8Array): Report {
@@ -34,7 +35,7 @@ function invalidAnalysis(problems: LoopProblem[], target: FindingTarget): LoopAn
     findings: problems.map((p) => ({
       code: "loop-invalid",
       severity: "error",
-      message: `${p.path.join(".") || "loop"}: ${p.message}`,
+      message: withFieldLabel(p.path, p.message),
       why: "The loop as described can't be wired or measured, so nothing about its supervision can be said until this is fixed.",
       target,
     })),

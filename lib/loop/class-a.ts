@@ -18,8 +18,8 @@ export function classAProblems(loop: LoopSpec): ConductorProblem[] {
   if (loop.scheme !== "single-eol" && loop.scheme !== "double-eol") out.push({ path: ["pathway"], message: "a Class A loop needs an end-of-line scheme (single or double end-of-line)" });
   if (loop.detectors.some((d) => d.contact !== "NO")) out.push({ path: ["pathway"], message: "a Class A loop puts each detector's normally open contact across the pair; normally closed contacts in series can't be fed from both ends" });
   if (loop.detectors.some((d) => d.tamper)) out.push({ path: ["pathway"], message: "tamper contacts in series don't belong on a Class A loop; wire them to their own input" });
-  if (loop.placement !== "at-detector") out.push({ path: ["placement"], message: "on a Class A loop the end of the line is the panel's return terminals: leave placement at-detector" });
-  if (loop.cores !== undefined && loop.cores !== "two-core") out.push({ path: ["cores"], message: "a Class A loop is one pair out and back (cores: two-core)" });
+  if (loop.placement !== "at-detector") out.push({ path: ["placement"], message: "on a Class A loop the end of the line is the panel's return terminals: keep the resistor at the detector" });
+  if (loop.cores !== undefined && loop.cores !== "two-core") out.push({ path: ["cores"], message: "a Class A loop is one pair out and back: choose a two-core cable" });
   return out;
 }
 

@@ -44,15 +44,15 @@ export interface ConductorProblem {
 function hasPart(loop: LoopSpec, part: LoopPart, detector: number | undefined): string | null {
   const n = loop.detectors.length;
   if (part === "contact" || part === "tamper") {
-    if (detector === undefined) return `a short across a ${part === "contact" ? "contact" : "tamper contact"} needs the detector's index`;
-    if (!Number.isInteger(detector) || detector < 0 || detector >= n) return `there is no detector ${detector} on this loop (indices 0 to ${n - 1})`;
+    if (detector === undefined) return `a short across a ${part === "contact" ? "contact" : "tamper contact"} names its detector`;
+    if (!Number.isInteger(detector) || detector < 0 || detector >= n) return `there is no detector ${detector + 1} on this loop (it has ${n})`;
     if (part === "tamper" && !loop.detectors[detector].tamper) return `${loop.detectors[detector].label} has no tamper contact`;
     return null;
   }
-  if (detector !== undefined) return `a short across the ${part} resistor takes no detector index`;
+  if (detector !== undefined) return `a short across the ${PART_WORDS[part]} names no detector`;
   if (part === "eol" && loop.scheme === "none") return "this loop has no end-of-line resistor";
   if (part === "alarm" && loop.scheme !== "double-eol") return "only a double end-of-line loop has an alarm resistor";
-  if ((part === "shared-a" || part === "shared-b") && loop.scheme !== "shared") return "only a shared input has detector A's and B's resistors";
+  if ((part === "shared-a" || part === "shared-b") && loop.scheme !== "shared") return "only a shared input has a resistor for detector A and one for detector B";
   return null;
 }
 
@@ -62,9 +62,9 @@ export function conductorProblems(loop: LoopSpec): ConductorProblem[] {
   const cores = coresOf(loop);
   const colours = CORE_COLOURS[cores];
   if (loop.placement === "loop-back" && loop.scheme !== "none" && cores !== "four-core-loop-back")
-    out.push({ path: ["cores"], message: "a loop-back resistor is reached through a four-core loop-back cable (cores: four-core-loop-back)" });
+    out.push({ path: ["cores"], message: "a loop-back resistor is reached through a four-core loop-back cable: choose that cable" });
   if (cores === "four-core-loop-back" && (loop.placement !== "loop-back" || loop.scheme === "none"))
-    out.push({ path: ["cores"], message: "a four-core loop-back cable carries a loop-back resistor: set placement to loop-back on a scheme with resistors" });
+    out.push({ path: ["cores"], message: "a four-core loop-back cable carries a loop-back resistor: choose the loop-back resistor placement on a scheme with resistors" });
   if (cores === "four-core-alarm-tamper") {
     if (loop.placement !== "at-detector") out.push({ path: ["cores"], message: "the alarm and tamper pairs in one cable are modelled with the resistor at the detector" });
     if (!loop.detectors.some((d) => d.tamper)) out.push({ path: ["cores"], message: "a four-core alarm and tamper cable needs at least one detector with a tamper contact" });
@@ -128,8 +128,8 @@ const PART_WORDS: Record<LoopPart, string> = {
   tamper: "tamper contact",
   eol: "end-of-line resistor",
   alarm: "alarm resistor",
-  "shared-a": "detector A's resistor",
-  "shared-b": "detector B's resistor",
+  "shared-a": "resistor of detector A",
+  "shared-b": "resistor of detector B",
 };
 
 export function conductorFaultLabel(f: ConductorFault, loop: LoopSpec): string {

@@ -8,6 +8,7 @@ import type { LoopModel } from "./loop-model";
 import { REPORT_WORDS, reportsWords } from "./row-labels";
 import { acceptableFor, REPORT_BIT } from "./loop-bands";
 import type { LoopAnalysis, LoopSpec, Reading, ResistorUse } from "./types";
+import { plural, pluralWord } from "@/lib/vocabulary/plural";
 
 export const LIFE_SAFETY_CAUTION =
   "Smoke, heat and other life-safety devices are governed by local fire code: follow it, the authority having jurisdiction and licensed practice. Loopwright is an aid, not an approval.";
@@ -24,8 +25,8 @@ export interface FindingsInput {
 const ROLE_WORDS: Record<ResistorUse["role"], string> = {
   eol: "end-of-line resistor",
   alarm: "alarm resistor",
-  "shared-a": "detector A's resistor",
-  "shared-b": "detector B's resistor",
+  "shared-a": "resistor of detector A",
+  "shared-b": "resistor of detector B",
 };
 
 function reads(r: Reading): string {
@@ -173,7 +174,7 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
   if (uncertain.length)
     push(out, target, "reading-uncertain",
       "warning",
-      `${uncertain.length} reading${uncertain.length > 1 ? "s" : ""} straddle${uncertain.length > 1 ? "" : "s"} a band edge, e.g. ${reads(uncertain[0])}`,
+      `${plural(uncertain.length, "reading")} ${pluralWord(uncertain.length, "straddles", "straddle")} a band edge, e.g. ${reads(uncertain[0])}`,
       "Across the parts' tolerance and the cable's temperature range the panel could report either side of the edge; such a loop gives intermittent reports.",
     );
   if (thin)
@@ -272,7 +273,7 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
     if (scheme === "shared")
       push(out, target, "life-safety-shared", "error", `Life-safety device on a shared input: ${ls}`, `Smoke, heat and other life-safety devices must never share an input: a fault on the other detector, or on the shared cable, can silence them. ${LIFE_SAFETY_CAUTION}`);
     if (!inputType.lifeSafety)
-      push(out, target, "life-safety-input-type", "error", `Life-safety device on input type "${inputType.id}", which is not for life-safety devices: ${ls}`, `This input type is not meant to carry fire or other life-safety devices. ${LIFE_SAFETY_CAUTION}`);
+      push(out, target, "life-safety-input-type", "error", `Life-safety device on ${inputType.name}, an input type not meant for life-safety devices: ${ls}`, `This input type is not meant to carry fire or other life-safety devices. ${LIFE_SAFETY_CAUTION}`);
     const unsupervised = (["short-panel", "short-detector", "cut"] as const).filter((f) => analysis.faults[f] !== "detected");
     if (unsupervised.length)
       push(out, target, "life-safety-unsupervised",

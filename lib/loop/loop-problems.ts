@@ -1,6 +1,7 @@
 // What makes a loop description impossible to analyse. Shared by the request schema and analyzeLoop.
 import type { InputType } from "@/lib/catalog/schema";
 import type { LoopSpec } from "./types";
+import { SCHEME_WORDS } from "@/lib/vocabulary/words";
 
 export interface LoopProblem {
   /** Path inside the loop description, e.g. ["cable", "lengthM"]. */
@@ -86,8 +87,8 @@ export function inputTypeProblems(loop: LoopSpec, inputType?: InputType): LoopPr
 
   if (inputType) {
     if (!inputType.schemes.includes(loop.scheme))
-      add(out, ["scheme"], `input type "${inputType.id}" does not support the ${loop.scheme} scheme (it supports: ${inputType.schemes.join(", ")})`);
-    else if (!inputType.bands[loop.scheme]) add(out, ["scheme"], `input type "${inputType.id}" has no band table for the ${loop.scheme} scheme`);
+      add(out, ["scheme"], `${inputType.name} does not take ${SCHEME_WORDS[loop.scheme]} wiring (it takes ${inputType.schemes.map((s) => SCHEME_WORDS[s]).join(", ")})`);
+    else if (!inputType.bands[loop.scheme]) add(out, ["scheme"], `${inputType.name} has no bands for ${SCHEME_WORDS[loop.scheme]} wiring`);
   }
   return out;
 }

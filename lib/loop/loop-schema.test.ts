@@ -54,7 +54,7 @@ describe("analyze request", () => {
   it("scheme not supported by the input type, inline or looked up", () => {
     const seolOnly = { ...testInputType, id: "seol-only", schemes: ["single-eol"], bands: { "single-eol": testInputType.bands["single-eol"] } };
     const r = issues({ inputType: seolOnly, loop: { ...loop, scheme: "double-eol" } });
-    expect(r.issues.map((i) => i.message)).toContain('input type "seol-only" does not support the double-eol scheme (it supports: single-eol)');
+    expect(r.issues.map((i) => i.message)).toContain("Test input, every scheme does not take double end-of-line wiring (it takes single end-of-line)");
     const r2 = analyzeRequest({ inputType: "seol-only", loop: { ...loop, scheme: "double-eol" } }, () => seolOnly as typeof testInputType);
     expect(r2.ok).toBe(false);
     if (!r2.ok) expect(r2.issues[0]).toMatchObject({ path: "loop.scheme" });

@@ -5,6 +5,7 @@ import { analyzeClassA, classAProblems } from "./class-a";
 import { analyzeConductors, conductorFindings, conductorProblems, type ConductorProblem } from "./conductors";
 import type { LoopModel } from "./loop-model";
 import type { LoopAnalysis, LoopSpec } from "./types";
+import { reportsWords } from "./row-labels";
 
 export function wiringProblems(loop: LoopSpec): ConductorProblem[] {
   return [...conductorProblems(loop), ...classAProblems(loop)];
@@ -23,7 +24,7 @@ export function attachWiring(analysis: LoopAnalysis, loop: LoopSpec, inputType: 
       analysis.findings.push({
         code: "class-a-device-lost",
         severity: "error",
-        message: dev ? `After ${missed.label}, ${loop.detectors[dev.detector].label} active reads ${dev.reading.reports.join(" or ")} from either end, not active` : `${missed.rest.label} reads ${missed.rest.reports.join(" or ")}, not as an open or trouble`,
+        message: dev ? `After ${missed.label}, ${loop.detectors[dev.detector].label} active reads ${reportsWords(dev.reading.reports)} from either end, not active` : `${missed.rest.label} reads ${reportsWords(missed.rest.reports)}, not as an open or trouble`,
         why: "A Class A loop must keep reporting every device after a single open, fed from both ends; this one loses a device, so it is not Class A.",
         target,
       });

@@ -1,4 +1,5 @@
-import type { Permission } from "@/lib/auth/permissions";
+import { permissionTable, roleLabels, type Permission, type Role } from "@/lib/auth/permissions";
+import { plural, pluralWord } from "@/lib/vocabulary/plural";
 
 // The review life of a layout: draft → in-review → approved → commissioned.
 // An approved (or commissioned) layout is frozen: a change is saved as a new draft, the approved one stays as it was.
@@ -123,8 +124,8 @@ export function transition(from: ReviewState, action: ReviewAction, ctx: Transit
   const permission = rule.permission;
   const refuse = (code: RefusalCode, reason: string): TransitionResult => ({ ok: false, action, from, code, reason, permission });
   if (!rule.from.includes(from))
-    return refuse("wrong-state", FROM_REASONS[action]?.[from] ?? `A ${REVIEW_STATE_WORDS[from]} layout cannot ${REVIEW_ACTION_WORDS[action]}.`);
-  if (!ctx.can(permission)) return refuse("permission", `Your role cannot ${REVIEW_ACTION_WORDS[action]}: it needs the ${permission} permission.`);
+    return refuse("wrong-state", FROM_REASONS[action]?.[from] ?? `A layout that is ${REVIEW_STATE_WORDS[from]} cannot ${REVIEW_ACTION_WORDS[action]}.`);
+  if (!ctx.can(permission)) return refuse("permission", `Your role cannot ${REVIEW_ACTION_WORDS[action]}: only ${(permissionTable[permission] as readonly Role[]).map((r) => roleLabels[r].toLowerCase()).join(" or ")} members can.`);
   if (action === "approve" && ctx.authorship) {
     const second = secondReview(ctx.authorship);
     if (!second.ok) return refuse("same-person", second.reason);
@@ -136,7 +137,7 @@ export function transition(from: ReviewState, action: ReviewAction, ctx: Transit
     if (!p || p.loops === 0) return refuse("commissioning-incomplete", "No loop has been tested yet: every used input needs its commissioning readings first.");
     if (p.passed < p.loops) {
       const left = p.loops - p.passed;
-      return refuse("commissioning-incomplete", `${left} of ${p.loops} loop${p.loops === 1 ? "" : "s"} ${left === 1 ? "has" : "have"} not passed commissioning yet.`);
+      return refuse("commissioning-incomplete", `${left} of ${plural(p.loops, "loop")} ${pluralWord(left, "has", "have")} not passed commissioning yet.`);
     }
   }
   const newDraft = action === "edit" && from !== "draft";

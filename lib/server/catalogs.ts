@@ -10,6 +10,7 @@ import { shippedCatalog } from "@/lib/catalog/shipped";
 import { catalogDiff, effectiveCatalog, findEntry, parseCatalogFile, type CatalogDiff, type CatalogError, type EntryKey, type FoundEntry, type LoadedCatalog } from "@/lib/catalog/loader";
 import type { Catalog } from "@/lib/catalog/schema";
 import { catalogUploadFormSchema, MAX_UPLOAD_BYTES, type UploadMode } from "@/lib/catalog/upload-schema";
+import { plural } from "@/lib/vocabulary/plural";
 
 // An organisation's catalog: the shipped catalog plus the organisation's latest uploaded file
 // (lib/catalog/loader.ts effectiveCatalog). Every uploaded version is kept; the latest is in use.
@@ -333,7 +334,7 @@ export async function previewUpload(organisationId: number, file: UploadFile): P
 /** The refusal of a file that does not validate: 422 with the loader's errors. */
 export function refusedFile(errors: CatalogError[], fileName: string): ApiError {
   const n = errors.length;
-  return new ApiError(422, `${fileName} was refused: ${n} problem${n === 1 ? "" : "s"} to fix. Nothing was stored.`, undefined, { errors });
+  return new ApiError(422, `${fileName} was refused: ${plural(n, "problem")} to fix. Nothing was stored.`, undefined, { errors });
 }
 
 const keyList = (keys: { kind: string; id: string }[]) => keys.slice(0, 50).map((k) => `${k.kind}:${k.id}`);

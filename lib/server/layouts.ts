@@ -18,6 +18,7 @@ import { solveLayout, type Suggestion } from "@/lib/solver";
 import { suggestOffLoop } from "@/lib/server/workers/off-loop";
 import type { Severity } from "@/lib/findings";
 import { summarizeSolve, type LayoutSolveSummary } from "@/lib/layout/layout-summary";
+import { BOARD_KIND_WORDS } from "@/lib/vocabulary/words";
 
 export type { LayoutSolveSummary };
 
@@ -63,7 +64,7 @@ export function referenceIssues(doc: LayoutDocument, schedule: Schedule, catalog
   const issues: { path: string; message: string }[] = [];
   if (!ix.panels.has(doc.panelId)) issues.push({ path: "document.panelId", message: `control panel ${doc.panelId} is not in your organisation's catalog` });
   doc.boards.forEach((b, i) => {
-    if (!boardEntry(ix, b.kind, b.catalogId)) issues.push({ path: `document.boards.${i}.catalogId`, message: `${boardName(doc, b.key)}: ${b.catalogId} is not a ${b.kind} board in the catalog` });
+    if (!boardEntry(ix, b.kind, b.catalogId)) issues.push({ path: `document.boards.${i}.catalogId`, message: `${boardName(doc, b.key)}: no ${BOARD_KIND_WORDS[b.kind]} ${b.catalogId} in the catalog` });
   });
   const ids = new Set(schedule.map((d) => d.id));
   doc.inputs.forEach((inp, i) =>

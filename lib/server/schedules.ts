@@ -13,6 +13,7 @@ import { can, refusal, type Permission } from "@/lib/auth/permissions";
 import type { Catalog } from "@/lib/catalog/schema";
 import { parseScheduleCsv, serializeScheduleCsv, type CsvRowError } from "@/lib/schedule/csv";
 import type { BulkEditPatch, CreateDetectorForm, ScheduleCableGauge, ScheduleDetector, ScheduleRow, UpdateDetectorForm } from "@/lib/schedule/schema";
+import { plural } from "@/lib/vocabulary/plural";
 
 // A site's device schedule in MariaDB. Everyone in the organisation reads it; "schedule:write" changes it.
 
@@ -213,7 +214,7 @@ export async function confirmImport(actor: Actor, siteId: number, csv: string, f
   if (p.errors.length)
     throw new ApiError(
       422,
-      `The file has ${p.errors.length} problem${p.errors.length === 1 ? "" : "s"}; nothing was imported. Correct the rows and import again.`,
+      `The file has ${plural(p.errors.length, "problem")}; nothing was imported. Correct the rows and import again.`,
       p.errors.slice(0, 200).map((e) => ({ path: `row ${e.row}${e.column ? `, ${e.column}` : ""}`, message: e.message })),
       { errors: p.errors },
     );

@@ -14,6 +14,7 @@ import { SOLO_APPROVAL_WORDS } from "@/lib/review/effective-state";
 import { paperOf } from "@/lib/sheet/sheet-request-schema";
 import { terminalSheetPdfOffLoop } from "@/lib/server/workers/off-loop";
 import { loopJsonReplacer } from "@/lib/loop/loop-json";
+import { plural } from "@/lib/vocabulary/plural";
 
 // The terminal sheet as a PDF, for download and e-mailed to the site's installer as an attachment.
 
@@ -80,7 +81,7 @@ export async function sendSheetToInstaller(actor: Actor, layoutId: number, opts:
     "",
     ...(view.approved ? [] : [`${NOT_APPROVED_MARKING}: this revision has not been approved. Do not wire to it; it is sent so you can review it.`, ""]),
     `${actor.name} sent you the terminal sheet of ${view.meta.siteName}, layout "${view.meta.layoutName}" (${status}).`,
-    `It lists ${view.sheet.zoneCount} zone${view.sheet.zoneCount === 1 ? "" : "s"} on ${view.sheet.boards.length} board${view.sheet.boards.length === 1 ? "" : "s"}, with the resistors, the core map and the meter reading expected in each test.`,
+    `It lists ${plural(view.sheet.zoneCount, "zone")} on ${plural(view.sheet.boards.length, "board")}, with the resistors, the core map and the meter reading expected in each test.`,
     "",
     `The PDF is attached; the sheet is also online: ${link}`,
     ...(view.sheet.caution ? ["", view.sheet.caution] : []),

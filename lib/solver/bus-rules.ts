@@ -1,5 +1,6 @@
 import type { Finding } from "@/lib/findings";
-import { fmt, plural } from "@/lib/solver/format";
+import { fmt } from "@/lib/solver/format";
+import { plural } from "@/lib/vocabulary/plural";
 import type { Resolved } from "@/lib/solver/resolve";
 import type { BusFigures } from "@/lib/solver/types";
 
@@ -43,7 +44,7 @@ export function checkBus(r: Resolved, busCableM: number, out: Finding[]): BusFig
       out.push({
         code: "bus-address-duplicate",
         severity: "error",
-        message: `${d.name} and ${r.names.get(first) ?? first} are both at bus address ${a}`,
+        message: `${d.name} and ${r.names.get(first) ?? "another board"} are both at bus address ${a}`,
         why: "Two devices answering to one address garble each other's replies.",
         target,
       });

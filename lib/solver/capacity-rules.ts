@@ -1,8 +1,9 @@
 import type { Finding } from "@/lib/findings";
 import type { ScheduleDetector } from "@/lib/schedule/schema";
-import { plural } from "@/lib/solver/format";
+import { plural } from "@/lib/vocabulary/plural";
 import { unplacedFinding, type Resolved, type ResolvedInput } from "@/lib/solver/resolve";
 import type { BoardFigures, CapacityTotals } from "@/lib/solver/types";
+import { SCHEME_WORDS, wiredWords } from "@/lib/vocabulary/words";
 
 // Inputs used per board and in total, zones against the panel, detectors per input.
 
@@ -18,7 +19,7 @@ export function inputContentFindings(ri: ResolvedInput): Finding[] {
     out.push({
       code: "input-too-many-detectors",
       severity: "error",
-      message: `${where} holds ${n} detectors; a ${input.scheme} input takes ${allowed}`,
+      message: `${where} holds ${plural(n, "detector")}; an input ${wiredWords(input.scheme)} takes ${allowed}`,
       why: input.scheme === "shared" ? "A shared input tells two detectors apart by their resistors; a third cannot be decoded." : "The panel would report them as one zone, so nobody could tell which one tripped. Make it a shared input where the input type allows it, or give each its own input.",
       target,
     });
@@ -35,7 +36,7 @@ export function inputContentFindings(ri: ResolvedInput): Finding[] {
     out.push({
       code: "scheme-not-supported",
       severity: "error",
-      message: `${where} is wired ${input.scheme}, which ${type.name} does not accept (it takes ${type.schemes.join(", ")})`,
+      message: `${where} is ${wiredWords(input.scheme)}, which ${type.name} does not accept (it takes ${type.schemes.map((s) => SCHEME_WORDS[s]).join(", ")})`,
       why: "The input has no bands for this scheme, so its readings would be misread.",
       target,
     });

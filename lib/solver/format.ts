@@ -8,10 +8,6 @@ export function fmt(n: number, digits = 3): string {
   return String(Number(n.toFixed(d)));
 }
 
-export function plural(n: number, one: string, many = `${one}s`): string {
-  return `${n} ${n === 1 ? one : many}`;
-}
-
 export function listNames(names: string[], max = 3): string {
   if (names.length <= max) return names.join(", ");
   return `${names.slice(0, max).join(", ")} and ${names.length - max} more`;

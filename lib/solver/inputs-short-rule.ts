@@ -1,5 +1,6 @@
 import type { Finding } from "@/lib/findings";
 import type { SolveResult } from "@/lib/solver/types";
+import { plural, pluralWord } from "@/lib/vocabulary/plural";
 
 // A capacity rule over the whole solve: more detectors left to place
 // than there are free inputs means the chosen hardware cannot carry the device schedule.
@@ -12,7 +13,7 @@ export function inputsShortFinding(r: SolveResult): Finding | null {
   return {
     code: "inputs-short",
     severity: "error",
-    message: `${unplaced} detector${unplaced === 1 ? " is" : "s are"} still to place and ${free === 0 ? "no input is" : free === 1 ? "only 1 input is" : `only ${free} inputs are`} free: ${short} input${short === 1 ? "" : "s"} short`,
+    message: `${plural(unplaced, "detector")} ${pluralWord(unplaced, "is", "are")} still to place and ${free === 0 ? "no input is" : `only ${plural(free, "input")} ${pluralWord(free, "is", "are")}`} free: ${plural(short, "input")} short`,
     why: "Every detector needs an input of its own (two may share one only where the input type and both detectors allow it), so this hardware cannot carry the device schedule. Add an expansion board or a keypad with inputs, or choose a panel with more inputs.",
     target: { kind: "layout" },
   };

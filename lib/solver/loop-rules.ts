@@ -7,6 +7,7 @@ import { listNames } from "@/lib/solver/format";
 import type { GenerationMemo } from "@/lib/solver/memo";
 import { isLifeSafety, type ResolvedInput } from "@/lib/solver/resolve";
 import type { InputFigures, SharedInputFigures, SolveResult } from "@/lib/solver/types";
+import { FAULT_WORDS, SUPERVISION_WORDS, wiredWords } from "@/lib/vocabulary/words";
 
 // Every used input through the loop engine, plus the rules about sharing and life-safety devices.
 
@@ -131,7 +132,7 @@ export function inputOutcome(ri: ResolvedInput, analyze: AnalyzeLoop, loopMemo: 
         out.push({
           code: "shared-not-wanted",
           severity: "warning",
-          message: `${d.sched.label} is on shared ${where}, but its schedule asks for ${d.sched.supervision}`,
+          message: `${d.sched.label} is on ${where}, a shared input, but its schedule asks for ${SUPERVISION_WORDS[d.sched.supervision]}`,
           why: "The device schedule says this detector should have an input of its own.",
           target,
         });
@@ -142,7 +143,7 @@ export function inputOutcome(ri: ResolvedInput, analyze: AnalyzeLoop, loopMemo: 
         out.push({
           code: "supervision-below-preference",
           severity: "note",
-          message: `${d.sched.label} is wired ${input.scheme} on ${where}; its schedule asks for ${d.sched.supervision}`,
+          message: `${d.sched.label} is ${wiredWords(input.scheme)} on ${where}; its schedule asks for ${SUPERVISION_WORDS[d.sched.supervision]}`,
           why: "The loop gives less supervision than the device schedule asks for.",
           target,
         });
@@ -194,7 +195,7 @@ export function inputOutcome(ri: ResolvedInput, analyze: AnalyzeLoop, loopMemo: 
       out.push({
         code: "shared-input-tradeoff",
         severity: "note",
-        message: `${where} carries ${listNames(ri.detectors.map((d) => d.sched.label))}: saves 1 input; ${lost.length ? `${lost.join(", ")} not reported as such` : "shorts and cuts are still reported"}, and one cable fault silences both`,
+        message: `${where} carries ${listNames(ri.detectors.map((d) => d.sched.label))}: saves 1 input; ${lost.length ? `${lost.map((f) => FAULT_WORDS[f as keyof typeof FAULT_WORDS]).join(", ")} not reported as such` : "shorts and cuts are still reported"}, and one cable fault silences both`,
         why: analysis.sharedLost?.length ? analysis.sharedLost.join(" ") : "Two detectors on one loop share its faults: a cut or short on the common cable takes both out at once.",
         target,
       });

@@ -120,7 +120,7 @@ export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutP
     const sums = sumsOf(b);
     if (own) {
       if (b.board.poweredBy !== undefined)
-        out.push({ code: "powered-by-ignored", severity: "note", message: `${b.name} has its own supply; "powered by ${r.names.get(b.board.poweredBy) ?? b.board.poweredBy}" is ignored`, why: "A supply board or a board with its own supply powers itself.", target });
+        out.push({ code: "powered-by-ignored", severity: "note", message: `${b.name} has its own supply; "powered by ${r.names.get(b.board.poweredBy) ?? "a board not in this layout"}" is ignored`, why: "A supply board or a board with its own supply powers itself.", target });
       own.loadRestMa += sums.restMa;
       own.loadAlarmMa += sums.alarmMa;
       feedOf.set(b.key, own);
@@ -134,7 +134,7 @@ export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutP
         out.push({
           code: "powered-by-invalid",
           severity: "error",
-          message: `${b.name} is set to be powered by ${r.names.get(b.board.poweredBy) ?? b.board.poweredBy}, which is not a power supply in this layout`,
+          message: `${b.name} is set to be powered by ${r.names.get(b.board.poweredBy) ?? "a board that is gone"}, which is not a power supply in this layout`,
           why: "Its current is counted on the panel's auxiliary output instead; wire it to a real supply.",
           target,
         });
@@ -148,7 +148,7 @@ export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutP
   // Standby battery.
   const { profile, standbyH, alarmMin } = resolveStandby(power);
   if (!profile)
-    out.push({ code: "standby-profile-unknown", severity: "error", message: `Standby profile ${power.standbyProfileId} is unknown; 24 h and 5 min are used`, why: "Battery sizes depend on the standby profile.", target: { kind: "layout" } });
+    out.push({ code: "standby-profile-unknown", severity: "error", message: "The standby profile chosen is not known; 24 h standby and 5 min in alarm are used", why: "Battery sizes depend on the standby profile.", target: { kind: "layout" } });
   const sf = power.safetyFactor;
   for (const s of supplies) {
     const target = { kind: "supply" as const, supplyKey: s.supplyKey };

@@ -5,6 +5,8 @@ import { boardNames } from "@/lib/layout/names";
 import { PANEL_KEY, type LayoutBoard, type LayoutDocument, type LayoutInput } from "@/lib/layout/schema";
 import type { ScheduleDetector } from "@/lib/schedule/schema";
 import { listNames } from "@/lib/solver/format";
+import { BOARD_KIND_WORDS } from "@/lib/vocabulary/words";
+import { plural, pluralWord } from "@/lib/vocabulary/plural";
 
 // Ties a layout to the catalog and the schedule, and reports what does not tie up.
 
@@ -46,7 +48,7 @@ export interface Resolved {
 }
 
 const inputTarget = (inp: LayoutInput) => ({ kind: "input" as const, boardKey: inp.boardKey, input: inp.input });
-const inputWhere = (names: Map<string, string>, inp: LayoutInput) => `${names.get(inp.boardKey) ?? inp.boardKey}, input ${inp.input}`;
+const inputWhere = (names: Map<string, string>, inp: LayoutInput) => `${names.get(inp.boardKey) ?? "A board not in this layout"}, input ${inp.input}`;
 
 /** Resolved detectors of an input object from an earlier solve; the schedule and catalog are fixed for one cache. */
 export type DetectorCache = WeakMap<LayoutInput, { ids: string[]; detectors: PlacedDetector[] }>;
@@ -67,7 +69,7 @@ function resolveDetectorsSlowly(inp: LayoutInput, cache: DetectorCache, ix: Cata
   for (const id of inp.detectorIds) {
     const sched = schedule.get(id);
     if (!sched) {
-      out.push({ code: "detector-unknown", severity: "error", message: `${inputWhere(names, inp)}: detector ${id} is not in the device schedule`, why: "It may have been deleted from the schedule after it was placed.", target: inputTarget(inp) });
+      out.push({ code: "detector-unknown", severity: "error", message: `${inputWhere(names, inp)}: a detector placed here is no longer in the device schedule`, why: "It may have been deleted from the schedule after it was placed.", target: inputTarget(inp) });
       complete = false;
       continue;
     }
@@ -79,7 +81,7 @@ function resolveDetectorsSlowly(inp: LayoutInput, cache: DetectorCache, ix: Cata
     placed.add(id);
     const cat = ix.detectors.get(sched.catalogId);
     if (!cat) {
-      out.push({ code: "detector-type-unknown", severity: "error", message: `${sched.label}: ${sched.catalogId} is not a detector in the catalog`, why: "Its contact, tamper and current are unknown, so its loop and power cannot be checked.", target: { kind: "detector", detectorId: id } });
+      out.push({ code: "detector-type-unknown", severity: "error", message: `${sched.label}: its detector type is not in the catalog`, why: "Its contact, tamper and current are unknown, so its loop and power cannot be checked.", target: { kind: "detector", detectorId: id } });
       complete = false;
       continue;
     }
@@ -103,7 +105,7 @@ export function resolveLayout(
     out.push({
       code: "panel-unknown",
       severity: "error",
-      message: `Control panel ${layout.panelId} is not in the catalog`,
+      message: "The control panel chosen for this layout is not in the catalog",
       why: "Without the panel's figures nothing else in the layout can be checked.",
       target: { kind: "layout" },
     });
@@ -127,29 +129,29 @@ export function resolveLayout(
     const name = names.get(b.key) ?? b.key;
     const target = { kind: "board" as const, boardKey: b.key };
     if (byKey.has(b.key)) {
-      out.push({ code: "board-key-duplicate", severity: "error", message: `Board key ${b.key} is used twice`, why: "Inputs name their board by key; two boards with one key cannot be told apart.", target });
+      out.push({ code: "board-key-duplicate", severity: "error", message: `${name} is listed twice under one key`, why: "Inputs name their board by key; two boards with one key cannot be told apart.", target });
       continue;
     }
     const entry = boardEntry(ix, b.kind, b.catalogId);
     if (!entry)
-      out.push({ code: "board-unknown", severity: "error", message: `${name}: ${b.catalogId} is not a ${b.kind} board in the catalog`, why: "Its inputs, current and bus use are unknown, so they are left out of every total.", target });
+      out.push({ code: "board-unknown", severity: "error", message: `${name}: this ${BOARD_KIND_WORDS[b.kind]} is not in the catalog`, why: "Its inputs, current and bus use are unknown, so they are left out of every total.", target });
     else if (!entry.entry.families.includes(panel.family))
       out.push({
         code: "board-family-mismatch",
         severity: "error",
-        message: `${name} (${entry.entry.name}) works with ${entry.entry.families.join(", ")}, not with the ${panel.family} family of ${panel.name}`,
+        message: `${name} (${entry.entry.name}) works with the ${entry.entry.families.join(" or ")} family, not with the ${panel.family} family of ${panel.name}`,
         why: "A board from another family does not speak this panel's data bus.",
         target,
       });
     if (entry && ix.inputTypes.get(boardInputs(entry)?.inputType ?? "") === undefined && boardInputs(entry))
-      out.push({ code: "input-type-unknown", severity: "error", message: `${name}: input type ${boardInputs(entry)?.inputType} is not in the catalog`, why: "Its inputs cannot be checked.", target });
+      out.push({ code: "input-type-unknown", severity: "error", message: `${name}: its input type is not in the catalog`, why: "Its inputs cannot be checked.", target });
     const block = entry ? boardInputs(entry) : null;
     const rb: ResolvedBoard = { key: b.key, order: boards.length, name, board: b, entry, inputCount: block?.count ?? 0, inputType: block ? ix.inputTypes.get(block.inputType) : undefined, inputTypeId: block?.inputType ?? null };
     boards.push(rb);
     byKey.set(b.key, rb);
   }
   if (!panelType)
-    out.push({ code: "input-type-unknown", severity: "error", message: `Control panel: input type ${panel.onboardInputs.inputType} is not in the catalog`, why: "Its inputs cannot be checked.", target: { kind: "board", boardKey: PANEL_KEY } });
+    out.push({ code: "input-type-unknown", severity: "error", message: `${panel.name}: its input type is not in the catalog`, why: "Its inputs cannot be checked.", target: { kind: "board", boardKey: PANEL_KEY } });
 
   const inputs: ResolvedInput[] = [];
   const seen = new Map<string, Uint8Array>();
@@ -159,7 +161,7 @@ export function resolveLayout(
     if (inp.detectorIds.length === 0) continue;
     const board = byKey.get(inp.boardKey);
     if (!board) {
-      out.push({ code: "input-board-unknown", severity: "error", message: `${inputWhere(names, inp)}: there is no board ${inp.boardKey} in this layout`, why: "Detectors on a board that is not there are not wired anywhere.", target: inputTarget(inp) });
+      out.push({ code: "input-board-unknown", severity: "error", message: `Input ${inp.input} of a board that is not in this layout`, why: "Detectors on a board that is not there are not wired anywhere.", target: inputTarget(inp) });
       continue;
     }
     if (!board.entry && board.key !== PANEL_KEY) continue; // board-unknown already said so
@@ -195,7 +197,7 @@ export function unplacedFinding(unplaced: ScheduleDetector[]): Finding | null {
   return {
     code: "detectors-unplaced",
     severity: "warning",
-    message: `${unplaced.length} detector${unplaced.length === 1 ? " is" : "s are"} not on any input: ${listNames(unplaced.map((d) => d.label))}`,
+    message: `${plural(unplaced.length, "detector")} ${pluralWord(unplaced.length, "is", "are")} not on any input: ${listNames(unplaced.map((d) => d.label))}`,
     why: "An unplaced detector is not wired anywhere and reports nothing.",
     target: { kind: "layout" },
   };

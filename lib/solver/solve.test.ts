@@ -200,7 +200,7 @@ describe("loop rules through the loop engine", () => {
   it("warns when a detector shares an input its schedule did not allow", () => {
     const schedule = [det("a", "fx-door", { supervision: "shared-ok" }), det("b", "fx-door", { supervision: "double-eol" })];
     const r = solveLayout(emptyLayout("fx-panel-large", { inputs: [inp("panel", 1, ["a", "b"])] }), schedule, fixtureCatalog);
-    expect(find(r.findings, "shared-not-wanted").map((f) => f.message)).toEqual(["Detector b is on shared Control panel, input 1, but its schedule asks for double-eol"]);
+    expect(find(r.findings, "shared-not-wanted").map((f) => f.message)).toEqual(["Detector b is on Control panel, input 1, a shared input, but its schedule asks for double end-of-line"]);
   });
   it("is a hard error to share an input with a life-safety device, or to put one on an input type not rated for it", () => {
     const schedule = [det("s", "fx-smoke", { label: "Landing smoke" }), det("a", "fx-door", { supervision: "shared-ok" }), det("h", "fx-heat", { label: "Kitchen heat" })];

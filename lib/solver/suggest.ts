@@ -11,6 +11,7 @@ import { loopSpecFor } from "@/lib/solver/loop-rules";
 import { isLifeSafety, type PlacedDetector } from "@/lib/solver/resolve";
 import { resolveStandby } from "@/lib/solver/standby-profiles";
 import type { SolveResult } from "@/lib/solver/types";
+import { plural } from "@/lib/vocabulary/plural";
 
 // The cheapest hardware from the catalog that carries a schedule, with every detector placed.
 // Uniform-cost search over each panel and every multiset of boards (cheapest first), so the first candidate
@@ -135,7 +136,7 @@ export function suggestHardware(schedule: Schedule, catalog: Catalog, opts: Sugg
   const placed: PlacedDetector[] = [];
   for (const sched of schedule) {
     const cat = ix.detectors.get(sched.catalogId);
-    if (!cat) return { found: false, reason: `${sched.label}: ${sched.catalogId} is not a detector in the catalog`, candidatesTried: 0 };
+    if (!cat) return { found: false, reason: `${sched.label}: its detector type is not in the catalog`, candidatesTried: 0 };
     placed.push({ sched, cat });
   }
   const anyLife = placed.some((d) => isLifeSafety(d.cat));
@@ -388,7 +389,7 @@ export function suggestHardware(schedule: Schedule, catalog: Catalog, opts: Sugg
     const layout: LayoutDocument = { panelId: panel.id, boards, inputs, power, busCableM };
     const result = solver.solve(layout);
     if (result.counts.error > 0 || result.totals.unplacedIds.length > 0)
-      return { ok: false, reason: `${panel.name} with ${s.boards} board${s.boards === 1 ? "" : "s"}: ${result.findings.find((f) => f.severity === "error")?.message ?? "detectors left unplaced"}` };
+      return { ok: false, reason: `${panel.name} with ${plural(s.boards, "board")}: ${result.findings.find((f) => f.severity === "error")?.message ?? "detectors left unplaced"}` };
     const parts: SuggestionPart[] = [{ kind: "panel", catalogId: panel.id, name: panel.name, count: 1, unitPrice: panel.listPrice }];
     items.forEach((it, j) => {
       if (s.counts[j]) parts.push({ kind: it.kind, catalogId: it.id, name: it.name, count: s.counts[j], unitPrice: it.price });

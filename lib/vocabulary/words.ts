@@ -62,3 +62,57 @@ export function sentence(word: string): string {
 export function sentenceWords<K extends string>(words: Record<K, string>): Record<K, string> {
   return Object.fromEntries(Object.entries<string>(words).map(([k, w]) => [k, sentence(w)])) as Record<K, string>;
 }
+
+/** How an input is wired, to follow "is": "wired single end-of-line", "wired as a shared input", "wired with no resistor". */
+export function wiredWords(scheme: WiringScheme): string {
+  if (scheme === "shared") return "wired as a shared input";
+  if (scheme === "none") return "wired with no resistor";
+  return `wired ${SCHEME_WORDS[scheme]}`;
+}
+
+/** The wiring faults the engine injects, in words. */
+export const FAULT_WORDS: Record<"short-panel" | "short-detector" | "cut", string> = {
+  "short-panel": "a short at the panel end",
+  "short-detector": "a short at the detector end",
+  cut: "a cut conductor",
+};
+
+/** The kinds of board a layout holds, in words. */
+export const BOARD_KIND_WORDS: Record<"expansion" | "keypad" | "supply", string> = {
+  expansion: "expansion board",
+  keypad: "keypad",
+  supply: "power supply",
+};
+
+/** What an audit entry records, as the audit log shows it. */
+export const AUDIT_ACTION_WORDS: Record<string, string> = {
+  "catalog.upload": "catalog uploaded",
+  "commissioning.photo": "commissioning photo added",
+  "commissioning.reading": "commissioning reading recorded",
+  "demo.seed": "demo data added",
+  "layout.choose": "layout chosen",
+  "layout.comment": "comment on a layout",
+  "layout.create": "layout created",
+  "layout.delete": "layout deleted",
+  "layout.restore": "earlier revision restored",
+  "layout.save": "layout saved",
+  "layout.review.submit": "layout sent for review",
+  "layout.review.withdraw": "layout withdrawn from review",
+  "layout.review.approve": "layout approved",
+  "layout.review.reject": "layout sent back",
+  "layout.review.edit": "approved layout reopened as a draft",
+  "layout.review.commission": "layout marked commissioned",
+  "member.invite": "member invited",
+  "member.join": "member joined",
+  "member.role": "member's role changed",
+  "schedule.create": "detector added to the schedule",
+  "schedule.delete": "detectors deleted from the schedule",
+  "schedule.import": "device schedule imported",
+  "schedule.update": "device schedule changed",
+  "sheet.send": "terminal sheet sent",
+  "site.create": "site created",
+  "site.update": "site changed",
+};
+
+/** The kind of thing an audit entry is about. */
+export const AUDIT_ENTITY_WORDS: Record<string, string> = { invitation: "invitation", layout: "layout", membership: "member", organisation: "organisation", organisation_catalog: "catalog", schedule_detector: "detector", site: "site" };

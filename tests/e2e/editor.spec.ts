@@ -325,7 +325,7 @@ test.describe(() => {
     await expect(page.getByRole("button", { name: /^Take .* off its input$/ })).toHaveCount(0);
     await expect(page.getByLabel("Standby profile")).toBeDisabled();
     await expect(page.locator("[aria-roledescription=draggable]:not([aria-disabled=true])")).toHaveCount(0);
-    await page.getByRole("button", { name: "Archive door", exact: true }).focus();
+    await page.getByRole("button", { name: "Archive door" }).focus(); // the chip, named by what it shows
     await page.keyboard.press("Space");
     await page.keyboard.press("ArrowDown");
     await page.keyboard.press("Space");

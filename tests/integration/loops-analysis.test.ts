@@ -60,7 +60,7 @@ describe("loop analysis against the organisation's catalog", () => {
     const { org } = await makeOrganisation();
     await expect(analyzeLoopFor(org.id, request("input-2k2-6k8", "single-eol"))).rejects.toMatchObject({
       status: 422,
-      issues: expect.arrayContaining([{ path: "loop.scheme", message: expect.stringContaining("does not support the single-eol scheme") }]),
+      issues: expect.arrayContaining([{ path: "loop.scheme", message: expect.stringContaining("does not take single end-of-line wiring") }]),
     });
   });
 });

@@ -127,7 +127,7 @@ describe("changePanel", () => {
     expect(e.layout.panelId).toBe("fx-panel-small");
     expect(e.layout.inputs).toEqual([expect.objectContaining({ input: 2, detectorIds: ["d"] })]);
     expect(changePanel(doc, ctx, "fx-panel-large").ok).toBe(false);
-    expect(changePanel(doc, ctx, "no-such-panel")).toMatchObject({ ok: false, message: "no-such-panel is not a control panel in the catalog" });
+    expect(changePanel(doc, ctx, "no-such-panel")).toMatchObject({ ok: false, message: "That control panel is not in the catalog" });
   });
 });
 

@@ -2,6 +2,7 @@ import "server-only";
 import type { CommissioningProgressReport, LoopStatus } from "@/lib/commissioning/progress";
 import { readingText } from "@/lib/commissioning/diagnose";
 import { createPdf, heading, noticeBox, paragraph, table, type PageSize } from "@/lib/server/pdf/pdf-kit";
+import { plural } from "@/lib/vocabulary/plural";
 
 // The commissioning record as a PDF: every loop's tests with the expected range, the latest reading, its verdict
 // and diagnosis, the photos taken, and a sign-off.
@@ -37,7 +38,7 @@ export async function commissioningReportPdf(report: CommissioningProgressReport
   const pdf = createPdf({ size, title });
   heading(pdf, title, 15);
   const t = report.totals;
-  paragraph(pdf, `Made ${meta.generatedAt}. ${t.passed} of ${t.loops} loops passed; ${t.failed} failed, ${t.incomplete} partly tested, ${t.untested} not tested${t.cannotTest ? `, ${t.cannotTest} cannot be tested` : ""}.`);
+  paragraph(pdf, `Made ${meta.generatedAt}. ${t.passed} of ${plural(t.loops, "loop")} passed; ${t.failed} failed, ${t.incomplete} partly tested, ${t.untested} not tested${t.cannotTest ? `, ${t.cannotTest} cannot be tested` : ""}.`);
   if (meta.caution) noticeBox(pdf, meta.caution);
   for (const loop of report.loops) {
     const zones = loop.zones.length === 1 ? `zone ${loop.zones[0]}` : `zones ${loop.zones.join(" and ")}`;

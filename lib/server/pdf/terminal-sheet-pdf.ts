@@ -3,6 +3,7 @@ import { REPORT_WORDS } from "@/lib/loop/row-labels";
 import type { SheetBoard, SheetInput, SpareInput, TerminalSheet } from "@/lib/sheet/sheet-types";
 import { powerSection } from "@/lib/server/pdf/power-section";
 import { createPdf, heading, noticeBox, NOT_APPROVED_MARKING, paragraph, table, type PageSize, type Pdf } from "@/lib/server/pdf/pdf-kit";
+import { plural } from "@/lib/vocabulary/plural";
 
 // The terminal sheet as a PDF for the installer: one section per board, every input with its wiring and the
 // meter reading expected in each test, an empty measured column and a sign-off.
@@ -92,7 +93,7 @@ export async function terminalSheetPdf(sheet: TerminalSheet, meta: SheetMeta, si
   const pdf = createPdf({ size, title, ...(meta.approved ? {} : { marking: NOT_APPROVED_MARKING }) });
   heading(pdf, title, 15);
   paragraph(pdf, approvalLine(meta), { bold: true, ...(meta.approved && !meta.approvedSolo ? {} : { color: "#991b1b" }) });
-  paragraph(pdf, `Control panel: ${sheet.panel?.name ?? "unknown"} · ${sheet.zoneCount} zones · made ${meta.generatedAt}`);
+  paragraph(pdf, `Control panel: ${sheet.panel?.name ?? "unknown"} · ${plural(sheet.zoneCount, "zone")} · made ${meta.generatedAt}`);
   if (sheet.caution) noticeBox(pdf, sheet.caution);
   paragraph(pdf, sheet.measuringNote, { size: 8, color: "#444444" });
   for (const p of sheet.problems) paragraph(pdf, `Error: ${p}`, { color: "#991b1b" });

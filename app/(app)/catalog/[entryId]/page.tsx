@@ -33,7 +33,7 @@ export default async function CatalogEntryPage({ params }: { params: Promise<{ e
   return (
     <>
       <p className="mb-2 text-sm">
-        <Link href="/catalog" className="text-signal hover:underline">
+        <Link href="/catalog" className="text-signal underline underline-offset-2">
           ← Catalog
         </Link>
       </p>

@@ -34,7 +34,7 @@ export default async function SchedulePage({ params }: { params: Promise<{ siteI
         subtitle={
           <>
             Every detector of the site with its cable run to the board. Layouts place these detectors on inputs.{" "}
-            <Link href={`/sites/${site.id}/layouts`} className="text-signal hover:underline">
+            <Link href={`/sites/${site.id}/layouts`} className="text-signal underline underline-offset-2">
               Open the layouts
             </Link>
           </>

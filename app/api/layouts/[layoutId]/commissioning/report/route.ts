@@ -4,6 +4,7 @@ import { ApiError } from "@/lib/server/errors";
 import { idParam, route } from "@/lib/server/route";
 import { commissioningReportPdfFor, getCommissioning } from "@/lib/server/commissioning";
 import { paperSizeQuery } from "@/lib/sheet/sheet-request-schema";
+import { plural } from "@/lib/vocabulary/plural";
 
 const params = z.object({ layoutId: idParam });
 const query = z.strictObject({ size: paperSizeQuery });
@@ -14,7 +15,7 @@ export const GET = route({ permission: "sheet:read", params, query }, async ({ a
   if (revision === null) throw new ApiError(409, "There is no commissioning record: the layout has no approved revision yet.");
   const left = progress.totals.loops - progress.totals.passed;
   if (progress.totals.loops === 0 || left > 0)
-    throw new ApiError(409, `The commissioning record is ready when every loop has passed: ${left} of ${progress.totals.loops} loop${progress.totals.loops === 1 ? "" : "s"} still to pass.`, undefined, { totals: progress.totals });
+    throw new ApiError(409, `The commissioning record is ready when every loop has passed: ${left} of ${plural(progress.totals.loops, "loop")} still to pass.`, undefined, { totals: progress.totals });
   const { pdf, fileName } = await commissioningReportPdfFor(actor, params.layoutId, query.size);
   return new Response(new Uint8Array(pdf), { headers: { "content-type": "application/pdf", "content-disposition": attachmentHeader(fileName), "cache-control": "private, no-store" } });
 });

@@ -1,0 +1,59 @@
+// Layouts that make the solver say each of its findings, on the fixture catalog (tests only).
+import type { Catalog } from "@/lib/catalog/schema";
+import type { Schedule } from "@/lib/schedule/schema";
+import type { LayoutDocument } from "@/lib/layout/schema";
+import { solveLayout } from "@/lib/solver";
+import { fixtureCatalog } from "@/lib/solver/testing/fixture-catalog";
+import { board, catalogWithPanel, det, emptyLayout, inp } from "@/lib/solver/testing/fixture-schedule";
+
+interface Sample {
+  doc: LayoutDocument;
+  schedule: Schedule;
+  catalog?: Catalog;
+}
+
+const doors = (n: number) => Array.from({ length: n }, (_, i) => det(`d${i + 1}`, "fx-door"));
+const pirs = (n: number, catalogId = "fx-pir") => Array.from({ length: n }, (_, i) => det(`p${i + 1}`, catalogId));
+
+/** The fixture catalog with its first expansion board off the data bus. */
+const offBusCatalog: Catalog = { ...fixtureCatalog, expansionBoards: fixtureCatalog.expansionBoards.map((b, i) => (i === 0 ? { ...b, takesBusAddress: false } : b)) };
+
+const samples: Sample[] = [
+  // what does not tie up: unknown panel, boards, inputs, detectors
+  { doc: emptyLayout("no-such-panel"), schedule: doors(1) },
+  { doc: emptyLayout("fx-panel-small", { inputs: [inp("panel", 9, ["d1"]), inp("panel", 1, ["ghost"]), inp("panel", 2, ["d2"]), inp("panel", 3, ["d2"]), inp("nope", 1, ["d3"]), inp("panel", 4, ["d4"]), inp("panel", 4, ["d5"])] }), schedule: doors(5) },
+  { doc: emptyLayout("fx-panel-small", { inputs: [inp("panel", 1, ["x"])] }), schedule: [det("x", "no-such-detector", { label: "Plant room sensor" })] },
+  { doc: emptyLayout("fx-panel-small", { boards: [board("b1", "expansion", "fx-exp-8", 1), board("b1", "expansion", "fx-exp-8", 2), board("b9", "expansion", "no-such-board", 3)] }), schedule: [] },
+  { doc: emptyLayout("fx-panel-small"), schedule: [], catalog: catalogWithPanel("fx-panel-small", { onboardInputs: { count: 8, inputType: "no-such-type" } }) },
+  // capacity
+  { doc: emptyLayout("fx-panel-small"), schedule: doors(12) },
+  { doc: emptyLayout("fx-panel-small", { inputs: doors(4).map((d, i) => inp("panel", i + 1, [d.id])) }), schedule: doors(4), catalog: catalogWithPanel("fx-panel-small", { maxZones: 3 }) },
+  {
+    doc: emptyLayout("fx-panel-small", { boards: [board("b1", "expansion", "fx-exp-8-shared", 1)], inputs: [inp("panel", 1, ["d1", "d2"], { scheme: "double-eol" }), inp("b1", 1, ["d3"], { scheme: "shared" }), inp("panel", 2, ["d4", "d5"], { scheme: "shared" })] }),
+    schedule: doors(5),
+  },
+  // loops: sharing, supervision below what the schedule asks, life safety
+  { doc: emptyLayout("fx-panel-large", { inputs: [inp("panel", 1, ["a", "b"]), inp("panel", 2, ["c"], { scheme: "single-eol" })] }), schedule: [det("a", "fx-door", { supervision: "shared-ok" }), det("b", "fx-door", { supervision: "double-eol" }), det("c", "fx-door", { supervision: "double-eol" })] },
+  { doc: emptyLayout("fx-panel-large", { inputs: [inp("panel", 1, ["s", "a"]), inp("panel", 2, ["h"], { scheme: "single-eol" })] }), schedule: [det("s", "fx-smoke", { label: "Landing smoke" }), det("a", "fx-door", { supervision: "shared-ok" }), det("h", "fx-heat", { label: "Kitchen heat" })] },
+  { doc: emptyLayout("fx-panel-fire", { power: { standbyProfileId: "nfpa72-fire", safetyFactor: 1.25 }, inputs: [inp("panel", 1, ["s"])] }), schedule: [det("s", "fx-smoke")] },
+  { doc: emptyLayout("fx-panel-small", { inputs: [inp("panel", 1, ["a"]), inp("panel", 2, ["c"])] }), schedule: [det("a", "fx-door", { label: "Front door" }), det("c", "fx-door", { label: "Far shed", cableM: 2000 })] },
+  // the data bus
+  {
+    doc: emptyLayout("fx-panel-small", {
+      busCableM: 400,
+      boards: [board("b1", "expansion", "fx-exp-8", 1), board("b2", "expansion", "fx-exp-8", 1), board("b3", "keypad", "fx-keypad", 9), board("b4", "keypad", "fx-keypad", null), board("b5", "expansion", "fx-exp-fire-4", 2)],
+    }),
+    schedule: [],
+  },
+  { doc: emptyLayout("fx-panel-small", { boards: [board("b1", "expansion", fixtureCatalog.expansionBoards[0].id, 4)] }), schedule: [], catalog: offBusCatalog },
+  // power
+  { doc: emptyLayout("fx-panel-small", { boards: [board("b1", "expansion", "fx-exp-8", 1), board("b2", "expansion", "fx-exp-8", 2, { poweredBy: "b1" }), board("b3", "expansion", "fx-exp-8-psu", 3, { poweredBy: "b1" })] }), schedule: [] },
+  { doc: emptyLayout("fx-panel-small", { power: { standbyProfileId: "no-such-profile", safetyFactor: 1.2 } }), schedule: [] },
+  { doc: emptyLayout("fx-panel-small", { inputs: pirs(8, "fx-pir-hungry").map((d, i) => inp("panel", i + 1, [d.id])) }), schedule: pirs(8, "fx-pir-hungry"), catalog: catalogWithPanel("fx-panel-small", { maxBatteryAh: 1, auxOutputMa: 100 }) },
+  { doc: emptyLayout("fx-panel-small", { inputs: [inp("panel", 1, ["h1"]), inp("panel", 2, ["p1"])] }), schedule: [det("h1", "fx-pir-hungry", { cableM: 300, gauge: { awg: 24 } }), det("p1", "fx-pir", { cableM: 600, gauge: { awg: 24 } })] },
+];
+
+/** Every finding of every sample, message and reason together. */
+export function solverSamples(): { code: string; text: string }[] {
+  return samples.flatMap((s) => solveLayout(s.doc, s.schedule, s.catalog ?? fixtureCatalog).findings.map((f) => ({ code: f.code, text: `${f.message} — ${f.why}` })));
+}
