@@ -37,6 +37,7 @@ const LABELS: Record<string, string> = {
   mm2: "conductor cross-section",
   gauge: "cable gauge",
   label: "name",
+  reading: "reading",
   name: "name",
   email: "e-mail",
   password: "password",

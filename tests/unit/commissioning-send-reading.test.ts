@@ -31,7 +31,7 @@ describe("sending a kept reading", () => {
 
   it("takes a refusal (422) as final, with the field issues in the reason", async () => {
     answer(422, { error: "Some fields are not valid.", issues: [{ path: "reading", message: "not a meter reading" }] });
-    expect(await sendReading(7, q)).toEqual({ kind: "refused", error: "Some fields are not valid. reading: not a meter reading" });
+    expect(await sendReading(7, q)).toEqual({ kind: "refused", error: "Some fields are not valid. Reading: not a meter reading" });
   });
 
   it("takes a closed record (409) as final", async () => {
