@@ -4,7 +4,7 @@ import type { InputType, Report } from "@/lib/catalog/schema";
 import type { Finding, FindingTarget } from "@/lib/findings";
 import { conductorAt, compileLoop, encodeStates, enumerateStates, evalFaults, FAULTS, SCHEME_SHARED, STATE_ACTIVE, STATE_TAMPER, type LoopModel } from "./loop-model";
 import { acceptableFor, bandIndex, compileBands, marginOf, REPORT_BIT, reportsBetween } from "./loop-bands";
-import { loopProblems, type LoopProblem } from "./loop-problems";
+import { inputTypeProblems, loopShapeProblems, type LoopProblem } from "./loop-problems";
 import { maxCableRun, type CableRow } from "./max-cable";
 import { FAULT_WORDS, statesLabel } from "./row-labels";
 import { buildFindings } from "./loop-findings";
@@ -47,7 +47,7 @@ function invalidAnalysis(problems: LoopProblem[], target: FindingTarget): LoopAn
 }
 
 export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: FindingTarget = LAYOUT): LoopAnalysis {
-  const problems = [...loopProblems(loop, inputType), ...wiringProblems(loop)];
+  const problems: LoopProblem[] = wiringProblems(loop, inputTypeProblems(loop, inputType, loopShapeProblems(loop)));
   if (problems.length) return invalidAnalysis(problems, target);
   const m = compileLoop(loop, inputType);
   const cb = compileBands(inputType.bands[loop.scheme]!);

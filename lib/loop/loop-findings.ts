@@ -321,31 +321,32 @@ function silencingShort(rows: readonly Reading[], defeats: readonly Reading["fau
   return worst(faultRows(rows, order[0]), normal);
 }
 
-function situation(r: Reading): string {
-  if (r.fault !== "none") return SITUATION_WORDS[r.fault];
-  if (r.expected === "normal") return "all at rest";
-  if (r.expected === "open") return "a tamper";
-  return "an alarm";
-}
-
-const SITUATION_WORDS = { "short-panel": "a short at the panel end", "short-detector": "a short at the detector end", cut: "a cut conductor" } as const;
 const SITUATION_ORDER = ["all at rest", "an alarm", "a tamper", "a short at the detector end", "a short at the panel end", "a cut conductor"];
+const FAULT_SITUATION = { none: -1, "short-detector": 3, "short-panel": 4, cut: 5 } as const;
+const GROUP_WORDS = SITUATION_ORDER.map((a, i) => SITUATION_ORDER.map((b, j) => (i === j ? `${a} and another ${a.replace(/^(a|an|all at) /, "")}` : `${a} and ${b}`)));
+
+/** Index in SITUATION_ORDER of what a row is: a fault, else all at rest, a tamper or an alarm. */
+function situation(r: Reading): number {
+  const f = FAULT_SITUATION[r.fault];
+  if (f >= 0) return f;
+  return r.expected === "normal" ? 0 : r.expected === "open" ? 2 : 1;
+}
 
 /** Pairs grouped by the two kinds of situation they mix up, in a fixed order, each with a count and the first example. */
 function indistinguishableGroups(rows: readonly Reading[], pairs: readonly [number, number][]): { words: string; count: number; example: string }[] {
-  const groups = new Map<string, { a: number; b: number; count: number; example: string }>();
+  const n = SITUATION_ORDER.length;
+  const counts = new Int32Array(n * n);
+  const examples: string[] = [];
   for (const [i, j] of pairs) {
-    let a = SITUATION_ORDER.indexOf(situation(rows[i]));
-    let b = SITUATION_ORDER.indexOf(situation(rows[j]));
+    let a = situation(rows[i]);
+    let b = situation(rows[j]);
     if (a > b) [a, b] = [b, a];
-    const key = `${a}:${b}`;
-    const g = groups.get(key);
-    if (g) g.count++;
-    else groups.set(key, { a, b, count: 1, example: `${rows[i].label} and ${rows[j].label}` });
+    const k = a * n + b;
+    if (counts[k]++ === 0) examples[k] = `${rows[i].label} and ${rows[j].label}`;
   }
-  return [...groups.values()]
-    .sort((x, y) => x.a - y.a || x.b - y.b)
-    .map((g) => ({ words: g.a === g.b ? `${SITUATION_ORDER[g.a]} and another ${SITUATION_ORDER[g.a].replace(/^(a|an|all at) /, "")}` : `${SITUATION_ORDER[g.a]} and ${SITUATION_ORDER[g.b]}`, count: g.count, example: g.example }));
+  const out: { words: string; count: number; example: string }[] = [];
+  for (let k = 0; k < n * n; k++) if (counts[k]) out.push({ words: GROUP_WORDS[(k / n) | 0][k % n], count: counts[k], example: examples[k] });
+  return out;
 }
 
 /** What a shared input loses against one detector per input, from this loop's own readings. */
