@@ -13,7 +13,9 @@ import { attachWiring, wiringProblems } from "./wiring-analysis";
 import type { Fault, LoopAnalysis, LoopSpec, Reading } from "./types";
 
 const LAYOUT: FindingTarget = { kind: "layout" };
-function expectedFor(m: LoopModel, code: Uint8Array): Report {
+/** Situation index of each fault (FAULTS order: short at the panel end, at the detector end, cut), as the findings group them. */
+const FAULT_SITUATION = [0, 4, 3, 5];
+function expectedFor(m: LoopModel, code: readonly number[]): Report {
   let active = 0;
   for (let i = 0; i < code.length; i++) {
     if (code[i] === STATE_TAMPER) return "open";
@@ -26,6 +28,14 @@ function expectedFor(m: LoopModel, code: Uint8Array): Report {
     return "normal";
   }
   return active > 0 ? "active" : "normal";
+}
+
+// Per-call work arrays, reused: allocating typed arrays per loop showed in the profile. Used only within one call
+// (buildFindings reads the situations before analyzeLoop returns).
+const scratchArrays = [new Int32Array(256), new Int32Array(256)];
+function scratch(n: number, k = 0): Int32Array {
+  if (scratchArrays[k].length < n) scratchArrays[k] = new Int32Array(Math.max(n, 2 * scratchArrays[k].length));
+  return scratchArrays[k];
 }
 
 function invalidAnalysis(problems: LoopProblem[], target: FindingTarget): LoopAnalysis {
@@ -60,6 +70,8 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
   const eHi = m.eol * hi, aHi = m.alarm * hi, saHi = m.sa * hi, sbHi = m.sb * hi;
 
   const combos = enumerateStates(loop.detectors);
+  // each row's situation for the findings' grouping: 0 all at rest, 1 an alarm, 2 a tamper, then the faults
+  const situations = scratch(combos.length * 4);
   const rows: Reading[] = [];
   const masks: number[] = [];
   const cableRows: CableRow[] = [];
@@ -101,6 +113,7 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
         nominalOhms,
         label: f === 0 ? sl : `${FAULT_WORDS[fault]} (${sl})`,
       });
+      situations[rows.length - 1] = f === 0 ? (exp0 === "normal" ? 0 : exp0 === "open" ? 2 : 1) : FAULT_SITUATION[f];
       masks.push(mask);
       const hi0 = vHi0[f];
       if (hi0 < Infinity) {
@@ -125,10 +138,13 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
 
   const indistinguishable: Array<[number, number]> = [];
   const nRows = rows.length;
+  // expected reports as bits, so the pair test touches only two number arrays
+  const exp = scratch(nRows, 1);
+  for (let i = 0; i < nRows; i++) exp[i] = REPORT_BIT[rows[i].expected];
   for (let i = 0; i < nRows; i++) {
     const mi = masks[i];
-    const ei = rows[i].expected;
-    for (let j = i + 1; j < nRows; j++) if ((mi & masks[j]) !== 0 && ei !== rows[j].expected) indistinguishable.push([i, j]);
+    const ei = exp[i];
+    for (let j = i + 1; j < nRows; j++) if ((mi & masks[j]) !== 0 && ei !== exp[j]) indistinguishable.push([i, j]);
   }
 
   const conductorOhms = { minOhms: m.conductors * rcLo, maxOhms: m.conductors * rcHi };
@@ -157,7 +173,7 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
       return { states: r.states, minOhms: r.minOhms, maxOhms: r.maxOhms, report, unique: r.reports.length === 1 && report === r.expected && (masks[i] & others) === 0 };
     });
   }
-  const findings: Finding[] = buildFindings({ loop, inputType, model: m, rows, masks, analysis }, target);
+  const findings: Finding[] = buildFindings({ loop, inputType, model: m, rows, masks, analysis, situations }, target);
   analysis.findings = findings;
   attachWiring(analysis, loop, inputType, m, target);
   return analysis;

@@ -19,6 +19,8 @@ export interface FindingsInput {
   rows: Reading[];
   masks: number[];
   analysis: LoopAnalysis;
+  /** Each row's index in SITUATION_ORDER, when the caller has it already (else worked out from the row). */
+  situations?: ArrayLike<number>;
 }
 
 const ROLE_WORDS: Record<ResistorUse["role"], string> = {
@@ -181,7 +183,7 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
 
   // States the panel can't tell apart, grouped by the kinds of situation involved (an alarm and a cut, …).
   if (analysis.indistinguishable.length) {
-    const groups = indistinguishableGroups(rows, analysis.indistinguishable);
+    const groups = indistinguishableGroups(rows, analysis.indistinguishable, ctx.situations);
     push(out, target, "readings-indistinguishable",
       "note",
       `The panel can't tell apart: ${groups.map((g) => `${g.words} (${g.count === 1 ? "" : `${g.count} cases, `}e.g. ${g.example})`).join("; ")}`,
@@ -322,26 +324,27 @@ function silencingShort(rows: readonly Reading[], defeats: readonly Reading["fau
 }
 
 const SITUATION_ORDER = ["all at rest", "an alarm", "a tamper", "a short at the detector end", "a short at the panel end", "a cut conductor"];
-const FAULT_SITUATION = { none: -1, "short-detector": 3, "short-panel": 4, cut: 5 } as const;
 const GROUP_WORDS = SITUATION_ORDER.map((a, i) => SITUATION_ORDER.map((b, j) => (i === j ? `${a} and another ${a.replace(/^(a|an|all at) /, "")}` : `${a} and ${b}`)));
 
 /** Index in SITUATION_ORDER of what a row is: a fault, else all at rest, a tamper or an alarm. */
 function situation(r: Reading): number {
-  const f = FAULT_SITUATION[r.fault];
-  if (f >= 0) return f;
-  return r.expected === "normal" ? 0 : r.expected === "open" ? 2 : 1;
+  const f = r.fault;
+  if (f === "none") return r.expected === "normal" ? 0 : r.expected === "open" ? 2 : 1;
+  return f === "short-detector" ? 3 : f === "short-panel" ? 4 : 5;
 }
 
 /** Pairs grouped by the two kinds of situation they mix up, in a fixed order, each with a count and the first example. */
-function indistinguishableGroups(rows: readonly Reading[], pairs: readonly [number, number][]): { words: string; count: number; example: string }[] {
+function indistinguishableGroups(rows: readonly Reading[], pairs: readonly [number, number][], known?: ArrayLike<number>): { words: string; count: number; example: string }[] {
   const n = SITUATION_ORDER.length;
+  const sit = known ?? Int8Array.from(rows, situation);
   const counts = new Int32Array(n * n);
   const examples: string[] = [];
-  for (const [i, j] of pairs) {
-    let a = situation(rows[i]);
-    let b = situation(rows[j]);
-    if (a > b) [a, b] = [b, a];
-    const k = a * n + b;
+  for (let q = 0; q < pairs.length; q++) {
+    const i = pairs[q][0];
+    const j = pairs[q][1];
+    const a = sit[i];
+    const b = sit[j];
+    const k = a < b ? a * n + b : b * n + a;
     if (counts[k]++ === 0) examples[k] = `${rows[i].label} and ${rows[j].label}`;
   }
   const out: { words: string; count: number; example: string }[] = [];

@@ -199,9 +199,10 @@ export interface ReadingParams {
 
 const STATE_CODE: Record<DetectorState, number> = { rest: STATE_REST, active: STATE_ACTIVE, tamper: STATE_TAMPER };
 
-export function encodeStates(states: readonly DetectorState[]): Uint8Array {
-  const out = new Uint8Array(states.length);
-  for (let i = 0; i < states.length; i++) out[i] = STATE_CODE[states[i]];
+/** States as codes (a plain array: allocating a typed array per state combination costs more than it saves). */
+export function encodeStates(states: readonly DetectorState[]): number[] {
+  const out: number[] = [];
+  for (let i = 0; i < states.length; i++) out.push(STATE_CODE[states[i]]);
   return out;
 }
 
