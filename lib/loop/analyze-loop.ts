@@ -32,10 +32,44 @@ function expectedFor(m: LoopModel, code: readonly number[]): Report {
 
 // Per-call work arrays, reused: allocating typed arrays per loop showed in the profile. Used only within one call
 // (buildFindings reads the situations before analyzeLoop returns).
-const scratchArrays = [new Int32Array(256), new Int32Array(256)];
+const scratchArrays = [new Int32Array(256), new Int32Array(256), new Int32Array(256)];
 function scratch(n: number, k = 0): Int32Array {
   if (scratchArrays[k].length < n) scratchArrays[k] = new Int32Array(Math.max(n, 2 * scratchArrays[k].length));
   return scratchArrays[k];
+}
+
+/**
+ * Every pair of rows (i < j, in that order) that can give the same report while expecting different ones. A row
+ * whose interval stays in one band pairs only with the rows touching that band: those are walked from a list per
+ * report; a row straddling bands (rare) is compared with every later row.
+ */
+function indistinguishablePairs(rows: readonly Reading[], masks: readonly number[]): Array<[number, number]> {
+  const out: Array<[number, number]> = [];
+  const nRows = rows.length;
+  // expected reports as bits, so the pair test touches only number arrays
+  const exp = scratch(nRows, 1);
+  for (let i = 0; i < nRows; i++) exp[i] = REPORT_BIT[rows[i].expected];
+  const byBit: number[][] = [];
+  const next = scratch(nRows, 2); // single-band rows: where the rows after it start in its band's list
+  for (let i = 0; i < nRows; i++) {
+    const mi = masks[i];
+    for (let b = 0; 1 << b <= mi; b++)
+      if (mi & (1 << b)) {
+        const list = (byBit[b] ??= []);
+        list.push(i);
+        next[i] = list.length;
+      }
+  }
+  for (let i = 0; i < nRows; i++) {
+    const mi = masks[i];
+    const ei = exp[i];
+    if (mi === 0) continue;
+    if ((mi & (mi - 1)) === 0) {
+      const list = byBit[31 - Math.clz32(mi)];
+      for (let k = next[i]; k < list.length; k++) if (ei !== exp[list[k]]) out.push([i, list[k]]);
+    } else for (let j = i + 1; j < nRows; j++) if ((mi & masks[j]) !== 0 && ei !== exp[j]) out.push([i, j]);
+  }
+  return out;
 }
 
 function invalidAnalysis(problems: LoopProblem[], target: FindingTarget): LoopAnalysis {
@@ -136,16 +170,7 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
     faults[FAULTS[f] as Exclude<Fault, "none">] = verdict;
   }
 
-  const indistinguishable: Array<[number, number]> = [];
-  const nRows = rows.length;
-  // expected reports as bits, so the pair test touches only two number arrays
-  const exp = scratch(nRows, 1);
-  for (let i = 0; i < nRows; i++) exp[i] = REPORT_BIT[rows[i].expected];
-  for (let i = 0; i < nRows; i++) {
-    const mi = masks[i];
-    const ei = exp[i];
-    for (let j = i + 1; j < nRows; j++) if ((mi & masks[j]) !== 0 && ei !== exp[j]) indistinguishable.push([i, j]);
-  }
+  const indistinguishable = indistinguishablePairs(rows, masks);
 
   const conductorOhms = { minOhms: m.conductors * rcLo, maxOhms: m.conductors * rcHi };
   const hotPerM = conductorAt(m, m.tMax, 1);
