@@ -31,8 +31,10 @@ function expectedFor(m: LoopModel, code: readonly number[]): Report {
 }
 
 // Per-call work arrays, reused: allocating typed arrays per loop showed in the profile. Used only within one call
-// (buildFindings reads the situations before analyzeLoop returns).
+// (buildFindings reads the situations, and the pair search the expected bits, before analyzeLoop returns).
 const scratchArrays = [new Int32Array(256), new Int32Array(256), new Int32Array(256)];
+/** The four fault readings at: low parts and coldest, high parts and hottest, nominal, and both on a zero-length cable. */
+const READINGS = [0, 1, 2, 3, 4].map(() => new Float64Array(4));
 function scratch(n: number, k = 0): Int32Array {
   if (scratchArrays[k].length < n) scratchArrays[k] = new Int32Array(Math.max(n, 2 * scratchArrays[k].length));
   return scratchArrays[k];
@@ -43,12 +45,9 @@ function scratch(n: number, k = 0): Int32Array {
  * whose interval stays in one band pairs only with the rows touching that band: those are walked from a list per
  * report; a row straddling bands (rare) is compared with every later row.
  */
-function indistinguishablePairs(rows: readonly Reading[], masks: readonly number[]): Array<[number, number]> {
+function indistinguishablePairs(masks: readonly number[], exp: Int32Array): Array<[number, number]> {
   const out: Array<[number, number]> = [];
-  const nRows = rows.length;
-  // expected reports as bits, so the pair test touches only number arrays
-  const exp = scratch(nRows, 1);
-  for (let i = 0; i < nRows; i++) exp[i] = REPORT_BIT[rows[i].expected];
+  const nRows = masks.length;
   const byBit: number[][] = [];
   const next = scratch(nRows, 2); // single-band rows: where the rows after it start in its band's list
   for (let i = 0; i < nRows; i++) {
@@ -109,11 +108,8 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
   const rows: Reading[] = [];
   const masks: number[] = [];
   const cableRows: CableRow[] = [];
-  const vLo = new Float64Array(4);
-  const vHi = new Float64Array(4);
-  const vNom = new Float64Array(4);
-  const vLo0 = new Float64Array(4);
-  const vHi0 = new Float64Array(4);
+  const [vLo, vHi, vNom, vLo0, vHi0] = READINGS;
+  const expBits = scratch(combos.length * 4, 1);
   for (const states of combos) {
     const code = encodeStates(states);
     const exp0 = expectedFor(m, code);
@@ -147,6 +143,7 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
         nominalOhms,
         label: f === 0 ? sl : `${FAULT_WORDS[fault]} (${sl})`,
       });
+      expBits[rows.length - 1] = REPORT_BIT[expected];
       situations[rows.length - 1] = f === 0 ? (exp0 === "normal" ? 0 : exp0 === "open" ? 2 : 1) : FAULT_SITUATION[f];
       masks.push(mask);
       const hi0 = vHi0[f];
@@ -170,7 +167,7 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
     faults[FAULTS[f] as Exclude<Fault, "none">] = verdict;
   }
 
-  const indistinguishable = indistinguishablePairs(rows, masks);
+  const indistinguishable = indistinguishablePairs(masks, expBits);
 
   const conductorOhms = { minOhms: m.conductors * rcLo, maxOhms: m.conductors * rcHi };
   const hotPerM = conductorAt(m, m.tMax, 1);

@@ -333,11 +333,13 @@ function situation(r: Reading): number {
   return f === "short-detector" ? 3 : f === "short-panel" ? 4 : 5;
 }
 
+const GROUP_COUNTS = new Int32Array(SITUATION_ORDER.length * SITUATION_ORDER.length);
+
 /** Pairs grouped by the two kinds of situation they mix up, in a fixed order, each with a count and the first example. */
 function indistinguishableGroups(rows: readonly Reading[], pairs: readonly [number, number][], known?: ArrayLike<number>): { words: string; count: number; example: string }[] {
   const n = SITUATION_ORDER.length;
   const sit = known ?? Int8Array.from(rows, situation);
-  const counts = new Int32Array(n * n);
+  const counts = GROUP_COUNTS.fill(0);
   const examples: string[] = [];
   for (let q = 0; q < pairs.length; q++) {
     const i = pairs[q][0];
