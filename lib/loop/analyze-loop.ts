@@ -15,6 +15,11 @@ import type { Fault, LoopAnalysis, LoopSpec, Reading } from "./types";
 const LAYOUT: FindingTarget = { kind: "layout" };
 /** Situation index of each fault (FAULTS order: short at the panel end, at the detector end, cut), as the findings group them. */
 const FAULT_SITUATION = [0, 4, 3, 5];
+const OPEN_BIT = REPORT_BIT.open;
+const NORMAL_BIT = REPORT_BIT.normal;
+const SHORT_BIT = REPORT_BIT.short;
+const OPEN_OK = acceptableFor("open");
+const SHORT_OK = acceptableFor("short");
 function expectedFor(m: LoopModel, code: readonly number[]): Report {
   let active = 0;
   for (let i = 0; i < code.length; i++) {
@@ -113,6 +118,9 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
   for (const states of combos) {
     const code = encodeStates(states);
     const exp0 = expectedFor(m, code);
+    const exp0Bit = REPORT_BIT[exp0];
+    const exp0Ok = acceptableFor(exp0);
+    const sit0 = exp0 === "normal" ? 0 : exp0 === "open" ? 2 : 1;
     const sl = statesLabel(loop.detectors, states);
     evalFaults(m, code, rcLo, eLo, aLo, saLo, sbLo, vLo);
     evalFaults(m, code, rcHi, eHi, aHi, saHi, sbHi, vHi);
@@ -143,13 +151,13 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
         nominalOhms,
         label: f === 0 ? sl : `${FAULT_WORDS[fault]} (${sl})`,
       });
-      expBits[rows.length - 1] = REPORT_BIT[expected];
-      situations[rows.length - 1] = f === 0 ? (exp0 === "normal" ? 0 : exp0 === "open" ? 2 : 1) : FAULT_SITUATION[f];
+      expBits[rows.length - 1] = f === 0 ? exp0Bit : f === 3 ? OPEN_BIT : SHORT_BIT;
+      situations[rows.length - 1] = f === 0 ? sit0 : FAULT_SITUATION[f];
       masks.push(mask);
       const hi0 = vHi0[f];
       if (hi0 < Infinity) {
         const b0 = bandIndex(cb, hi0);
-        if (b0 === bandIndex(cb, vLo0[f]) && (cb.masks[b0] & ~acceptableFor(expected)) === 0) cableRows.push({ code, fault: f, maxAtZeroOhms: hi0, edgeOhms: cb.to[b0] });
+        if (b0 === bandIndex(cb, vLo0[f]) && (cb.masks[b0] & ~(f === 0 ? exp0Ok : f === 3 ? OPEN_OK : SHORT_OK)) === 0) cableRows.push({ code, fault: f, maxAtZeroOhms: hi0, edgeOhms: cb.to[b0] });
       }
     }
   }
@@ -157,12 +165,13 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
   const faults = { "short-panel": "detected", "short-detector": "detected", cut: "detected" } as LoopAnalysis["faults"];
   for (let f = 1; f < 4; f++) {
     let verdict: "detected" | "mistaken" | "defeat" = "detected";
+    const ok = f === 3 ? OPEN_OK : SHORT_OK;
     for (let i = f; i < rows.length; i += 4) {
-      if (masks[i] & REPORT_BIT.normal) {
+      if (masks[i] & NORMAL_BIT) {
         verdict = "defeat";
         break;
       }
-      if (masks[i] & ~acceptableFor(rows[i].expected)) verdict = "mistaken";
+      if (masks[i] & ~ok) verdict = "mistaken";
     }
     faults[FAULTS[f] as Exclude<Fault, "none">] = verdict;
   }
