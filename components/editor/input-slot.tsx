@@ -6,7 +6,7 @@ import { useEditor } from "@/components/editor/editor-context";
 import { DetectorChip } from "@/components/editor/detector-chip";
 import { FindingMarker } from "@/components/editor/finding-marker";
 import { dropEdit, inputDropId, placementLabels, resistorLines, resistorText, schemeLabels } from "@/components/editor/editor-model";
-import { setInputWiring, type WiringPatch } from "@/lib/layout/operations";
+import { classAAllowed, setInputWiring, type WiringPatch } from "@/lib/layout/operations";
 import type { LayoutInput } from "@/lib/layout/schema";
 import { inputName } from "@/lib/layout/names";
 
@@ -87,6 +87,12 @@ function WiringControls({ entry, type, where }: { entry: LayoutInput; type: Inpu
               />
             ))
           : null}
+        {classAAllowed(type, entry.scheme) || entry.pathway === "class-a" ? (
+          <label className="flex items-center gap-1">
+            <input type="checkbox" aria-label={`Return path to the panel (Class A) on ${where}`} checked={entry.pathway === "class-a"} onChange={(e) => set({ pathway: e.target.checked ? "class-a" : "class-b" })} />
+            <span>Return path to the panel (Class A)</span>
+          </label>
+        ) : null}
         <p className="text-slate-500">Blank fields use the input type&apos;s expected values.</p>
       </div>
     </details>
@@ -124,6 +130,7 @@ export function InputSlot({ boardKey, n, type }: { boardKey: string; n: number; 
         <p className="mb-1 text-[11px] text-slate-600">
           <span className="font-medium text-ink">{schemeLabels[entry.scheme] ?? entry.scheme}</span>
           {entry.placement !== "at-detector" ? <span className="text-warn"> · {placementLabels[entry.placement]}</span> : null}
+          {entry.pathway === "class-a" ? <span> · Class A</span> : null}
           <br />
           {resistorText(resistorLines(entry, type))}
         </p>

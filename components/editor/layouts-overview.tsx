@@ -79,6 +79,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
   const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
   const [suggestions, setSuggestions] = useState<SuggestionView[] | null>(null);
+  const [classA, setClassA] = useState(false);
 
   async function create(body: unknown) {
     setBusy(true);
@@ -96,7 +97,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
     setBusy(true);
     setMessage(null);
     try {
-      const r = await sendJson<{ suggestions: SuggestionView[] }>(`/api/sites/${siteId}/suggestions`, "POST", {});
+      const r = await sendJson<{ suggestions: SuggestionView[] }>(`/api/sites/${siteId}/suggestions`, "POST", classA ? { pathway: "class-a" } : {});
       setSuggestions(r.suggestions);
     } catch (e) {
       setMessage({ kind: "error", text: describeError(e) });
@@ -178,6 +179,10 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
             <p className="mt-1 text-sm text-slate-600">
               The cheapest catalog hardware that carries {detectorCount === 1 ? "the one detector" : `all ${plural(detectorCount, "detector")}`} of the device schedule without errors: once with one detector per input, once letting detectors that allow it share an input.
             </p>
+            <label className="mt-2 flex items-center gap-2 text-sm">
+              <input type="checkbox" checked={classA} onChange={(e) => setClassA(e.target.checked)} />
+              Return each fire detector&apos;s loop to the panel (Class A)
+            </label>
             <Button className="mt-3" variant="secondary" disabled={busy || detectorCount === 0} onClick={suggest}>
               {busy && !suggestions ? "Working…" : "Suggest hardware"}
             </Button>

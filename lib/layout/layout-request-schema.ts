@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { layoutDocumentSchema, layoutPowerSchema } from "@/lib/layout/schema";
+import { layoutDocumentSchema, layoutPowerSchema, pathwaySchema } from "@/lib/layout/schema";
 
 // Request bodies of the layout API, shared by the route handlers, the forms and the OpenAPI document.
 
@@ -9,7 +9,7 @@ const noteSchema = z.string().trim().max(500);
 export const createLayoutSchema = z.union([
   z.strictObject({ name: nameSchema, note: noteSchema.optional(), document: layoutDocumentSchema }),
   z.strictObject({ name: nameSchema, note: noteSchema.optional(), panelId: z.string().min(1).max(63) }),
-  z.strictObject({ name: nameSchema, note: noteSchema.optional(), suggestion: z.strictObject({ allowShared: z.boolean(), busCableM: z.number().nonnegative().max(100000).optional() }) }),
+  z.strictObject({ name: nameSchema, note: noteSchema.optional(), suggestion: z.strictObject({ allowShared: z.boolean(), busCableM: z.number().nonnegative().max(100000).optional(), pathway: pathwaySchema.optional() }) }),
 ]);
 export type CreateLayoutInput = z.infer<typeof createLayoutSchema>;
 
@@ -25,7 +25,12 @@ export const restoreSchema = z.strictObject({ version: z.number().int().positive
 export type RestoreInput = z.infer<typeof restoreSchema>;
 
 export const suggestRequestSchema = z
-  .strictObject({ busCableM: z.number().nonnegative().max(100000).optional(), power: layoutPowerSchema.optional() })
+  .strictObject({
+    busCableM: z.number().nonnegative().max(100000).optional(),
+    power: layoutPowerSchema.optional(),
+    /** "class-a": wire each life-safety detector's input out and back to the panel (NFPA 72 Class A). */
+    pathway: pathwaySchema.optional(),
+  })
   .optional();
 export type SuggestRequest = z.infer<typeof suggestRequestSchema>;
 

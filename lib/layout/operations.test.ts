@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { addBoard, assign, makeShared, moveBetween, removeBoard, reorderBoards, setBusAddress, setInputWiring, setPoweredBy, unassign, unplacedDetectorIds, type LayoutContext } from "@/lib/layout/operations";
+import { addBoard, assign, classAAllowed, makeShared, moveBetween, removeBoard, reorderBoards, setBusAddress, setInputWiring, setPoweredBy, unassign, unplacedDetectorIds, type LayoutContext } from "@/lib/layout/operations";
 import { layoutDocumentSchema, type LayoutDocument } from "@/lib/layout/schema";
+import { createLayoutSchema, suggestRequestSchema } from "@/lib/layout/layout-request-schema";
 import { fixtureCatalog } from "@/lib/solver/testing/fixture-catalog";
 import { det, emptyLayout } from "@/lib/solver/testing/fixture-schedule";
 
@@ -86,6 +87,41 @@ describe("layout operations", () => {
     expect(removed.message).toBe("Expansion board 2 removed; 2 detectors back to unplaced");
     expect(removed.layout.inputs).toEqual([]);
     expect(addBoard(doc, ctx, "expansion", "no-such").ok).toBe(false);
+  });
+  it("returns a life-safety input's loop to the panel (Class A) and back, and refuses it where the input type can't", () => {
+    const fireCtx: LayoutContext = { schedule: [det("s1", "fx-smoke", { label: "Stair smoke" })], catalog: fixtureCatalog };
+    const at = { boardKey: "panel", input: 1 };
+    const doc = assign(emptyLayout("fx-panel-fire"), fireCtx, "s1", at).layout;
+    const a = setInputWiring(doc, fireCtx, at, { pathway: "class-a" });
+    expect(a).toMatchObject({ ok: true, message: "Control panel, input 1 wiring set: return path to the panel (Class A)" });
+    expect(a.layout.inputs[0].pathway).toBe("class-a");
+    expect(layoutDocumentSchema.safeParse(a.layout).success).toBe(true);
+    // back to Class B clears the field: the document keeps its default shape
+    const b = setInputWiring(a.layout, fireCtx, at, { pathway: "class-b" });
+    expect(b.ok).toBe(true);
+    expect("pathway" in b.layout.inputs[0]).toBe(false);
+    // an intruder input type carries no Class A option
+    const door = assign(withBoards(), ctx, "d1", { boardKey: "b1", input: 1 }).layout;
+    const refused = setInputWiring(door, ctx, { boardKey: "b1", input: 1 }, { pathway: "class-a" });
+    expect(refused.ok).toBe(false);
+    expect(refused.message).toMatch(/Class A\): that needs a life-safety input type/);
+    expect(refused.layout).toBe(door);
+  });
+  it("the suggestion request and the create-from-suggestion body take a pathway, and refuse any other word", () => {
+    expect(suggestRequestSchema.parse({ pathway: "class-a" })).toEqual({ pathway: "class-a" });
+    expect(suggestRequestSchema.safeParse({ pathway: "loop" }).error?.issues[0].path).toEqual(["pathway"]);
+    expect(createLayoutSchema.safeParse({ name: "A", suggestion: { allowShared: false, pathway: "class-a" } }).success).toBe(true);
+    expect(createLayoutSchema.safeParse({ name: "A", suggestion: { allowShared: false, pathway: "class-c" } }).success).toBe(false);
+  });
+  it("allows Class A only on a life-safety input type wired with an end-of-line scheme", () => {
+    const fire = fixtureCatalog.inputTypes.find((t) => t.lifeSafety)!;
+    const intruder = fixtureCatalog.inputTypes.find((t) => !t.lifeSafety)!;
+    expect(classAAllowed(fire, "double-eol")).toBe(true);
+    expect(classAAllowed(fire, "single-eol")).toBe(true);
+    expect(classAAllowed(fire, "none")).toBe(false);
+    expect(classAAllowed(fire, "shared")).toBe(false);
+    expect(classAAllowed(intruder, "double-eol")).toBe(false);
+    expect(classAAllowed(undefined, "double-eol")).toBe(false);
   });
   it("reorders boards", () => {
     const doc = withBoards();

@@ -261,6 +261,13 @@ export interface WiringPatch {
   eolOhms?: number | null;
   alarmOhms?: number | null;
   sharedOhms?: [number, number] | null;
+  /** "class-a" returns the loop to the input (NFPA 72 Class A); "class-b" is the default and clears the field. */
+  pathway?: "class-a" | "class-b";
+}
+
+/** Whether an input of this type, wired this way, may return its loop to the panel: a life-safety input type on an end-of-line scheme. */
+export function classAAllowed(type: InputType | undefined, scheme: WiringScheme): boolean {
+  return !!type?.lifeSafety && (scheme === "single-eol" || scheme === "double-eol");
 }
 
 /** Change how an input is wired: scheme, where the resistors are, and the fitted values. */
@@ -275,13 +282,17 @@ export function setInputWiring(doc: LayoutDocument, ctx: LayoutContext, at: Inpu
     if (v === null) delete next[k];
     else if (v !== undefined) (next as Record<string, unknown>)[k] = v;
   }
+  if (patch.pathway === "class-a") next.pathway = "class-a";
+  else if (patch.pathway === "class-b") delete next.pathway;
   const type = inputBlockOf(doc, indexCatalog(ctx.catalog), at.boardKey)?.inputType;
   if (type && !type.schemes.includes(next.scheme)) return refuse(doc, `${inputName(doc, at)} does not take ${SCHEME_WORDS[next.scheme]} wiring`);
+  if (next.pathway === "class-a" && !classAAllowed(type, next.scheme)) return refuse(doc, `${inputName(doc, at)} can't return its loop to the panel (Class A): that needs a life-safety input type wired single or double end-of-line`);
   const inputs = doc.inputs.slice();
   inputs[i] = next;
   const bits: string[] = [];
   if (patch.scheme) bits.push(SCHEME_WORDS[patch.scheme]);
   if (patch.placement) bits.push(PLACEMENT_WORDS[patch.placement]);
+  if (patch.pathway) bits.push(patch.pathway === "class-a" ? "return path to the panel (Class A)" : "no return path (Class B)");
   for (const k of ["eolOhms", "alarmOhms", "sharedOhms"] as const) {
     const v = patch[k];
     if (v === undefined) continue;

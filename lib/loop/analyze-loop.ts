@@ -4,7 +4,7 @@ import type { InputType, Report } from "@/lib/catalog/schema";
 import type { Finding, FindingTarget } from "@/lib/findings";
 import { conductorAt, compileLoop, encodeStates, enumerateStates, evalFaults, FAULTS, SCHEME_SHARED, STATE_ACTIVE, STATE_TAMPER, type LoopModel } from "./loop-model";
 import { acceptableFor, bandIndex, compileBands, marginOf, REPORT_BIT, reportsBetween } from "./loop-bands";
-import { loopProblems, type LoopProblem } from "./loop-problems";
+import { inputTypeProblems, loopShapeProblems, type LoopProblem } from "./loop-problems";
 import { maxCableRun, type CableRow } from "./max-cable";
 import { FAULT_WORDS, statesLabel } from "./row-labels";
 import { buildFindings } from "./loop-findings";
@@ -14,7 +14,14 @@ import type { Fault, LoopAnalysis, LoopSpec, Reading } from "./types";
 import { withFieldLabel } from "@/lib/vocabulary/field-labels";
 
 const LAYOUT: FindingTarget = { kind: "layout" };
-function expectedFor(m: LoopModel, code: Uint8Array): Report {
+/** Situation index of each fault (FAULTS order: short at the panel end, at the detector end, cut), as the findings group them. */
+const FAULT_SITUATION = [0, 4, 3, 5];
+const OPEN_BIT = REPORT_BIT.open;
+const NORMAL_BIT = REPORT_BIT.normal;
+const SHORT_BIT = REPORT_BIT.short;
+const OPEN_OK = acceptableFor("open");
+const SHORT_OK = acceptableFor("short");
+function expectedFor(m: LoopModel, code: readonly number[]): Report {
   let active = 0;
   for (let i = 0; i < code.length; i++) {
     if (code[i] === STATE_TAMPER) return "open";
@@ -27,6 +34,47 @@ function expectedFor(m: LoopModel, code: Uint8Array): Report {
     return "normal";
   }
   return active > 0 ? "active" : "normal";
+}
+
+// Per-call work arrays, reused: allocating typed arrays per loop showed in the profile. Used only within one call
+// (buildFindings reads the situations, and the pair search the expected bits, before analyzeLoop returns).
+const scratchArrays = [new Int32Array(256), new Int32Array(256), new Int32Array(256)];
+/** The four fault readings at: low parts and coldest, high parts and hottest, nominal, and both on a zero-length cable. */
+const READINGS = [0, 1, 2, 3, 4].map(() => new Float64Array(4));
+function scratch(n: number, k = 0): Int32Array {
+  if (scratchArrays[k].length < n) scratchArrays[k] = new Int32Array(Math.max(n, 2 * scratchArrays[k].length));
+  return scratchArrays[k];
+}
+
+/**
+ * Every pair of rows (i < j, in that order) that can give the same report while expecting different ones. A row
+ * whose interval stays in one band pairs only with the rows touching that band: those are walked from a list per
+ * report; a row straddling bands (rare) is compared with every later row.
+ */
+function indistinguishablePairs(masks: readonly number[], exp: Int32Array): Array<[number, number]> {
+  const out: Array<[number, number]> = [];
+  const nRows = masks.length;
+  const byBit: number[][] = [];
+  const next = scratch(nRows, 2); // single-band rows: where the rows after it start in its band's list
+  for (let i = 0; i < nRows; i++) {
+    const mi = masks[i];
+    for (let b = 0; 1 << b <= mi; b++)
+      if (mi & (1 << b)) {
+        const list = (byBit[b] ??= []);
+        list.push(i);
+        next[i] = list.length;
+      }
+  }
+  for (let i = 0; i < nRows; i++) {
+    const mi = masks[i];
+    const ei = exp[i];
+    if (mi === 0) continue;
+    if ((mi & (mi - 1)) === 0) {
+      const list = byBit[31 - Math.clz32(mi)];
+      for (let k = next[i]; k < list.length; k++) if (ei !== exp[list[k]]) out.push([i, list[k]]);
+    } else for (let j = i + 1; j < nRows; j++) if ((mi & masks[j]) !== 0 && ei !== exp[j]) out.push([i, j]);
+  }
+  return out;
 }
 
 function invalidAnalysis(problems: LoopProblem[], target: FindingTarget): LoopAnalysis {
@@ -48,7 +96,7 @@ function invalidAnalysis(problems: LoopProblem[], target: FindingTarget): LoopAn
 }
 
 export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: FindingTarget = LAYOUT): LoopAnalysis {
-  const problems = [...loopProblems(loop, inputType), ...wiringProblems(loop)];
+  const problems: LoopProblem[] = wiringProblems(loop, inputTypeProblems(loop, inputType, loopShapeProblems(loop)));
   if (problems.length) return invalidAnalysis(problems, target);
   const m = compileLoop(loop, inputType);
   const cb = compileBands(inputType.bands[loop.scheme]!);
@@ -61,17 +109,19 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
   const eHi = m.eol * hi, aHi = m.alarm * hi, saHi = m.sa * hi, sbHi = m.sb * hi;
 
   const combos = enumerateStates(loop.detectors);
+  // each row's situation for the findings' grouping: 0 all at rest, 1 an alarm, 2 a tamper, then the faults
+  const situations = scratch(combos.length * 4);
   const rows: Reading[] = [];
   const masks: number[] = [];
   const cableRows: CableRow[] = [];
-  const vLo = new Float64Array(4);
-  const vHi = new Float64Array(4);
-  const vNom = new Float64Array(4);
-  const vLo0 = new Float64Array(4);
-  const vHi0 = new Float64Array(4);
+  const [vLo, vHi, vNom, vLo0, vHi0] = READINGS;
+  const expBits = scratch(combos.length * 4, 1);
   for (const states of combos) {
     const code = encodeStates(states);
     const exp0 = expectedFor(m, code);
+    const exp0Bit = REPORT_BIT[exp0];
+    const exp0Ok = acceptableFor(exp0);
+    const sit0 = exp0 === "normal" ? 0 : exp0 === "open" ? 2 : 1;
     const sl = statesLabel(loop.detectors, states);
     evalFaults(m, code, rcLo, eLo, aLo, saLo, sbLo, vLo);
     evalFaults(m, code, rcHi, eHi, aHi, saHi, sbHi, vHi);
@@ -102,11 +152,13 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
         nominalOhms,
         label: f === 0 ? sl : `${FAULT_WORDS[fault]} (${sl})`,
       });
+      expBits[rows.length - 1] = f === 0 ? exp0Bit : f === 3 ? OPEN_BIT : SHORT_BIT;
+      situations[rows.length - 1] = f === 0 ? sit0 : FAULT_SITUATION[f];
       masks.push(mask);
       const hi0 = vHi0[f];
       if (hi0 < Infinity) {
         const b0 = bandIndex(cb, hi0);
-        if (b0 === bandIndex(cb, vLo0[f]) && (cb.masks[b0] & ~acceptableFor(expected)) === 0) cableRows.push({ code, fault: f, maxAtZeroOhms: hi0, edgeOhms: cb.to[b0] });
+        if (b0 === bandIndex(cb, vLo0[f]) && (cb.masks[b0] & ~(f === 0 ? exp0Ok : f === 3 ? OPEN_OK : SHORT_OK)) === 0) cableRows.push({ code, fault: f, maxAtZeroOhms: hi0, edgeOhms: cb.to[b0] });
       }
     }
   }
@@ -114,23 +166,18 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
   const faults = { "short-panel": "detected", "short-detector": "detected", cut: "detected" } as LoopAnalysis["faults"];
   for (let f = 1; f < 4; f++) {
     let verdict: "detected" | "mistaken" | "defeat" = "detected";
+    const ok = f === 3 ? OPEN_OK : SHORT_OK;
     for (let i = f; i < rows.length; i += 4) {
-      if (masks[i] & REPORT_BIT.normal) {
+      if (masks[i] & NORMAL_BIT) {
         verdict = "defeat";
         break;
       }
-      if (masks[i] & ~acceptableFor(rows[i].expected)) verdict = "mistaken";
+      if (masks[i] & ~ok) verdict = "mistaken";
     }
     faults[FAULTS[f] as Exclude<Fault, "none">] = verdict;
   }
 
-  const indistinguishable: Array<[number, number]> = [];
-  const nRows = rows.length;
-  for (let i = 0; i < nRows; i++) {
-    const mi = masks[i];
-    const ei = rows[i].expected;
-    for (let j = i + 1; j < nRows; j++) if ((mi & masks[j]) !== 0 && ei !== rows[j].expected) indistinguishable.push([i, j]);
-  }
+  const indistinguishable = indistinguishablePairs(masks, expBits);
 
   const conductorOhms = { minOhms: m.conductors * rcLo, maxOhms: m.conductors * rcHi };
   const hotPerM = conductorAt(m, m.tMax, 1);
@@ -158,7 +205,7 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
       return { states: r.states, minOhms: r.minOhms, maxOhms: r.maxOhms, report, unique: r.reports.length === 1 && report === r.expected && (masks[i] & others) === 0 };
     });
   }
-  const findings: Finding[] = buildFindings({ loop, inputType, model: m, rows, masks, analysis }, target);
+  const findings: Finding[] = buildFindings({ loop, inputType, model: m, rows, masks, analysis, situations }, target);
   analysis.findings = findings;
   attachWiring(analysis, loop, inputType, m, target);
   return analysis;

@@ -57,10 +57,12 @@ function hasPart(loop: LoopSpec, part: LoopPart, detector: number | undefined): 
 }
 
 /** Why the cores or the faults asked for don't fit this loop. */
-export function conductorProblems(loop: LoopSpec): ConductorProblem[] {
-  const out: ConductorProblem[] = [];
+function unknownCore(out: ConductorProblem[], cores: CableCores, c: string, path: (string | number)[]): void {
+  if (!(CORE_COLOURS[cores] as string[]).includes(c)) out.push({ path, message: `there is no ${c} core in a ${CABLE_CORES_WORDS[cores]} cable (its cores: ${CORE_COLOURS[cores].join(", ")})` });
+}
+
+export function conductorProblems(loop: LoopSpec, out: ConductorProblem[] = []): ConductorProblem[] {
   const cores = coresOf(loop);
-  const colours = CORE_COLOURS[cores];
   if (loop.placement === "loop-back" && loop.scheme !== "none" && cores !== "four-core-loop-back")
     out.push({ path: ["cores"], message: "a loop-back resistor is reached through a four-core loop-back cable: choose that cable" });
   if (cores === "four-core-loop-back" && (loop.placement !== "loop-back" || loop.scheme === "none"))
@@ -77,11 +79,10 @@ export function conductorProblems(loop: LoopSpec): ConductorProblem[] {
       out.push({ path: ["conductorFaults"], message: `every conductor fault is enumerated for loops of up to ${MAX_DETECTORS_FOR_ALL_FAULTS} detectors (this one has ${loop.detectors.length}); list the faults to check instead` });
     return out;
   }
+  if (faults === undefined) return out;
   const L = loop.cable.lengthM;
-  const known = (c: string, path: (string | number)[]) => {
-    if (!(colours as string[]).includes(c)) out.push({ path, message: `there is no ${c} core in a ${CABLE_CORES_WORDS[cores]} cable (its cores: ${colours.join(", ")})` });
-  };
-  faults?.forEach((f, i) => {
+  const known = (c: string, path: (string | number)[]) => unknownCore(out, cores, c, path);
+  faults.forEach((f, i) => {
     if (f.kind === "part-short") {
       const why = hasPart(loop, f.part, f.detector);
       if (why) out.push({ path: ["conductorFaults", i], message: why });

@@ -20,6 +20,8 @@ export interface FindingsInput {
   rows: Reading[];
   masks: number[];
   analysis: LoopAnalysis;
+  /** Each row's index in SITUATION_ORDER, when the caller has it already (else worked out from the row). */
+  situations?: ArrayLike<number>;
 }
 
 const ROLE_WORDS: Record<ResistorUse["role"], string> = {
@@ -182,7 +184,7 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
 
   // States the panel can't tell apart, grouped by the kinds of situation involved (an alarm and a cut, …).
   if (analysis.indistinguishable.length) {
-    const groups = indistinguishableGroups(rows, analysis.indistinguishable);
+    const groups = indistinguishableGroups(rows, analysis.indistinguishable, ctx.situations);
     push(out, target, "readings-indistinguishable",
       "note",
       `The panel can't tell apart: ${groups.map((g) => `${g.words} (${g.count === 1 ? "" : `${g.count} cases, `}e.g. ${g.example})`).join("; ")}`,
@@ -322,31 +324,35 @@ function silencingShort(rows: readonly Reading[], defeats: readonly Reading["fau
   return worst(faultRows(rows, order[0]), normal);
 }
 
-function situation(r: Reading): string {
-  if (r.fault !== "none") return SITUATION_WORDS[r.fault];
-  if (r.expected === "normal") return "all at rest";
-  if (r.expected === "open") return "a tamper";
-  return "an alarm";
+const SITUATION_ORDER = ["all at rest", "an alarm", "a tamper", "a short at the detector end", "a short at the panel end", "a cut conductor"];
+const GROUP_WORDS = SITUATION_ORDER.map((a, i) => SITUATION_ORDER.map((b, j) => (i === j ? `${a} and another ${a.replace(/^(a|an|all at) /, "")}` : `${a} and ${b}`)));
+
+/** Index in SITUATION_ORDER of what a row is: a fault, else all at rest, a tamper or an alarm. */
+function situation(r: Reading): number {
+  const f = r.fault;
+  if (f === "none") return r.expected === "normal" ? 0 : r.expected === "open" ? 2 : 1;
+  return f === "short-detector" ? 3 : f === "short-panel" ? 4 : 5;
 }
 
-const SITUATION_WORDS = { "short-panel": "a short at the panel end", "short-detector": "a short at the detector end", cut: "a cut conductor" } as const;
-const SITUATION_ORDER = ["all at rest", "an alarm", "a tamper", "a short at the detector end", "a short at the panel end", "a cut conductor"];
+const GROUP_COUNTS = new Int32Array(SITUATION_ORDER.length * SITUATION_ORDER.length);
 
 /** Pairs grouped by the two kinds of situation they mix up, in a fixed order, each with a count and the first example. */
-function indistinguishableGroups(rows: readonly Reading[], pairs: readonly [number, number][]): { words: string; count: number; example: string }[] {
-  const groups = new Map<string, { a: number; b: number; count: number; example: string }>();
-  for (const [i, j] of pairs) {
-    let a = SITUATION_ORDER.indexOf(situation(rows[i]));
-    let b = SITUATION_ORDER.indexOf(situation(rows[j]));
-    if (a > b) [a, b] = [b, a];
-    const key = `${a}:${b}`;
-    const g = groups.get(key);
-    if (g) g.count++;
-    else groups.set(key, { a, b, count: 1, example: `${rows[i].label} and ${rows[j].label}` });
+function indistinguishableGroups(rows: readonly Reading[], pairs: readonly [number, number][], known?: ArrayLike<number>): { words: string; count: number; example: string }[] {
+  const n = SITUATION_ORDER.length;
+  const sit = known ?? Int8Array.from(rows, situation);
+  const counts = GROUP_COUNTS.fill(0);
+  const examples: string[] = [];
+  for (let q = 0; q < pairs.length; q++) {
+    const i = pairs[q][0];
+    const j = pairs[q][1];
+    const a = sit[i];
+    const b = sit[j];
+    const k = a < b ? a * n + b : b * n + a;
+    if (counts[k]++ === 0) examples[k] = `${rows[i].label} and ${rows[j].label}`;
   }
-  return [...groups.values()]
-    .sort((x, y) => x.a - y.a || x.b - y.b)
-    .map((g) => ({ words: g.a === g.b ? `${SITUATION_ORDER[g.a]} and another ${SITUATION_ORDER[g.a].replace(/^(a|an|all at) /, "")}` : `${SITUATION_ORDER[g.a]} and ${SITUATION_ORDER[g.b]}`, count: g.count, example: g.example }));
+  const out: { words: string; count: number; example: string }[] = [];
+  for (let k = 0; k < n * n; k++) if (counts[k]) out.push({ words: GROUP_WORDS[(k / n) | 0][k % n], count: counts[k], example: examples[k] });
+  return out;
 }
 
 /** What a shared input loses against one detector per input, from this loop's own readings. */

@@ -46,9 +46,9 @@ export interface LoopModel {
   groupNO: boolean;
   n: number;
   /** Per detector: 1 if its alarm contact is NO. */
-  no: Uint8Array;
+  no: number[];
   /** Per detector: 1 if it has a tamper contact. */
-  tamper: Uint8Array;
+  tamper: number[];
   /** One conductor at 20 °C, Ω/m. */
   rPerM20: number;
   lengthM: number;
@@ -73,11 +73,12 @@ export function compileLoop(loop: LoopSpec, inputType?: InputType): LoopModel {
   const f = fittedValues(loop, inputType);
   const scheme = SCHEME_CODE[loop.scheme];
   const n = loop.detectors.length;
-  const no = new Uint8Array(n);
-  const tamper = new Uint8Array(n);
+  // plain arrays: a typed array per loop costs more to allocate than it saves on a handful of detectors
+  const no: number[] = [];
+  const tamper: number[] = [];
   for (let i = 0; i < n; i++) {
-    no[i] = loop.detectors[i].contact === "NO" ? 1 : 0;
-    tamper[i] = loop.detectors[i].tamper ? 1 : 0;
+    no.push(loop.detectors[i].contact === "NO" ? 1 : 0);
+    tamper.push(loop.detectors[i].tamper ? 1 : 0);
   }
   const placement = PLACE_CODE[loop.placement];
   const usesLoopBack = placement === PLACE_LOOPBACK && scheme !== SCHEME_NONE;
@@ -199,9 +200,10 @@ export interface ReadingParams {
 
 const STATE_CODE: Record<DetectorState, number> = { rest: STATE_REST, active: STATE_ACTIVE, tamper: STATE_TAMPER };
 
-export function encodeStates(states: readonly DetectorState[]): Uint8Array {
-  const out = new Uint8Array(states.length);
-  for (let i = 0; i < states.length; i++) out[i] = STATE_CODE[states[i]];
+/** States as codes (a plain array: allocating a typed array per state combination costs more than it saves). */
+export function encodeStates(states: readonly DetectorState[]): number[] {
+  const out: number[] = [];
+  for (let i = 0; i < states.length; i++) out.push(STATE_CODE[states[i]]);
   return out;
 }
 

@@ -15,6 +15,7 @@ export const AWG_MIN = -3; // 0000 AWG
 export const AWG_MAX = 40;
 export const MAX_DETECTORS_PER_LOOP = 64;
 
+const TEMP_KEYS = ["tempMinC", "tempMaxC"] as const;
 const positiveFinite = (x: unknown): x is number => typeof x === "number" && Number.isFinite(x) && x > 0;
 const nonNegativeFinite = (x: unknown): x is number => typeof x === "number" && Number.isFinite(x) && x >= 0;
 
@@ -33,19 +34,19 @@ function add(out: LoopProblem[], path: (string | number)[], message: string): vo
 
 /** Every reason the loop can't be analysed against this input type (or on its own, without one). */
 export function loopProblems(loop: LoopSpec, inputType?: InputType): LoopProblem[] {
-  return [...loopShapeProblems(loop), ...inputTypeProblems(loop, inputType)];
+  return inputTypeProblems(loop, inputType, loopShapeProblems(loop));
 }
 
-/** Problems of the loop on its own: counts, lengths, temperatures, values. */
-export function loopShapeProblems(loop: LoopSpec): LoopProblem[] {
-  const out: LoopProblem[] = [];
+/** Problems of the loop on its own: counts, lengths, temperatures, values (appended to `out`). */
+export function loopShapeProblems(loop: LoopSpec, out: LoopProblem[] = []): LoopProblem[] {
   const n = loop.detectors.length;
 
   if (n === 0) add(out, ["detectors"], "a loop needs at least one detector");
   if (n > MAX_DETECTORS_PER_LOOP) add(out, ["detectors"], `at most ${MAX_DETECTORS_PER_LOOP} detectors on one loop (this one has ${n})`);
   if (loop.scheme === "shared" && n !== 2) add(out, ["detectors"], `a shared input takes exactly two detectors (this loop has ${n})`);
   if (loop.scheme !== "shared" && n > 1) {
-    const nc = loop.detectors.filter((d) => d.contact === "NC").length;
+    let nc = 0;
+    for (const d of loop.detectors) if (d.contact === "NC") nc++;
     if (nc !== 0 && nc !== n)
       add(out, ["detectors"], "normally closed and normally open contacts can't share one loop: NC contacts go in series, NO contacts in parallel; wire them to separate inputs");
   }
@@ -57,7 +58,7 @@ export function loopShapeProblems(loop: LoopSpec): LoopProblem[] {
     if (!Number.isInteger(c.gauge.awg) || c.gauge.awg < AWG_MIN || c.gauge.awg > AWG_MAX)
       add(out, ["cable", "gauge", "awg"], `AWG must be a whole number from ${AWG_MIN} (0000) to ${AWG_MAX} (got ${c.gauge.awg})`);
   } else if (!positiveFinite(c.gauge.mm2)) add(out, ["cable", "gauge", "mm2"], `conductor cross-section must be more than 0 mm² (got ${c.gauge.mm2})`);
-  for (const k of ["tempMinC", "tempMaxC"] as const)
+  for (const k of TEMP_KEYS)
     if (!Number.isFinite(c[k]) || c[k] < TEMP_MIN_C || c[k] > TEMP_MAX_C)
       add(out, ["cable", k], `cable temperature must be between ${TEMP_MIN_C} °C and ${TEMP_MAX_C} °C (got ${c[k]})`);
   if (c.tempMinC > c.tempMaxC) add(out, ["cable", "tempMaxC"], `the temperature range is upside down: minimum ${c.tempMinC} °C is above maximum ${c.tempMaxC} °C`);
@@ -68,17 +69,16 @@ export function loopShapeProblems(loop: LoopSpec): LoopProblem[] {
   if (loop.shortOhms !== undefined && !nonNegativeFinite(loop.shortOhms)) add(out, ["shortOhms"], `short resistance must be 0 Ω or more (got ${loop.shortOhms})`);
   if (loop.eolOhms !== undefined && !positiveFinite(loop.eolOhms)) add(out, ["eolOhms"], `a resistor value must be more than 0 Ω (got ${loop.eolOhms})`);
   if (loop.alarmOhms !== undefined && !positiveFinite(loop.alarmOhms)) add(out, ["alarmOhms"], `a resistor value must be more than 0 Ω (got ${loop.alarmOhms})`);
-  loop.sharedOhms?.forEach((r, i) => {
-    if (!positiveFinite(r)) add(out, ["sharedOhms", i], `a resistor value must be more than 0 Ω (got ${r})`);
-  });
+  if (loop.sharedOhms)
+    for (let i = 0; i < loop.sharedOhms.length; i++)
+      if (!positiveFinite(loop.sharedOhms[i])) add(out, ["sharedOhms", i], `a resistor value must be more than 0 Ω (got ${loop.sharedOhms[i]})`);
 
   return out;
 }
 
 /** Problems of the loop against an input type: scheme support and resistor values neither fitted nor expected. */
-export function inputTypeProblems(loop: LoopSpec, inputType?: InputType): LoopProblem[] {
-  const out: LoopProblem[] = [];
-  const f = fittedValues(loop, inputType);
+export function inputTypeProblems(loop: LoopSpec, inputType?: InputType, out: LoopProblem[] = []): LoopProblem[] {
+  const f = { eolOhms: loop.eolOhms ?? inputType?.eolOhms, alarmOhms: loop.alarmOhms ?? inputType?.alarmOhms, sharedOhms: loop.sharedOhms ?? inputType?.sharedOhms };
   const where = inputType ? "fitted or expected by the input type" : "fitted";
   if ((loop.scheme === "single-eol" || loop.scheme === "double-eol") && f.eolOhms === undefined)
     add(out, ["eolOhms"], `a ${loop.scheme === "single-eol" ? "single" : "double"} end-of-line loop needs an end-of-line resistor value (none ${where})`);

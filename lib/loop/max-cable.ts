@@ -9,7 +9,7 @@ import { evalReading, type LoopModel } from "./loop-model";
 export const CABLE_SEARCH_CAP_M = 1e7;
 
 export interface CableRow {
-  code: Uint8Array;
+  code: readonly number[];
   fault: number;
   /** Highest reading on a zero-length cable (parts at the top of their tolerance). */
   maxAtZeroOhms: number;

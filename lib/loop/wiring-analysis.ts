@@ -7,8 +7,10 @@ import type { LoopModel } from "./loop-model";
 import type { LoopAnalysis, LoopSpec } from "./types";
 import { reportsWords } from "./row-labels";
 
-export function wiringProblems(loop: LoopSpec): ConductorProblem[] {
-  return [...conductorProblems(loop), ...classAProblems(loop)];
+export function wiringProblems(loop: LoopSpec, out: ConductorProblem[] = []): ConductorProblem[] {
+  conductorProblems(loop, out);
+  if (loop.pathway === "class-a") out.push(...classAProblems(loop));
+  return out;
 }
 
 export function attachWiring(analysis: LoopAnalysis, loop: LoopSpec, inputType: InputType, m: LoopModel, target: FindingTarget): void {

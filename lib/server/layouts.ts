@@ -183,7 +183,7 @@ export async function createLayout(actor: Actor, siteId: number, input: CreateLa
     document = blankDocument(input.panelId, schedule, catalog);
     from = "blank";
   } else {
-    const s = await suggestOffLoop(schedule, catalog, { allowShared: input.suggestion.allowShared, busCableM: input.suggestion.busCableM });
+    const s = await suggestOffLoop(schedule, catalog, { allowShared: input.suggestion.allowShared, busCableM: input.suggestion.busCableM, pathway: input.suggestion.pathway });
     if (!s.found) throw new ApiError(422, `No suggestion: ${s.reason}`);
     document = s.layout;
     from = input.suggestion.allowShared ? "suggestion-shared" : "suggestion-single";
@@ -341,6 +341,8 @@ export async function setLayoutArchived(actor: Actor, layoutId: number, archived
 
 export interface SuggestionView {
   allowShared: boolean;
+  /** The pathway asked for the life-safety inputs (class-b unless the request asked for class-a). */
+  pathway: "class-a" | "class-b";
   found: boolean;
   reason: string | null;
   cost: number | null;
@@ -353,10 +355,11 @@ export interface SuggestionView {
   document: LayoutDocument | null;
 }
 
-function suggestionView(allowShared: boolean, s: Suggestion): SuggestionView {
-  if (!s.found) return { allowShared, found: false, reason: s.reason, cost: null, parts: [], boards: 0, inputsUsed: 0, inputsTotal: 0, sharedInputs: 0, counts: null, document: null };
+function suggestionView(allowShared: boolean, pathway: SuggestionView["pathway"], s: Suggestion): SuggestionView {
+  if (!s.found) return { allowShared, pathway, found: false, reason: s.reason, cost: null, parts: [], boards: 0, inputsUsed: 0, inputsTotal: 0, sharedInputs: 0, counts: null, document: null };
   return {
     allowShared,
+    pathway,
     found: true,
     reason: null,
     cost: s.cost,
@@ -375,7 +378,7 @@ export async function suggestForSite(actor: Actor, siteId: number, opts: Suggest
   await findSite(actor, siteId);
   const [schedule, catalog] = await Promise.all([loadSchedule(siteId), catalogFor(actor.organisationId)]);
   if (schedule.length === 0) throw new ApiError(422, "The device schedule is empty: add detectors before asking for hardware.");
-  const base = { busCableM: opts?.busCableM, power: opts?.power };
-  const suggestions = await Promise.all([false, true].map(async (allowShared) => suggestionView(allowShared, await suggestOffLoop(schedule, catalog, { ...base, allowShared }))));
+  const base = { busCableM: opts?.busCableM, power: opts?.power, pathway: opts?.pathway };
+  const suggestions = await Promise.all([false, true].map(async (allowShared) => suggestionView(allowShared, opts?.pathway ?? "class-b", await suggestOffLoop(schedule, catalog, { ...base, allowShared }))));
   return { suggestions };
 }

@@ -171,4 +171,26 @@ describe("layouts and revisions in MariaDB", () => {
     expect(created.layout.summary.unplaced).toBe(0);
     expect(created.document).toEqual(suggestions[1].document);
   });
+
+  it("passes a Class A request to the suggestion and keeps each input's pathway through save and load", async () => {
+    const o = await makeOrganisation("Class A");
+    const site = await createSite(o.actors.designer, { name: "Fire site", address: "", description: "", areas: [] });
+    await confirmImport(o.actors.designer, site.id, ["label,type,area,room,cable_m,gauge,supervision", "Stair smoke,smoke-4wire-no,Ground,Stair,25,22 AWG,double-eol"].join("\n"));
+    const plain = await suggestForSite(o.actors.designer, site.id);
+    const { suggestions } = await suggestForSite(o.actors.designer, site.id, { pathway: "class-a" });
+    expect(plain.suggestions.map((s) => s.pathway)).toEqual(["class-b", "class-b"]);
+    expect(suggestions.map((s) => s.pathway)).toEqual(["class-a", "class-a"]);
+    expect(plain.suggestions[0].document?.inputs.every((i) => i.pathway === undefined)).toBe(true);
+    expect(suggestions[0].found).toBe(true);
+    expect(suggestions[0].counts?.error).toBe(0);
+    expect(suggestions[0].document?.inputs.map((i) => i.pathway)).toEqual(["class-a"]);
+    const created = await createLayout(o.actors.designer, site.id, { name: "Class A", suggestion: { allowShared: false, pathway: "class-a" } });
+    expect(created.document.inputs.map((i) => i.pathway)).toEqual(["class-a"]);
+    // the designer turns it back to Class B and saves; the stored document follows
+    const doc: LayoutDocument = { ...created.document, inputs: created.document.inputs.map(({ pathway: _p, ...i }) => i) };
+    await saveLayout(o.actors.designer, created.layout.id, { version: created.layout.version, document: doc });
+    expect((await getLayout(o.actors.designer, created.layout.id)).document.inputs.map((i) => i.pathway)).toEqual([undefined]);
+    await saveLayout(o.actors.designer, created.layout.id, { version: created.layout.version + 1, document: created.document });
+    expect((await getLayout(o.actors.designer, created.layout.id)).document.inputs.map((i) => i.pathway)).toEqual(["class-a"]);
+  });
 });
