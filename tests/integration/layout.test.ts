@@ -175,7 +175,7 @@ describe("layouts and revisions in MariaDB", () => {
   it("passes a Class A request to the suggestion and keeps each input's pathway through save and load", async () => {
     const o = await makeOrganisation("Class A");
     const site = await createSite(o.actors.designer, { name: "Fire site", address: "", description: "", areas: [] });
-    await confirmImport(o.actors.designer, site.id, ["label,type,area,room,cable_m,gauge,supervision", "Stair smoke,smoke-4wire-no,Ground,Stair,25,22 AWG,double-eol"].join("\n"));
+    await confirmImport(o.actors.designer, site.id, ["label,type,area,room,cable_m,gauge,supervision", "Stair smoke,smoke-4wire-no,Ground,Stair,25,22 AWG,double-eol"].join("\n"), undefined, true);
     const plain = await suggestForSite(o.actors.designer, site.id);
     const { suggestions } = await suggestForSite(o.actors.designer, site.id, { pathway: "class-a" });
     expect(plain.suggestions.map((s) => s.pathway)).toEqual(["class-b", "class-b"]);
