@@ -123,7 +123,8 @@ export function SheetInputBlock({ row }: { row: SheetInput }) {
             {row.cable.conductorOhms ? ` (loop conductors ${row.cable.conductorOhms.minOhms.toFixed(1)}–${row.cable.conductorOhms.maxOhms.toFixed(1)} Ω there and back, 10–40 °C)` : ""}.
           </p>
         </div>
-        <figure className="min-w-0 max-w-4xl overflow-x-auto print:mx-auto print:max-w-none">
+        {/* a wide drawing scrolls inside its box on a phone: focusable so it scrolls by keyboard too */}
+        <figure className="min-w-0 max-w-4xl overflow-x-auto focus-visible:outline-2 focus-visible:outline-signal print:mx-auto print:max-w-none" tabIndex={0} aria-label={`Schematic of input ${row.input}`}>
           <LoopSchematic loop={sheetLoopSpec(row)} className="w-full" />
           <figcaption className="text-xs text-slate-600">The loop as wired, everything at rest: resistors drawn where they are fitted.</figcaption>
         </figure>

@@ -40,7 +40,7 @@ async function sixtyDetectorLayout(api: APIRequestContext): Promise<Target> {
   const site = await ok<{ id: number }>(await api.post("/api/sites", { data: { name: `Sixty detectors ${Date.now()}`, address: "9 Long Corridor", areas: [{ name: "Wing", rooms: ["Room"] }] } }), "site");
   const types = ["contact-door-surface", "contact-window-surface", "contact-door-recessed", "contact-window-recessed"];
   const csv = ["label,type,area,room,cable_m,gauge,supervision", ...Array.from({ length: 60 }, (_, i) => `Opening ${i + 1} of the long corridor,${types[i % 4]},Wing,Room ${1 + (i % 12)},${12 + (i % 30)},22 AWG,single-eol`)].join("\n");
-  const imported = await ok<{ detectors: { id: string }[] }>(await api.post(`/api/sites/${site.id}/schedule/import`, { data: { mode: "confirm", csv } }), "schedule");
+  const imported = await ok<{ detectors: { id: string }[] }>(await api.post(`/api/sites/${site.id}/schedule/import`, { data: { mode: "confirm", csv, addUnknownPlaces: true } }), "schedule");
   const ids = imported.detectors.map((d) => d.id);
   expect(ids).toHaveLength(60);
   const document = {
