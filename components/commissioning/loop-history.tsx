@@ -5,6 +5,7 @@ import { parseMeterReading } from "@/lib/commissioning/reading-schema";
 import type { TestKey } from "@/lib/sheet/sheet-types";
 import type { QueuedReading } from "@/components/commissioning/reading-queue";
 import { TEST_WORDS } from "@/components/sheet/test-words";
+import { useFormat } from "@/components/format/format-provider";
 
 interface HistoryLine {
   key: string;
@@ -17,6 +18,7 @@ interface HistoryLine {
 
 /** Every reading of this loop, newest first, with the verdict and likely cause worked out here (readings still waiting to send included). */
 export function LoopHistory({ progress, waiting, judge }: { progress: LoopProgress | null; waiting: QueuedReading[]; judge: (test: TestKey, r: MeasuredReading) => ReadingVerdict | null }) {
+  const { dateTime } = useFormat();
   const saved: HistoryLine[] = (progress?.tests ?? []).flatMap((t) => [...t.earlier, ...(t.latest ? [t.latest] : [])]).map((r: RecordedReading, i) => ({ key: `s${i}-${r.recordedAt}`, at: r.recordedAt, test: r.test, reading: r.reading, by: r.recordedBy, waiting: false }));
   const queued: HistoryLine[] = waiting.flatMap((q) => {
     const r = parseMeterReading(q.reading);
@@ -34,7 +36,7 @@ export function LoopHistory({ progress, waiting, judge }: { progress: LoopProgre
           return (
             <li key={l.key} data-verdict={a?.verdict ?? "unknown"} className="border-t border-line pt-1 first:border-0 first:pt-0">
               <span className="text-xs text-slate-600">
-                {new Date(l.at).toLocaleString()} · {TEST_WORDS[l.test] ?? l.test}
+                {dateTime(l.at)} · {TEST_WORDS[l.test] ?? l.test}
                 {l.by ? ` · ${l.by}` : ""}
                 {l.waiting ? " · waiting to send" : ""}
               </span>

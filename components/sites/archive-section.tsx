@@ -4,10 +4,12 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { describeError, sendJson } from "@/lib/client/fetcher";
 import { Button } from "@/components/ui/button";
+import { useFormat } from "@/components/format/format-provider";
 
 /** Archive the site (hidden from the list, nothing deleted) or restore it; roles without the permission see why not. */
 export function ArchiveSection({ siteId, name, archivedAt, canArchive, refusal }: { siteId: number; name: string; archivedAt: string | null; canArchive: boolean; refusal: string }) {
   const router = useRouter();
+  const { date } = useFormat();
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
 
@@ -27,7 +29,7 @@ export function ArchiveSection({ siteId, name, archivedAt, canArchive, refusal }
 
   return (
     <div className="flex flex-wrap items-center gap-3 text-sm">
-      <span>{archivedAt ? `Archived on ${archivedAt.slice(0, 10)}: hidden from the site list.` : "In the site list."}</span>
+      <span>{archivedAt ? `Archived on ${date(archivedAt)}: hidden from the site list.` : "In the site list."}</span>
       {canArchive ? (
         <Button variant={archivedAt ? "secondary" : "danger"} onClick={() => void act()} disabled={busy} data-testid="archive-site">
           {archivedAt ? "Restore site" : "Archive site"}

@@ -3,18 +3,9 @@ import { analyzeLoop } from "./analyze-loop";
 import { conductorOhmsPerM } from "./cable";
 import { readingAt } from "./loop-model";
 import { testInputType, testLifeSafetyInputType } from "./test-support/input-types";
-import type { LoopDetector, LoopSpec } from "./types";
+import type { LoopSpec } from "./types";
+import { det, loop } from "./test-support/loop-fixtures";
 
-const det = (label: string, over: Partial<LoopDetector> = {}): LoopDetector => ({ label, contact: "NC", tamper: false, lifeSafety: false, ...over });
-const loop = (over: Partial<LoopSpec> = {}): LoopSpec => ({
-  scheme: "single-eol",
-  placement: "at-detector",
-  detectors: [det("Front door")],
-  tolerancePct: 5,
-  cable: { gauge: { awg: 22 }, lengthM: 30, tempMinC: 0, tempMaxC: 40 },
-  contactOhms: 0.05,
-  ...over,
-});
 const codes = (a: ReturnType<typeof analyzeLoop>) => a.findings.map((f) => f.code);
 const target = { kind: "input" as const, boardKey: "panel", input: 3 };
 

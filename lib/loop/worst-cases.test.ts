@@ -7,18 +7,9 @@ import { conductorOhmsPerM } from "./cable";
 import { acceptableFor, maskOf } from "./loop-bands";
 import { loopArb } from "./test-support/loop-arbitraries";
 import { testInputType, testLifeSafetyInputType } from "./test-support/input-types";
-import type { LoopDetector, LoopSpec } from "./types";
+import type { LoopSpec } from "./types";
+import { det, loop } from "./test-support/loop-fixtures";
 
-const det = (label: string, over: Partial<LoopDetector> = {}): LoopDetector => ({ label, contact: "NC", tamper: false, lifeSafety: false, ...over });
-const loop = (over: Partial<LoopSpec> = {}): LoopSpec => ({
-  scheme: "single-eol",
-  placement: "at-detector",
-  detectors: [det("Front door")],
-  tolerancePct: 5,
-  cable: { gauge: { awg: 22 }, lengthM: 30, tempMinC: 0, tempMaxC: 40 },
-  contactOhms: 0.05,
-  ...over,
-});
 const withLength = (l: LoopSpec, lengthM: number): LoopSpec => ({ ...l, cable: { ...l.cable, lengthM } });
 /** Indices of rows in one acceptable band on a zero-length cable: the rows the longest run is about. */
 const inBandAtZero = (l: LoopSpec) =>

@@ -8,6 +8,7 @@ import { Refusal } from "@/components/ui/refusal";
 import { Card } from "@/components/ui/card";
 import { orNotFound } from "@/lib/server/page-load";
 import { can } from "@/lib/auth/permissions";
+import { makeFormat } from "@/lib/format/format";
 
 export default async function SitePage({ params }: { params: Promise<{ siteId: string }> }) {
   const { siteId } = await params;
@@ -40,7 +41,7 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
       />
       {site.archivedAt ? (
         <p className="mb-4 rounded border border-line bg-slate-100 p-2 text-sm" role="status">
-          This site is archived ({site.archivedAt.slice(0, 10)}): it is hidden from the site list; everything it holds is kept.
+          This site is archived ({makeFormat(actor.settings).date(site.archivedAt)}): it is hidden from the site list; everything it holds is kept.
         </p>
       ) : null}
       <p className="mb-4 max-w-3xl text-sm">{site.description}</p>
