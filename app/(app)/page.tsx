@@ -40,7 +40,7 @@ export default async function SitesPage({ searchParams }: { searchParams: Promis
         ))}
       </nav>
       {sites.length === 0 ? <p className="text-sm text-slate-600">{archived === "only" ? "No archived sites." : "No sites yet."}</p> : null}
-      <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3" data-testid="site-list">
+      <ul className="grid grid-cols-1 gap-4 sm:grid-cols-2 lg:grid-cols-3" data-testid="site-list">
         {sites.map((s) => (
           <li key={s.id}>
             <Link href={`/sites/${s.id}`}>

@@ -49,7 +49,7 @@ export function DiffView({ diff }: { diff: CatalogDiff }) {
   const empty = !diff.added.length && !diff.removed.length && !diff.changed.length;
   if (empty) return <p className="text-sm">No change against the catalog in use.</p>;
   return (
-    <div className="grid gap-4 text-sm sm:grid-cols-3" data-testid="catalog-diff">
+    <div className="grid grid-cols-1 gap-4 text-sm sm:grid-cols-3" data-testid="catalog-diff">
       <DiffColumn title="Added" tone="text-signal" testId="diff-added" entries={diff.added} />
       <DiffColumn title="Removed" tone="text-fault" testId="diff-removed" entries={diff.removed} />
       <div>

@@ -54,7 +54,7 @@ export function InputTypeBands({ inputType }: { inputType: InputType }) {
           <Card key={scheme} className="mb-4" data-testid={`scheme-${scheme}`}>
             <h3 className="font-semibold">{schemeLabel[scheme]}</h3>
             <BandScale inputType={inputType} scheme={scheme} />
-            <div className="grid gap-4 md:grid-cols-2">
+            <div className="grid grid-cols-1 gap-4 md:grid-cols-2">
               <table className="self-start text-sm">
                 <caption className="text-left text-xs font-medium text-slate-500">Bands: a reading from (inclusive) up to (exclusive) gives the report</caption>
                 <thead className="text-left text-slate-500">

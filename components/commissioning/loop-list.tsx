@@ -14,7 +14,7 @@ export function LoopList({ boardName, loops, onChoose }: { boardName: string | u
   return (
     <section aria-label="Loops">
       <h2 className="mb-2 text-lg font-semibold">{boardName}: pick a loop</h2>
-      <ul className="grid gap-2 sm:grid-cols-2">
+      <ul className="grid grid-cols-1 gap-2 sm:grid-cols-2">
         {loops.map((l) => (
           <li key={l.input}>
             <button type="button" data-testid={`loop-${l.boardKey}-${l.input}`} data-status={l.status} onClick={() => onChoose(l.input)} className={`min-h-16 w-full rounded-lg border-2 p-3 text-left ${STATUS_STYLE[l.status]}`}>

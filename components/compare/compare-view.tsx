@@ -35,7 +35,7 @@ export function CompareView({ site, layouts, selected, comparison, error, choice
 
           <CompareTable siteId={siteId} comparison={comparison} />
 
-          <div className="grid gap-4" style={{ gridTemplateColumns: `repeat(auto-fit, minmax(20rem, 1fr))` }}>
+          <div className="grid grid-cols-1 gap-4" style={{ gridTemplateColumns: `repeat(auto-fit, minmax(20rem, 1fr))` }}>
             {cols.map((c, i) => (
               <CompareDetails key={i} column={c} />
             ))}

@@ -29,7 +29,7 @@ export function EditorWorkspace({ dnd }: { dnd: EditorDnd }) {
       onDragCancel={dnd.onDragCancel}
       accessibility={{ announcements: dnd.announcements, screenReaderInstructions: { draggable: DRAG_INSTRUCTIONS } }}
     >
-      <div className="grid gap-4 lg:grid-cols-[15rem_minmax(0,1fr)_20rem] 2xl:grid-cols-[17rem_minmax(0,1fr)_24rem]">
+      <div className="grid grid-cols-1 gap-4 lg:grid-cols-[15rem_minmax(0,1fr)_20rem] 2xl:grid-cols-[17rem_minmax(0,1fr)_24rem]">
         <aside className="lg:sticky lg:top-4 lg:flex lg:max-h-[calc(100vh-2rem)] lg:flex-col lg:self-start">
           <UnplacedList />
         </aside>

@@ -137,7 +137,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
       <section>
         <h2 className="mb-3 text-lg font-semibold">Layouts</h2>
         {layouts.length === 0 ? <p className="text-sm text-slate-600">No layouts yet.</p> : null}
-        <ul className="grid gap-3 md:grid-cols-2" data-testid="layout-list">
+        <ul className="grid grid-cols-1 gap-3 md:grid-cols-2" data-testid="layout-list">
           {layouts.map((l) => (
             <li key={l.id}>
               <LayoutCard siteId={siteId} layout={l} canWrite={canWrite} onDelete={remove} onArchive={archive} />
@@ -147,7 +147,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
       </section>
 
       {canWrite ? (
-        <section className="grid gap-4 lg:grid-cols-3">
+        <section className="grid grid-cols-1 gap-4 lg:grid-cols-3">
           <Card>
             <h2 className="font-semibold">New layout</h2>
             <form

@@ -67,7 +67,7 @@ export function BenchResults({ bench }: { bench: Bench }) {
         <FindingsList findings={analysis.findings} />
       </Card>
       {analysis.valid !== false ? (
-        <div className="grid gap-4">
+        <div className="grid grid-cols-1 gap-4">
           <Card title="Resistors">
             <ResistorCards resistors={analysis.resistors} tolerancePct={s.tolerancePct} scheme={s.scheme} placement={s.placement} />
           </Card>

@@ -10,7 +10,7 @@ export function CableSummary({ analysis, lengthM, gaugeText, conductors, maxLoop
   const longest = limits.length ? Math.min(...limits) : null;
   const over = longest !== null && lengthM > longest;
   return (
-    <dl className="grid gap-3 text-sm sm:grid-cols-3" data-testid="cable-summary">
+    <dl className="grid grid-cols-1 gap-3 text-sm sm:grid-cols-3" data-testid="cable-summary">
       <div>
         <dt className="text-xs font-semibold uppercase tracking-wide text-slate-500">Conductors in the loop path</dt>
         <dd className="mt-1 text-lg font-semibold tabular-nums">{analysis.conductorOhms ? formatOhmsRange(analysis.conductorOhms.minOhms, analysis.conductorOhms.maxOhms) : "–"}</dd>

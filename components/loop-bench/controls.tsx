@@ -150,7 +150,7 @@ export function Section({ title, children, testId }: { title: string; children: 
   return (
     <section className="rounded-lg border border-line bg-white p-4 shadow-sm" data-testid={testId}>
       <h2 className="mb-3 text-sm font-semibold uppercase tracking-wide text-slate-600">{title}</h2>
-      <div className="grid gap-4">{children}</div>
+      <div className="grid grid-cols-1 gap-4">{children}</div>
     </section>
   );
 }

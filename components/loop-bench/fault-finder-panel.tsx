@@ -57,7 +57,7 @@ export function FaultFinderPanel({ loop, inputType }: { loop: LoopSpec; inputTyp
       <p className="mt-1 text-xs text-slate-500">Meter readings across the pair at the panel end; one to three. Type OL for an open loop.</p>
       <div className="mt-2 grid gap-2">
         {FIELDS.map((f) => (
-          <label key={f.key} className="grid gap-1 text-sm">
+          <label key={f.key} className="grid grid-cols-1 gap-1 text-sm">
             <span className="font-medium">{f.label}</span>
             <input
               className={`rounded border px-2 py-1 ${bad.includes(f.key) ? "border-fault" : "border-line"}`}

@@ -12,7 +12,7 @@ export function FindingsList({ findings }: { findings: readonly Finding[] }) {
   if (findings.length === 0) return <p className="text-sm text-slate-600">No findings: this loop is supervised as intended.</p>;
   const sorted = orderFindings(findings);
   return (
-    <ul className="grid gap-2" data-testid="findings">
+    <ul className="grid grid-cols-1 gap-2" data-testid="findings">
       {sorted.map((f, i) => (
         <li key={`${f.code}-${i}`} className="rounded-md border border-line p-3" data-code={f.code}>
           <p className="flex flex-wrap items-baseline gap-2 text-sm">

@@ -56,7 +56,7 @@ export function ReadingPanel({
   const uncertain = reports.length > 1 && !defeat;
   return (
     <section className="rounded-lg border border-line bg-white p-4 shadow-sm" aria-live="polite" data-testid="reading-panel">
-      <div className="grid gap-4 sm:grid-cols-2">
+      <div className="grid grid-cols-1 gap-4 sm:grid-cols-2">
         <div>
           <p className="text-xs font-semibold uppercase tracking-wide text-slate-500">Reading at the input</p>
           <p className="mt-1 text-4xl font-semibold tabular-nums" data-testid="meter-reading">

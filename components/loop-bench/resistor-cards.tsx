@@ -19,7 +19,7 @@ function where(role: ResistorUse["role"], scheme: WiringScheme, placement: Place
 export function ResistorCards({ resistors, tolerancePct, scheme, placement }: { resistors: readonly ResistorUse[]; tolerancePct: number; scheme: WiringScheme; placement: Placement }) {
   if (resistors.length === 0) return <p className="text-sm text-slate-600">This scheme has no resistors: the panel sees only the contacts.</p>;
   return (
-    <ul className="grid gap-3 md:grid-cols-2" data-testid="resistor-cards">
+    <ul className="grid grid-cols-1 gap-3 md:grid-cols-2" data-testid="resistor-cards">
       {resistors.map((u) => {
         const e12 = nearestPreferred(u.ohms, "E12");
         return (

@@ -15,7 +15,7 @@ const WORDS = {
 
 export function Verdicts({ faults }: { faults: LoopAnalysis["faults"] }) {
   return (
-    <ul className="grid gap-3 sm:grid-cols-3" data-testid="verdicts" aria-label="Fault verdicts">
+    <ul className="grid grid-cols-1 gap-3 sm:grid-cols-3" data-testid="verdicts" aria-label="Fault verdicts">
       {FAULTS.map(([f, label]) => {
         const w = WORDS[faults[f]];
         return (

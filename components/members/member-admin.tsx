@@ -59,39 +59,41 @@ export function MemberAdmin({ initial, selfUserId }: { initial: MemberList; self
   }
 
   return (
-    <div className="grid gap-6 lg:grid-cols-3">
+    <div className="grid grid-cols-1 gap-6 lg:grid-cols-3">
       <Card className="lg:col-span-2">
         {loadError ? (
           <p role="alert" className="mb-3 text-sm text-fault">
             The list could not be refreshed: {describeError(loadError)}
           </p>
         ) : null}
-        <table className="w-full text-sm">
-          <thead className="text-left text-slate-500">
-            <tr>
-              <th className="py-2">Name</th>
-              <th>E-mail</th>
-              <th>Role</th>
-            </tr>
-          </thead>
-          <tbody>
-            {members.map((m) => (
-              <tr key={m.membershipId} className="border-t border-line">
-                <td className="py-2">{m.name}</td>
-                <td>{m.email}</td>
-                <td>
-                  <select aria-label={`Role of ${m.name}`} className="rounded border border-line px-2 py-1" value={m.role} disabled={m.userId === selfUserId} onChange={(e) => setRole(m.membershipId, e.target.value as Role)}>
-                    {roles.map((r) => (
-                      <option key={r} value={r}>
-                        {roleLabels[r]}
-                      </option>
-                    ))}
-                  </select>
-                </td>
+        <div className="overflow-x-auto">
+          <table className="w-full text-sm">
+            <thead className="text-left text-slate-500">
+              <tr>
+                <th className="py-2">Name</th>
+                <th>E-mail</th>
+                <th>Role</th>
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {members.map((m) => (
+                <tr key={m.membershipId} className="border-t border-line">
+                  <td className="py-2">{m.name}</td>
+                  <td>{m.email}</td>
+                  <td>
+                    <select aria-label={`Role of ${m.name}`} className="rounded border border-line px-2 py-1" value={m.role} disabled={m.userId === selfUserId} onChange={(e) => setRole(m.membershipId, e.target.value as Role)}>
+                      {roles.map((r) => (
+                        <option key={r} value={r}>
+                          {roleLabels[r]}
+                        </option>
+                      ))}
+                    </select>
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
         {invitations.length ? (
           <>
             <h2 className="mt-6 font-semibold">Open invitations</h2>

@@ -35,7 +35,7 @@ export function SettingsForm({ initial }: { initial: OrganisationSettingsInput }
   }
 
   return (
-    <div className="grid gap-6 lg:grid-cols-3">
+    <div className="grid grid-cols-1 gap-6 lg:grid-cols-3">
       <Card className="lg:col-span-2">
         <form onSubmit={onSubmit} className="space-y-4" aria-label="Organisation settings" noValidate>
           <Field label="Organisation name" name="name" defaultValue={saved.name} required error={form.errors.name} />

@@ -77,7 +77,7 @@ export function ReviewPanel({ initial, summary, boards, canComment, lifeSafety }
   }
 
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_26rem]">
+    <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,1fr)_26rem]">
       <div className="flex flex-col gap-4">
         <Card>
           <h2 className="text-lg font-semibold">Where this layout stands</h2>

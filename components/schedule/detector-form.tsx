@@ -64,7 +64,7 @@ export function DetectorForm({ types, areas, initial, submitLabel, onSubmit, onC
     </span>
   );
   return (
-    <form onSubmit={submit} className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4" aria-label={submitLabel} noValidate>
+    <form onSubmit={submit} className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-4" aria-label={submitLabel} noValidate>
       <label className="text-sm sm:col-span-2">
         <span className="font-medium">Label</span>
         <input name="label" defaultValue={start.label} className={`${field} ${errors.label ? "border-fault" : "border-line"}`} aria-invalid={!!errors.label} aria-describedby={`${formId}-label-limit`} />

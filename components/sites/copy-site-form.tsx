@@ -34,7 +34,7 @@ export function CopySiteForm({ siteId, name }: { siteId: number; name: string })
   }
 
   return (
-    <form onSubmit={submit} noValidate className="grid gap-3 sm:grid-cols-3" aria-label="Copy into a new site">
+    <form onSubmit={submit} noValidate className="grid grid-cols-1 gap-3 sm:grid-cols-3" aria-label="Copy into a new site">
       <Field label="New site name" name="copyName" defaultValue={`${name} (copy)`.slice(0, 200)} error={errors.name} maxLength={200} />
       <Field label="Its address" name="copyAddress" error={errors.address} maxLength={500} />
       <div className="flex items-end">

@@ -13,7 +13,7 @@ export function SiteDetailsFields({ values, errors }: { values?: Partial<SiteDet
     </label>
   );
   return (
-    <div className="grid gap-3 sm:grid-cols-2">
+    <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
       <Field label="Site name" name="name" defaultValue={values?.name ?? ""} error={errors.name} maxLength={200} />
       <Field label="Address" name="address" defaultValue={values?.address ?? ""} error={errors.address} maxLength={500} />
       <Field label="Customer contact" name="contactName" defaultValue={values?.contactName ?? ""} error={errors.contactName} maxLength={200} />

@@ -22,7 +22,7 @@ export async function signIn(page: Page, role: DemoRole, password = DEMO_PASSWOR
   await page.getByLabel("E-mail").fill(demo[role]);
   await page.getByLabel("Password").fill(password);
   await page.getByRole("button", { name: "Sign in" }).click();
-  await expect(page.getByTestId("whoami")).toBeVisible();
+  await expect(page.getByTestId("whoami")).toBeVisible({ timeout: 20_000 });
 }
 
 // Signed-in states saved once per run by the setup project (support-auth.setup.ts), in the git-ignored .auth/

@@ -63,7 +63,7 @@ export default async function CatalogPage({ searchParams }: { searchParams: Prom
       <h2 id="organisation-catalog" className="mt-8 mb-3 scroll-mt-4 text-lg font-semibold">
         Your organisation&apos;s catalog file
       </h2>
-      <div className="grid gap-6 lg:grid-cols-5">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-5">
         {canUpload ? (
           <Card className="lg:col-span-2">
             <h3 className="mb-2 font-semibold">Upload a new version</h3>

@@ -59,7 +59,7 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
       </dl>
       <h2 className="mb-3 text-lg font-semibold">Floors, areas and rooms</h2>
       {site.floors.length === 0 ? <p className="text-sm text-slate-600">No floors yet.</p> : null}
-      <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
+      <div className="grid grid-cols-1 gap-4 sm:grid-cols-2 lg:grid-cols-3">
         {site.floors.map((f) => (
           <Card key={f.id}>
             <p className="font-medium">{f.name}</p>

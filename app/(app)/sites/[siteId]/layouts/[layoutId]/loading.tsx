@@ -13,7 +13,7 @@ export default function LayoutEditorLoading() {
           </div>
         </div>
         <div className="mb-3 min-h-6" />
-        <div className="grid gap-4 lg:grid-cols-[15rem_minmax(0,1fr)_20rem] 2xl:grid-cols-[17rem_minmax(0,1fr)_24rem]">
+        <div className="grid grid-cols-1 gap-4 lg:grid-cols-[15rem_minmax(0,1fr)_20rem] 2xl:grid-cols-[17rem_minmax(0,1fr)_24rem]">
           <aside className="flex flex-col gap-2">
             <h2 className="mb-2 text-sm font-semibold">Unplaced detectors</h2>
             {Array.from({ length: 8 }, (_, i) => (

@@ -23,7 +23,7 @@ export default function CommissioningLoading() {
         </div>
         <section>
           <Bone className="mb-2 h-6 w-56" />
-          <ul className="grid gap-2 sm:grid-cols-2">
+          <ul className="grid grid-cols-1 gap-2 sm:grid-cols-2">
             {Array.from({ length: 6 }, (_, i) => (
               <li key={i} className="min-h-16 rounded-lg border-2 border-line bg-white p-3">
                 <Bone className="h-5 w-40" />

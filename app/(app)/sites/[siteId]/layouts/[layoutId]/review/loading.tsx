@@ -5,7 +5,7 @@ import { Card } from "@/components/ui/card";
 export default function ReviewLoading() {
   return (
     <LoadingPage what="the review">
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_26rem]">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,1fr)_26rem]">
         <div className="flex flex-col gap-4">
           {["Where this layout stands", "What you can do", ""].map((title, i) => (
             <Card key={i}>
