@@ -19,7 +19,7 @@ export function ComparePicker({ siteId, layouts, selected, error }: { siteId: nu
     <Card className="no-print">
       <h2 className="text-lg font-semibold">Pick the layouts to compare</h2>
       {layouts.length < 2 ? <p className="mt-2 text-sm">This site has {layouts.length === 0 ? "no layouts" : "one layout"}: make at least two on the layouts page to compare them.</p> : null}
-      <ul className="mt-2 grid gap-2 sm:grid-cols-2 lg:grid-cols-3" data-testid="compare-picker">
+      <ul className="mt-2 grid grid-cols-1 gap-2 sm:grid-cols-2 lg:grid-cols-3" data-testid="compare-picker">
         {layouts.map((l) => (
           <li key={l.id}>
             <label className="flex cursor-pointer items-start gap-2 rounded-md border border-line bg-white p-2 text-sm hover:bg-slate-50">

@@ -193,7 +193,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
                   Sharing inputs saves nothing here: the cheapest hardware is the same both ways (its inputs may not take two detectors, or there are inputs enough).
                 </p>
               ) : null}
-              <div className="mt-4 grid gap-3 md:grid-cols-2">
+              <div className="mt-4 grid grid-cols-1 gap-3 md:grid-cols-2">
                 {suggestions.map((s) => (
                   <SuggestionCard
                     key={String(s.allowShared)}

@@ -99,7 +99,7 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal, defau
                 </ul>
               </div>
             ) : null}
-            <div className="sheet-print-input mt-4 grid gap-3 rounded-md border border-ink p-3 text-sm sm:grid-cols-3 print:mt-2 print:grid-cols-3 print:gap-1 print:p-2" data-testid="sign-off">
+            <div className="sheet-print-input mt-4 grid grid-cols-1 gap-3 rounded-md border border-ink p-3 text-sm sm:grid-cols-3 print:mt-2 print:grid-cols-3 print:gap-1 print:p-2" data-testid="sign-off">
               <p className="font-semibold sm:col-span-3">Sign-off: {b.name}</p>
               {b.signOff.map((line, i) => (
                 <p key={i} className="whitespace-pre-wrap break-words">

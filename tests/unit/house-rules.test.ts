@@ -1,5 +1,5 @@
-// Two rules of the house that lint does not express: screens stay small enough to change safely, and the browser
-// reaches the API only through the one shared client (lib/client/fetcher.ts).
+// Rules of the house that lint does not express: screens stay small enough to change safely, the browser reaches
+// the API only through the one shared client (lib/client/fetcher.ts), and phone layouts never grow past the screen.
 import { readdirSync, readFileSync, statSync } from "node:fs";
 import { join, relative } from "node:path";
 import { describe, expect, it } from "vitest";
@@ -18,6 +18,13 @@ function sourceFiles(dir: string): string[] {
 }
 
 const components = sourceFiles(join(root, "components"));
+const screens = [...components, ...sourceFiles(join(root, "app"))];
+
+/** Class lists of grids that change their columns at a breakpoint but leave the phone column implicit. */
+function implicitPhoneGrids(source: string): string[] {
+  const classLists = source.match(/className="[^"]*"/g) ?? [];
+  return classLists.filter((c) => /["\s]grid["\s]/.test(c) && /\b(sm|md|lg|xl|2xl):grid-cols-/.test(c) && !/["\s]grid-cols-/.test(c));
+}
 
 describe("house rules", () => {
   it("finds the component files it checks", () => {
@@ -34,5 +41,14 @@ describe("house rules", () => {
   it("has no bare fetch( in components: requests go through lib/client/fetcher.ts", () => {
     const bare = components.filter((f) => /\bfetch\(/.test(readFileSync(f, "utf8"))).map((f) => relative(root, f));
     expect(bare).toEqual([]);
+  });
+
+  // An implicit grid column is sized to its widest content, so one wide table pushes the whole page past a
+  // phone's screen; grid-cols-1 is minmax(0, 1fr) and lets the table scroll inside its card instead.
+  it("starts every responsive grid from grid-cols-1 on a phone", () => {
+    expect(implicitPhoneGrids('<div className="grid gap-6 lg:grid-cols-3">')).toHaveLength(1);
+    expect(implicitPhoneGrids('<div className="grid grid-cols-1 gap-6 lg:grid-cols-3">')).toEqual([]);
+    const offenders = screens.flatMap((f) => implicitPhoneGrids(readFileSync(f, "utf8")).map((c) => `${relative(root, f)}: ${c}`));
+    expect(offenders).toEqual([]);
   });
 });

@@ -50,7 +50,7 @@ export default async function CatalogEntryPage({ params }: { params: Promise<{ e
       {isLifeSafetyEntry(catalog, kind, entry) ? <LifeSafetyCaution className="mb-4" /> : null}
       {mainsFed ? <MainsCaution className="mb-4" /> : null}
       <p className="mb-4 max-w-3xl text-sm">{entry.description}</p>
-      <div className="mb-6 grid gap-6 lg:grid-cols-3">
+      <div className="mb-6 grid grid-cols-1 gap-6 lg:grid-cols-3">
         <Card className="lg:col-span-2">
           <h2 className="mb-2 font-semibold">Figures</h2>
           <FiguresTable kind={kind} entry={entry} money={makeFormat(actor.settings).money} />

@@ -45,7 +45,7 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
         </p>
       ) : null}
       <p className="mb-4 max-w-3xl text-sm">{site.description}</p>
-      <dl className="mb-6 grid max-w-3xl gap-x-4 gap-y-1 text-sm sm:grid-cols-[10rem_1fr]">
+      <dl className="mb-6 grid max-w-3xl grid-cols-1 gap-x-4 gap-y-1 text-sm sm:grid-cols-[10rem_1fr]">
         <dt className="text-slate-500">Customer contact</dt>
         <dd>{[site.contactName, site.contactPhone, site.contactEmail].filter(Boolean).join(" · ") || "none recorded"}</dd>
         <dt className="text-slate-500">Installers</dt>

@@ -15,7 +15,7 @@ export default function CompareLoading() {
       <div className="flex flex-col gap-6">
         <Card>
           <h2 className="text-lg font-semibold">Pick the layouts to compare</h2>
-          <div className="mt-2 grid gap-2 sm:grid-cols-2 lg:grid-cols-3">
+          <div className="mt-2 grid grid-cols-1 gap-2 sm:grid-cols-2 lg:grid-cols-3">
             {[0, 1, 2].map((i) => (
               <div key={i} className="flex items-start gap-2 rounded-md border border-line bg-white p-2">
                 <Bone className="mt-1 h-4 w-4" />
