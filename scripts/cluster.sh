@@ -25,6 +25,10 @@ PUBLIC_URL="http://localhost:$HTTP_FRONT"
 DIST_DIR="${NEXT_DIST_DIR:-.next}"
 export LOOPWRIGHT_CLUSTER_DIR="$CLUSTER_DIR"
 
+# As root the nodes run as Debian's `mysql` user: the joiner's rsync daemon would otherwise run as `nobody` and
+# could not write into a data folder owned by root.
+if [ "$(id -u)" = 0 ] && id mysql >/dev/null 2>&1; then NODE_USER=mysql; else NODE_USER="$(id -un)"; fi
+
 node_port() { echo $((3330 + $1)); }
 node_dir() { echo "$CLUSTER_DIR/node$1"; }
 node_sock() { echo "$(node_dir "$1")/mysqld.sock"; }
@@ -40,7 +44,7 @@ port_taken() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
 node_args() {
   local n="$1" dir port gport
   dir="$(node_dir "$n")"; port="$(node_port "$n")"; gport=$((4570 + n))
-  echo --no-defaults --user="$(id -un)" --datadir="$dir/data" --bind-address=127.0.0.1 --port="$port" \
+  echo --no-defaults --user="$NODE_USER" --datadir="$dir/data" --bind-address=127.0.0.1 --port="$port" \
     --socket="$dir/mysqld.sock" --pid-file="$dir/mysqld.pid" --log-error="$dir/error.log" --skip-name-resolve \
     --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci --max-connections=300 \
     --innodb-buffer-pool-size=64M --performance-schema=OFF --innodb-flush-log-at-trx-commit=2 \
@@ -56,7 +60,8 @@ init_node() {
   local dir; dir="$(node_dir "$1")"
   [ -d "$dir/data/mysql" ] && return 0
   mkdir -p "$dir/data"
-  mariadb-install-db --no-defaults --user="$(id -un)" --datadir="$dir/data" \
+  chown -R "$NODE_USER" "$dir"
+  mariadb-install-db --no-defaults --user="$NODE_USER" --datadir="$dir/data" \
     --auth-root-authentication-method=normal --skip-test-db >"$dir/install.log" 2>&1
 }
 
@@ -275,6 +280,11 @@ status() {
   for i in 1 2; do curl -s -o /dev/null -w "app$i: HTTP %{http_code}\n" "http://127.0.0.1:${APP_PORTS[$((i - 1))]}/api/health" || echo "app$i: down"; done
   curl -s -o /dev/null -w "balancer: HTTP %{http_code}\n" "http://127.0.0.1:$HTTP_FRONT/api/health" || echo "balancer: down"
 }
+
+# One change at a time: a second `up` or `stop` while one runs would start a node twice.
+mkdir -p "$CLUSTER_DIR"
+exec 9>"$CLUSTER_DIR/.script.lock"
+flock -w 300 9 || { echo "Another scripts/cluster.sh is still running." >&2; exit 1; }
 
 case "${1:-up}" in
   up) up ;;
