@@ -4,7 +4,7 @@
 #   scripts/cluster.sh [up]          install what is missing, start the cluster, migrate and seed once, start the apps
 #   scripts/cluster.sh stop          apps, HAProxy, mail sink, then the nodes one by one (the last one may bootstrap next time)
 #   scripts/cluster.sh status        what answers, and each node's view of the cluster
-#   scripts/cluster.sh node-kill N | node-start N | app-kill N | app-start N     faults and repairs (the fault test uses them)
+#   scripts/cluster.sh node-kill N | node-start N | app-kill N | app-stop N | app-start N     faults and repairs (the fault test and the cluster bench use them)
 #   scripts/cluster.sh sql N         a client as root on node N
 # Ports (see README "Beyond one machine"): nodes SQL 3331-3333, Galera replication 4571-4573, incremental state
 # transfer 4581-4583, full state transfer (rsync) 3334-3336; HAProxy SQL 3340, HTTP 3345, stats 3346;
@@ -293,7 +293,8 @@ case "${1:-up}" in
   node-kill) kill_node "${2:?node number}" ;;
   node-start) start_node "${2:?node number}" ;;
   app-kill) signal_app "${2:?app number}" KILL ;;
+  app-stop) signal_app "${2:?app number}" TERM ;;
   app-start) app_env; start_app "${2:?app number}" ;;
   sql) node_sql "${2:-1}" ;;
-  *) echo "usage: scripts/cluster.sh [up]|stop|status|node-kill N|node-start N|app-kill N|app-start N|sql N" >&2; exit 2 ;;
+  *) echo "usage: scripts/cluster.sh [up]|stop|status|node-kill N|node-start N|app-kill N|app-stop N|app-start N|sql N" >&2; exit 2 ;;
 esac

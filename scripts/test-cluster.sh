@@ -7,3 +7,4 @@ source "$(dirname "$0")/env.sh"
 cd "$ROOT"
 bash scripts/cluster.sh up
 npx tsx tests/cluster/fault-run.ts
+bash scripts/cluster-backup-check.sh

@@ -119,8 +119,8 @@ describe("a write conflict (1213) on a layout save", () => {
         if (left-- <= 0) return real.call(this);
         await this.rollback();
         await meanwhile?.();
-        const original = Object.assign(new Error("Deadlock found when trying to get lock; try restarting transaction (injected at commit)"), { errno: 1213, code: "ER_LOCK_DEADLOCK", sqlState: "40001" });
-        throw new DatabaseError(original as Error & { sql: string; parameters: object });
+        const original = Object.assign(new Error("Deadlock found when trying to get lock; try restarting transaction (injected at commit)"), { errno: 1213, code: "ER_LOCK_DEADLOCK", sqlState: "40001", sql: "COMMIT", parameters: {} });
+        throw new DatabaseError(original);
       });
       return () => n - Math.max(left, 0);
     };
