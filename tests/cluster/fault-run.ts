@@ -56,23 +56,33 @@ async function setUp() {
   return { designer, installer, layouts, readingLayoutId: id, loops };
 }
 
+/** The database nodes HAProxy holds SQL connections to now (the writer), from its statistics page. */
+async function writers(): Promise<string> {
+  const csv = await fetch("http://127.0.0.1:3346/;csv").then((r) => r.text(), () => "");
+  const on = csv.split("\n").filter((l) => l.startsWith("galera,node") && Number(l.split(",")[4]) > 0);
+  return on.map((l) => `${l.split(",")[1]} (${l.split(",")[4]} connections)`).join(", ") || "none";
+}
+
 async function cluster(...args: string[]) {
   const started = Date.now();
   const { stdout } = await run("bash", ["scripts/cluster.sh", ...args], { env: process.env, timeout: 300_000 });
-  log(`${stdout.trim().split("\n").pop()} (${((Date.now() - started) / 1000).toFixed(1)} s)`);
+  log(`${stdout.trim().split("\n").pop()} (${((Date.now() - started) / 1000).toFixed(1)} s); SQL connections now on: ${await writers()}`);
 }
 
 /** Faults at fixed moments of the run: the database node serving writes first, later an app instance. */
 async function faults(seconds: number) {
   const at = async (s: number) => sleep(Math.max(0, t0Run + s * 1000 - Date.now()));
   await at(seconds * 0.2);
+  log(`SQL connections on: ${await writers()}`);
   await cluster("node-kill", "1");
   await at(seconds * 0.45);
-  await cluster("node-start", "1");
+  // the node's recovery and catch-up take a while on a busy machine: the app fault does not wait for it
+  const node = cluster("node-start", "1");
   await at(seconds * 0.6);
   await cluster("app-kill", "1");
   await at(seconds * 0.75);
   await cluster("app-start", "1");
+  await node;
 }
 let t0Run = 0;
 
