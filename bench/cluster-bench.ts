@@ -28,6 +28,7 @@ async function instancesUp(n: number) {
 }
 
 interface Figures {
+  statuses: Record<string, number>;
   rps: number;
   readP95: number;
   saveP95: number;
@@ -41,6 +42,8 @@ async function measure(api: CookieClient, layouts: { id: number; version: number
   const read: number[] = [];
   const save: number[] = [];
   let bad = 0;
+  const statuses: Record<string, number> = {};
+  const tally = (kind: string, status: number) => (statuses[`${kind} ${status}`] = (statuses[`${kind} ${status}`] ?? 0) + 1);
   let nextReader = 0;
   let nextSaver = readers;
   const common = { url: BALANCER, duration: seconds, timeout: 30 };
@@ -58,16 +61,18 @@ async function measure(api: CookieClient, layouts: { id: number; version: number
           setupRequest: (req) => ({ ...req, body: JSON.stringify({ version: l.version, document }) }),
           onResponse: (status, text) => {
             if (status === 200) l.version = (JSON.parse(text) as { layout: { version: number } }).layout.version;
+            // a save whose answer was lost moved the version on: carry on from the current one
+            if (status === 409) l.version = (JSON.parse(text) as { currentVersion?: number }).currentVersion ?? l.version;
           },
         },
       ]);
     },
   });
-  reading.on("response", (_c: unknown, status: number, _b: number, ms: number) => (read.push(ms), status !== 200 && bad++));
-  saving.on("response", (_c: unknown, status: number, _b: number, ms: number) => (save.push(ms), status !== 200 && bad++));
+  reading.on("response", (_c: unknown, status: number, _b: number, ms: number) => (read.push(ms), tally("read", status), status !== 200 && bad++));
+  saving.on("response", (_c: unknown, status: number, _b: number, ms: number) => (save.push(ms), tally("save", status), status !== 200 && bad++));
   const [r, s] = await Promise.all([reading, saving]);
   const sorted = (xs: number[]) => [...xs].sort((a, b) => a - b);
-  return { rps: (read.length + save.length) / seconds, readP95: percentile(sorted(read), 95), saveP95: percentile(sorted(save), 95), errors: bad + r.errors + s.errors + r.timeouts + s.timeouts, load: loadavg()[0] };
+  return { statuses, rps: (read.length + save.length) / seconds, readP95: percentile(sorted(read), 95), saveP95: percentile(sorted(save), 95), errors: bad + r.errors + s.errors + r.timeouts + s.timeouts, load: loadavg()[0] };
 }
 
 export async function run(): Promise<void> {
@@ -106,6 +111,7 @@ export async function run(): Promise<void> {
     [2, two],
   ] as const)
     console.log(`| ${n} | ${f.rps.toFixed(1)} | ${f.readP95.toFixed(0)} | ${f.saveP95.toFixed(0)} | ${f.errors} | ${f.load.toFixed(1)} |`);
+  console.log(`answers: one instance ${JSON.stringify(one.statuses)}; two ${JSON.stringify(two.statuses)}`);
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) await run();

@@ -189,7 +189,9 @@ backend apps
     option httpchk GET /api/health
     # the app answers 503 while the database does not; the instance itself is alive
     http-check expect rstatus ^(200|503)$
-    default-server inter 1s fall 2 rise 2
+    # a loaded instance may take seconds to answer; a dead one refuses the connection and is marked down at once
+    timeout check 5s
+    default-server inter 2s fall 3 rise 2 observe layer4 error-limit 1 on-error mark-down
     server app1 127.0.0.1:${APP_PORTS[0]} check
     server app2 127.0.0.1:${APP_PORTS[1]} check
 
