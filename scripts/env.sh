@@ -4,7 +4,8 @@ DATA_DIR="$ROOT/.data"
 DB_PORT="${LOOPWRIGHT_DB_PORT:-3316}"
 # Another port is another private instance (the fault tests stop and start one of their own).
 if [ "$DB_PORT" = 3316 ]; then DB_DIR="$DATA_DIR/mariadb"; else DB_DIR="$DATA_DIR/mariadb-$DB_PORT"; fi
-DB_SOCKET="$DB_DIR/mysqld.sock"
+# LOOPWRIGHT_DB_SOCKET: another server to dump from (a cluster node: scripts/cluster-backup-check.sh)
+DB_SOCKET="${LOOPWRIGHT_DB_SOCKET:-$DB_DIR/mysqld.sock}"
 DB_USER="loopwright"
 DB_PASSWORD="${LOOPWRIGHT_DB_PASSWORD:-loopwright-local}"
 SMTP_PORT="${LOOPWRIGHT_SMTP_PORT:-2525}"

@@ -3,6 +3,7 @@ import { col, literal, Op, type Transaction } from "sequelize";
 import { db } from "./db";
 import { audit } from "./audit";
 import { ApiError, conflict, notFound } from "./errors";
+import { isWriteConflict } from "./db-errors";
 import { findSite } from "./sites";
 import { catalogFor, ensureCan, loadSchedule } from "./schedules";
 import type { Actor } from "./session";
@@ -208,11 +209,31 @@ export async function saveLayout(actor: Actor, layoutId: number, input: SaveLayo
   return writeRevision(actor, l, { expectVersion: input.version, document: input.document, summary, note: input.note ?? "", name: input.name, action: "layout.save" });
 }
 
-async function writeRevision(
-  actor: Actor,
-  l: Layout,
-  w: { expectVersion: number; document: LayoutDocument; summary: LayoutSolveSummary; note: string; name?: string; action: string; detail?: Record<string, unknown> },
-): Promise<{ layout: LayoutMeta }> {
+type RevisionWrite = { expectVersion: number; document: LayoutDocument; summary: LayoutSolveSummary; note: string; name?: string; action: string; detail?: Record<string, unknown> };
+
+/**
+ * A deadlock, or on a Galera cluster a certification conflict with a write made on another node (both 1213,
+ * the transaction rolled back whole), is tried once more; a second one is a 409 with the current version,
+ * never a 500. The retry re-checks the version, so a save that lost to another one is refused as stale.
+ */
+async function writeRevision(actor: Actor, l: Layout, w: RevisionWrite): Promise<{ layout: LayoutMeta }> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await writeRevisionOnce(actor, l, w);
+    } catch (e) {
+      if (!isWriteConflict(e)) throw e;
+      if (attempt === 2) break;
+    }
+  }
+  const now = await Layout.findByPk(l.id, { attributes: ["id", "version"] });
+  if (!now) throw notFound("That layout");
+  throw conflict(`This layout was being saved by someone else at the same moment, so your save was not stored (it is now version ${now.version}). Reload and save again.`, {
+    currentVersion: now.version,
+    code: "write-conflict",
+  });
+}
+
+async function writeRevisionOnce(actor: Actor, l: Layout, w: RevisionWrite): Promise<{ layout: LayoutMeta }> {
   return db().transaction(async (transaction) => {
     const [changed] = await Layout.update(
       { version: literal("version + 1") as unknown as number, currentRevision: literal("current_revision + 1") as unknown as number, ...(w.name ? { name: w.name } : {}) },

@@ -7,6 +7,7 @@ import { requireActor, type Actor } from "./session";
 import type { Permission } from "@/lib/auth/permissions";
 import { bindModels } from "./db";
 import { refuseForeignOrigin } from "./request-origin";
+import { isNodeNotReady, isWriteConflict } from "./db-errors";
 
 export interface ErrorBody {
   error: string;
@@ -23,7 +24,7 @@ export function zodIssues(error: ZodError): ApiErrorIssue[] {
 const connectionLost = /^(ECONNREFUSED|ECONNRESET|EHOSTUNREACH|ETIMEDOUT|EPIPE|ER_GET_CONNECTION_TIMEOUT|ER_CONNECTION_TIMEOUT|ER_SOCKET_UNEXPECTED_CLOSE|ER_SOCKET_TIMEOUT|ER_CMD_CONNECTION_CLOSED|ER_CONNECTION_ALREADY_CLOSED|ER_CONNECTION_KILLED|ER_SERVER_SHUTDOWN)$/;
 
 function isDatabaseDown(e: unknown): boolean {
-  if (e instanceof ConnectionError || e instanceof TimeoutError) return true;
+  if (e instanceof ConnectionError || e instanceof TimeoutError || isNodeNotReady(e)) return true;
   type Cause = { code?: string; sqlState?: string };
   const cause = (e as { original?: Cause; parent?: Cause })?.original ?? (e as { parent?: Cause })?.parent;
   // SQLSTATE class 08 is "connection exception"
@@ -36,6 +37,8 @@ export function errorResponse(e: unknown): NextResponse<ErrorBody> {
   if (e instanceof ZodError) return NextResponse.json({ error: "Some fields are not valid.", issues: zodIssues(e) }, { status: 422 });
   if (isDatabaseDown(e))
     return NextResponse.json({ error: "The database is not answering right now; nothing was saved. Try again in a moment." }, { status: 503, headers: { "Retry-After": "2" } });
+  // a deadlock or a Galera certification conflict that reached here: rolled back whole, so nothing was stored
+  if (isWriteConflict(e)) return NextResponse.json({ error: "Another change was being written at the same moment; nothing was saved. Try again." }, { status: 409 });
   if (e instanceof UniqueConstraintError) return NextResponse.json({ error: "That already exists." }, { status: 409 });
   if (e instanceof ForeignKeyConstraintError) return NextResponse.json({ error: "That refers to something that does not exist." }, { status: 422 });
   console.error(e instanceof BaseError ? `${e.name}: ${e.message}` : e);
