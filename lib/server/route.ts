@@ -35,8 +35,9 @@ function isDatabaseDown(e: unknown): boolean {
 export function errorResponse(e: unknown): NextResponse<ErrorBody> {
   if (e instanceof ApiError) return NextResponse.json({ error: e.message, ...(e.issues ? { issues: e.issues } : {}), ...e.extra }, { status: e.status });
   if (e instanceof ZodError) return NextResponse.json({ error: "Some fields are not valid.", issues: zodIssues(e) }, { status: 422 });
+  // a connection that drops during COMMIT leaves the outcome unknown to us: the write may have landed
   if (isDatabaseDown(e))
-    return NextResponse.json({ error: "The database is not answering right now; nothing was saved. Try again in a moment." }, { status: 503, headers: { "Retry-After": "2" } });
+    return NextResponse.json({ error: "The database is not answering right now; a change you sent may or may not have been stored. Reload to check before trying again." }, { status: 503, headers: { "Retry-After": "2" } });
   // a deadlock or a Galera certification conflict that reached here: rolled back whole, so nothing was stored
   if (isWriteConflict(e)) return NextResponse.json({ error: "Another change was being written at the same moment; nothing was saved. Try again." }, { status: 409 });
   if (e instanceof UniqueConstraintError) return NextResponse.json({ error: "That already exists." }, { status: 409 });

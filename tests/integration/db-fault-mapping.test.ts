@@ -53,7 +53,7 @@ describe("database errors through the route helper", () => {
     console.log(`killed mid-query: ${(error as { name?: string }).name} ${(error as { original?: { code?: string } }).original?.code ?? ""}`);
     const r = await mapped(error);
     expect(r.status, String(error)).toBe(503);
-    expect(r.body.error).toMatch(/database is not answering right now; nothing was saved/);
+    expect(r.body.error).toMatch(/database is not answering right now; a change you sent may or may not have been stored/);
     expect(r.retryAfter).toBe("2");
   });
 
