@@ -34,7 +34,7 @@ const ERROR_WORDS: Record<number, string> = {
   422: "Some fields are not valid: `issues` lists each with its dotted path.",
   429: "Too many attempts; wait before trying again.",
   500: "Something went wrong on the server; details are logged, never sent.",
-  503: "The database is not answering; nothing was saved.",
+  503: "The database is not answering; a change may or may not have been stored.",
 };
 
 const errorResponse = (status: number) => ({ description: ERROR_WORDS[status] ?? "Refused.", content: { "application/json": { schema: REF("Error") } } });
