@@ -14,7 +14,8 @@ import { CookieClient, ensureBuild, startServer } from "@/tests/api-registry/htt
 import { largeLayoutDocument, scheduleCsvOf } from "@/tests/api-registry/large-layout";
 
 const DETECTORS = 500;
-const DB_NAME = "loopwright_load";
+// LOAD_DB_NAME: another database, for runs side by side
+const DB_NAME = process.env.LOAD_DB_NAME || "loopwright_load";
 
 function percentile(sorted: number[], p: number): number {
   if (!sorted.length) return NaN;
@@ -85,12 +86,26 @@ export async function run(): Promise<void> {
           spare.version = res.json.layout.version;
         }),
       );
+    // the server's own CPU time per request, which a busy machine does not inflate as it does wall time
+    const cpuPer = async (n: number, fn: () => Promise<unknown>) => {
+      const c0 = server.cpuMs();
+      for (let i = 0; i < n; i++) await fn();
+      return (server.cpuMs() - c0) / n;
+    };
+    const readCpu = await cpuPer(100, () => api.request(`/api/layouts/${spare.id}`));
+    const saveCpu = await cpuPer(30, async () => {
+      const res = await api.request(`/api/layouts/${spare.id}`, { method: "PUT", json: { version: spare.version, document } });
+      spare.version = res.json.layout.version;
+    });
     const medianOf = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
     const median = (xs: number[]) => medianOf(xs).toFixed(1);
     console.log(`load: ${connections} clients (${readers} reading, ${savers} saving) for ${seconds} s on ${server.base}; ${DETECTORS}-detector layout, ${Math.round(body.length / 1024)} KiB per save; machine load average ${loadavg()[0].toFixed(1)} on ${availableParallelism()} cores`);
     console.log(`one at a time: read median ${median(alone.read)} ms, save median ${median(alone.save)} ms (${processes > 0 ? processes : 1} app process${processes > 1 ? "es" : ""})`);
     under("one 500-detector layout read alone", medianOf(alone.read), 3, "ms", `median of ${alone.read.length}, over loopback`);
     under("one 500-detector layout save alone", medianOf(alone.save), 10, "ms", `median of ${alone.save.length}, over loopback`);
+    console.log(`server CPU time per request, one at a time: read ${readCpu.toFixed(2)} ms, save ${saveCpu.toFixed(2)} ms (all app processes and their threads)`);
+    under("one 500-detector layout read alone (server CPU)", readCpu, 3, "ms", "server CPU time over 100 reads, /proc");
+    under("one 500-detector layout save alone (server CPU)", saveCpu, 10, "ms", "server CPU time over 30 saves, /proc");
 
     const headers = { cookie: api.cookieHeader() };
     const readLatencies: number[] = [];

@@ -11,7 +11,8 @@ import { largeLayoutDocument, scheduleCsvOf } from "@/tests/api-registry/large-l
 import { under } from "@/bench/figures";
 import { makeHeavyWorkSites, ms, requestSheetPdf, requestSuggestions, SHEET_LOOPS, SUGGEST_DETECTORS, watchHealth, type HealthWatch } from "@/bench/heavy-work-probe";
 
-const DB_NAME = "loopwright_offloop_bench";
+// OFF_LOOP_DB_NAME: another database, for runs side by side
+const DB_NAME = process.env.OFF_LOOP_DB_NAME || "loopwright_offloop_bench";
 const GOAL_MS = 50;
 
 export interface OffLoopFigures {

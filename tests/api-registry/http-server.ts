@@ -1,5 +1,5 @@
 import { execFileSync, spawn } from "node:child_process";
-import { existsSync } from "node:fs";
+import { existsSync, readdirSync, readFileSync } from "node:fs";
 import { createServer } from "node:net";
 import { join } from "node:path";
 
@@ -28,6 +28,33 @@ export interface RunningServer {
   base: string;
   log(): string;
   stop(): void;
+  /** CPU time (user + system) the server's processes have used so far, ms; NaN where /proc is not there. */
+  cpuMs(): number;
+}
+
+let ticksPerSecond: number | undefined;
+
+/** User + system CPU time of every live process in process group `pgid`, ms (Linux /proc; 10 ms resolution at 100 Hz). */
+export function processGroupCpuMs(pgid: number): number {
+  try {
+    ticksPerSecond ??= Number(execFileSync("getconf", ["CLK_TCK"]).toString().trim()) || 100;
+    let ticks = 0;
+    for (const d of readdirSync("/proc")) {
+      if (!/^\d+$/.test(d)) continue;
+      let stat: string;
+      try {
+        stat = readFileSync(`/proc/${d}/stat`, "utf8");
+      } catch {
+        continue; // ended meanwhile
+      }
+      // fields after the command name (which may hold spaces): state ppid pgrp ... utime(14) stime(15)
+      const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+      if (Number(f[2]) === pgid) ticks += Number(f[11]) + Number(f[12]);
+    }
+    return (ticks * 1000) / ticksPerSecond;
+  } catch {
+    return NaN;
+  }
 }
 
 /**
@@ -66,7 +93,7 @@ export async function startServer(opts: { root: string; distDir: string; databas
       }
   };
   for (let i = 0; i < 240; i++) {
-    if (await fetch(`${base}/api/health`).then((r) => r.status === 200, () => false)) return { base, log: () => log, stop };
+    if (await fetch(`${base}/api/health`).then((r) => r.status === 200, () => false)) return { base, log: () => log, stop, cpuMs: () => processGroupCpuMs(child.pid!) };
     if (child.exitCode !== null) break;
     await sleep(250);
   }
