@@ -94,7 +94,7 @@ export async function measureOffLoop(root = process.cwd(), runs = Number(process
     const t = performance.now();
     const bigPdf = await requestSheetPdf(api, big.layoutId);
     const bigPdfMs = bigPdf.status === 200 ? performance.now() - t : NaN;
-    if (bigPdf.status !== 200) console.log(`500-detector sheet PDF answered ${bigPdf.status}`);
+    if (bigPdf.status !== 200) console.log(`500-detector sheet PDF answered ${bigPdf.status} after ${ms(performance.now() - t)}: ${new TextDecoder().decode(bigPdf.bytes).slice(0, 200)}`);
     return { idle, suggestion, pdf, readsDuringHeavy: { latencies: heavy.latencies, workMs: heavy.workMs, statuses: heavy.statuses }, bigPdfMs, appProcesses };
   } finally {
     server.stop();
