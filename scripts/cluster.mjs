@@ -3,8 +3,9 @@
 // primary hands each new connection to one of them. Used by `npm start` (scripts/start.sh) and by the
 // two-instance test. Usage: node scripts/cluster.mjs --hostname 127.0.0.1 --port 3000
 //
-// An app process that dies after it was serving is started again (at most once a second); one that dies before it
-// ever listened (a bad setting, a missing build) stops the whole server with its exit code, rather than looping.
+// An app process that dies after it was serving is started again (at most once a second); one that dies in its first
+// STARTUP_MS (a bad setting, a missing build: Next listens before it loads the build, so listening proves nothing)
+// stops the whole server with its exit code, rather than looping.
 // SIGTERM or SIGINT to the primary ends every app process and then the primary.
 //
 // The processes also relay one kind of message: "forget this member" (lib/server/actor-cache.ts), so that a
@@ -31,13 +32,14 @@ const nextBin = require.resolve("next/dist/bin/next");
 const args = ["start", ...process.argv.slice(2)];
 let stopping = false;
 let lastRestart = 0;
-const serving = new WeakSet();
+const STARTUP_MS = 20_000;
+const started = new WeakMap();
 
 cluster.setupPrimary({ exec: nextBin, args });
 
 function fork() {
   const w = cluster.fork({ LOOPWRIGHT_APP_PROCESS: "1" });
-  w.on("listening", () => serving.add(w));
+  started.set(w, Date.now());
   // relay a cache-clearing message to every other app process
   w.on("message", (msg) => {
     if (!msg || msg.type !== "loopwright:forget-actor") return;
@@ -48,8 +50,8 @@ function fork() {
 
 cluster.on("exit", (w, code, signal) => {
   if (stopping) return; // the handler below ends the primary once the last one is gone
-  if (!serving.has(w)) {
-    console.error(`An app process stopped before it served (exit ${code ?? signal}); stopping the server.`);
+  if (Date.now() - (started.get(w) ?? 0) < STARTUP_MS) {
+    console.error(`An app process stopped while starting (exit ${code ?? signal}); stopping the server.`);
     stop(typeof code === "number" && code !== 0 ? code : 1);
     return;
   }
