@@ -2,17 +2,20 @@
 // 500-detector layout (each saver its own layout, with the version from its previous response, so no 409s).
 // Prints requests per second, p50/p95/p99 latency of reads and saves, and errors, next to the targets
 // (p95 < 100 ms reads, < 200 ms saves, zero errors). A benchmark: nothing is asserted.
-// `npm run load`; LOAD_DURATION_S and LOAD_CONNECTIONS change the run; NEXT_DIST_DIR picks the build.
+// `npm run load`; LOAD_DURATION_S, LOAD_CONNECTIONS and LOAD_PROCESSES (app processes; default one per core, as
+// `npm start`) change the run; NEXT_DIST_DIR picks the build.
 import { execFileSync } from "node:child_process";
 import { readFileSync } from "node:fs";
 import { availableParallelism, loadavg } from "node:os";
 import { join } from "node:path";
 import autocannon, { type AutocannonClient } from "autocannon";
+import { record, under } from "@/bench/figures";
 import { CookieClient, ensureBuild, startServer } from "@/tests/api-registry/http-server";
 import { largeLayoutDocument, scheduleCsvOf } from "@/tests/api-registry/large-layout";
 
 const DETECTORS = 500;
-const DB_NAME = "loopwright_load";
+// LOAD_DB_NAME: another database, for runs side by side
+const DB_NAME = process.env.LOAD_DB_NAME || "loopwright_load";
 
 function percentile(sorted: number[], p: number): number {
   if (!sorted.length) return NaN;
@@ -50,7 +53,9 @@ export async function run(): Promise<void> {
   sh("npx", ["tsx", "scripts/migrate.ts"], { ...process.env, DATABASE_URL: databaseUrl });
   sh("npx", ["tsx", "scripts/seed.ts"], { ...process.env, DATABASE_URL: databaseUrl });
   ensureBuild(root, distDir);
-  const server = await startServer({ root, distDir, databaseUrl, secret });
+  // as `npm start` runs it: one app process per core (LOAD_PROCESSES changes it; 0 is a plain next start)
+  const processes = Number(process.env.LOAD_PROCESSES ?? availableParallelism());
+  const server = await startServer({ root, distDir, databaseUrl, secret, processes: processes > 0 ? processes : undefined });
   try {
     const api = new CookieClient(server.base);
     await api.signIn("designer@quillfen.example", "loop-demo-2026");
@@ -81,9 +86,26 @@ export async function run(): Promise<void> {
           spare.version = res.json.layout.version;
         }),
       );
-    const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)].toFixed(1);
+    // the server's own CPU time per request, which a busy machine does not inflate as it does wall time
+    const cpuPer = async (n: number, fn: () => Promise<unknown>) => {
+      const c0 = server.cpuMs();
+      for (let i = 0; i < n; i++) await fn();
+      return (server.cpuMs() - c0) / n;
+    };
+    const readCpu = await cpuPer(100, () => api.request(`/api/layouts/${spare.id}`));
+    const saveCpu = await cpuPer(30, async () => {
+      const res = await api.request(`/api/layouts/${spare.id}`, { method: "PUT", json: { version: spare.version, document } });
+      spare.version = res.json.layout.version;
+    });
+    const medianOf = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+    const median = (xs: number[]) => medianOf(xs).toFixed(1);
     console.log(`load: ${connections} clients (${readers} reading, ${savers} saving) for ${seconds} s on ${server.base}; ${DETECTORS}-detector layout, ${Math.round(body.length / 1024)} KiB per save; machine load average ${loadavg()[0].toFixed(1)} on ${availableParallelism()} cores`);
-    console.log(`one at a time: read median ${median(alone.read)} ms, save median ${median(alone.save)} ms`);
+    console.log(`one at a time: read median ${median(alone.read)} ms, save median ${median(alone.save)} ms (${processes > 0 ? processes : 1} app process${processes > 1 ? "es" : ""})`);
+    under("one 500-detector layout read alone", medianOf(alone.read), 3, "ms", `median of ${alone.read.length}, over loopback`);
+    under("one 500-detector layout save alone", medianOf(alone.save), 10, "ms", `median of ${alone.save.length}, over loopback`);
+    console.log(`server CPU time per request, one at a time: read ${readCpu.toFixed(2)} ms, save ${saveCpu.toFixed(2)} ms (all app processes and their threads)`);
+    under("one 500-detector layout read alone (server CPU)", readCpu, 3, "ms", "server CPU time over 100 reads, /proc");
+    under("one 500-detector layout save alone (server CPU)", saveCpu, 10, "ms", "server CPU time over 30 saves, /proc");
 
     const headers = { cookie: api.cookieHeader() };
     const readLatencies: number[] = [];
@@ -158,6 +180,11 @@ export async function run(): Promise<void> {
     console.log(`| all | ${readLatencies.length + saveLatencies.length} | ${((readLatencies.length + saveLatencies.length) / seconds).toFixed(1)} | | | | | |`);
     console.log("");
     console.log(`errors: ${errors} (target 0: ${errors === 0 ? "met" : "not met"}) — connection errors ${r.errors + s.errors}, timeouts ${r.timeouts + s.timeouts}, statuses: reads ${JSON.stringify(statuses.read)}, saves ${JSON.stringify(statuses.save)}`);
+    const how = `${connections} clients for ${seconds} s, ${processes > 0 ? processes : 1} app process${processes > 1 ? "es" : ""}`;
+    under("50 clients, 30 s: reads p95", rows[0].p95, 100, "ms", `${how}; p50 ${rows[0].p50.toFixed(0)}, p99 ${rows[0].p99.toFixed(0)}; ${rows[0].rps.toFixed(0)} reads/s`);
+    under("50 clients, 30 s: saves p95", rows[1].p95, 200, "ms", `${how}; p50 ${rows[1].p50.toFixed(0)}, p99 ${rows[1].p99.toFixed(0)}; ${rows[1].rps.toFixed(0)} saves/s`);
+    record({ name: "50 clients, 30 s: errors", value: errors, unit: "count", target: "0", met: errors === 0, how });
+    record({ name: "50 clients, 30 s: lost or doubled saves", value: mismatched, unit: "count", target: "0", met: mismatched === 0, how: `checked against every saver's accepted answers` });
     console.log(`409 on saves: ${statuses.save[409] ?? 0}; saver layouts with a save in flight at the stop: ${inFlight}; with a lost or doubled save: ${mismatched}`);
   } finally {
     server.stop();

@@ -7,15 +7,48 @@ import { readFileSync } from "node:fs";
 import { availableParallelism, loadavg } from "node:os";
 import { join } from "node:path";
 import { CookieClient, ensureBuild, startServer } from "@/tests/api-registry/http-server";
+import { largeLayoutDocument, scheduleCsvOf } from "@/tests/api-registry/large-layout";
+import { under } from "@/bench/figures";
 import { makeHeavyWorkSites, ms, requestSheetPdf, requestSuggestions, SHEET_LOOPS, SUGGEST_DETECTORS, watchHealth, type HealthWatch } from "@/bench/heavy-work-probe";
 
-const DB_NAME = "loopwright_offloop_bench";
+// OFF_LOOP_DB_NAME: another database, for runs side by side
+const DB_NAME = process.env.OFF_LOOP_DB_NAME || "loopwright_offloop_bench";
 const GOAL_MS = 50;
 
 export interface OffLoopFigures {
   idle: HealthWatch;
   suggestion: HealthWatch[];
   pdf: HealthWatch[];
+  /** GET of a 500-detector layout, one after another, while four sheet PDFs and two suggestions are made at once. */
+  readsDuringHeavy?: { latencies: number[]; workMs: number; statuses: number[] };
+  /** One uncached terminal sheet PDF of a 500-detector layout, ms. */
+  bigPdfMs?: number;
+  appProcesses: number;
+}
+
+const BIG_DETECTORS = 500;
+
+/** Reads `path` one request at a time (a pause of `intervalMs` between) while `work` runs; every answer's time. */
+async function readWhile<T>(api: CookieClient, path: string, work: () => Promise<T>, intervalMs = 10): Promise<{ value: T; latencies: number[]; statuses: number[]; workMs: number }> {
+  const latencies: number[] = [];
+  const statuses: number[] = [];
+  let done = false;
+  const poll = async () => {
+    while (!done) {
+      const t = performance.now();
+      const res = await fetch(`${api.base}${path}`, { headers: { cookie: api.cookieHeader() } });
+      await res.arrayBuffer();
+      latencies.push(performance.now() - t);
+      statuses.push(res.status);
+      await new Promise((r) => setTimeout(r, intervalMs));
+    }
+  };
+  const polling = poll();
+  const started = performance.now();
+  const value = await work().finally(() => (done = true));
+  const workMs = performance.now() - started;
+  await polling;
+  return { value, latencies, statuses, workMs };
 }
 
 /** Starts `next start` from `root` on a fresh database and measures; `run()` uses this checkout. */
@@ -29,12 +62,14 @@ export async function measureOffLoop(root = process.cwd(), runs = Number(process
   sh("npx", ["tsx", "scripts/migrate.ts"], { ...process.env, DATABASE_URL: databaseUrl });
   sh("npx", ["tsx", "scripts/seed.ts"], { ...process.env, DATABASE_URL: databaseUrl });
   ensureBuild(root, distDir);
-  const server = await startServer({ root, distDir, databaseUrl, secret });
+  // as `npm start` runs it: one app process per core (OFF_LOOP_PROCESSES changes it; 0 is a plain next start)
+  const appProcesses = Number(process.env.OFF_LOOP_PROCESSES ?? availableParallelism());
+  const server = await startServer({ root, distDir, databaseUrl, secret, processes: appProcesses > 0 ? appProcesses : undefined });
   try {
     const api = new CookieClient(server.base);
     await api.signIn("designer@quillfen.example", "loop-demo-2026");
     // one layout per PDF run: a PDF made before comes from the server's cache and would measure nothing
-    const sites = await makeHeavyWorkSites(api, runs + 1);
+    const sites = await makeHeavyWorkSites(api, runs + 1 + 4);
     // warm-up: the first request of each kind loads code and (off the loop) starts a worker thread
     await requestSuggestions(api, sites.sheetSiteId);
     await requestSheetPdf(api, sites.sheetLayoutIds[runs]);
@@ -49,11 +84,37 @@ export async function measureOffLoop(root = process.cwd(), runs = Number(process
       if (p.value.status !== 200) throw new Error(`sheet PDF: ${p.value.status}`);
       pdf.push(p.health);
     }
-    return { idle, suggestion, pdf };
+    // a 500-detector layout: read during four PDFs and two suggestions at once, then its own sheet PDF, uncached
+    const big = await siteWithLayout(api, BIG_DETECTORS);
+    const heavy = await readWhile(api, `/api/layouts/${big.layoutId}`, () =>
+      Promise.all([...sites.sheetLayoutIds.slice(runs + 1, runs + 5).map((id) => requestSheetPdf(api, id)), requestSuggestions(api, sites.suggestSiteId), requestSuggestions(api, sites.suggestSiteId)]),
+    );
+    const failed = heavy.value.filter((r) => r.status !== 200).length;
+    if (failed) console.log(`(${failed} of the six heavy requests did not answer 200: ${heavy.value.map((r) => r.status).join(", ")})`);
+    const t = performance.now();
+    const bigPdf = await requestSheetPdf(api, big.layoutId);
+    const bigPdfMs = bigPdf.status === 200 ? performance.now() - t : NaN;
+    if (bigPdf.status !== 200) console.log(`500-detector sheet PDF answered ${bigPdf.status} after ${ms(performance.now() - t)}: ${new TextDecoder().decode(bigPdf.bytes).slice(0, 200)}`);
+    return { idle, suggestion, pdf, readsDuringHeavy: { latencies: heavy.latencies, workMs: heavy.workMs, statuses: heavy.statuses }, bigPdfMs, appProcesses };
   } finally {
     server.stop();
   }
 }
+
+async function siteWithLayout(api: CookieClient, detectors: number): Promise<{ layoutId: number }> {
+  const site = await api.request("/api/sites", { method: "POST", json: { name: `Bench site, ${detectors} detectors`, areas: [] } });
+  const imported = await api.request(`/api/sites/${site.json.id}/schedule/import`, { method: "POST", json: { mode: "confirm", csv: scheduleCsvOf(detectors), addUnknownPlaces: true } });
+  if (imported.status !== 200) throw new Error(`schedule import: ${imported.status} ${imported.text.slice(0, 300)}`);
+  const document = largeLayoutDocument((imported.json.detectors as { id: string }[]).map((d) => d.id));
+  const made = await api.request(`/api/sites/${site.json.id}/layouts`, { method: "POST", json: { name: `Bench layout, ${detectors} detectors`, document } });
+  if (made.status !== 200) throw new Error(`layout: ${made.status} ${made.text.slice(0, 300)}`);
+  return { layoutId: made.json.layout.id };
+}
+
+const p95 = (xs: number[]) => {
+  const s = [...xs].sort((a, b) => a - b);
+  return s.length ? s[Math.min(s.length - 1, Math.ceil(0.95 * s.length) - 1)] : NaN;
+};
 
 function line(label: string, ws: HealthWatch[]) {
   const worst = ws.reduce((a, b) => (b.longestMs > a.longestMs ? b : a));
@@ -67,4 +128,14 @@ export async function run(): Promise<void> {
   line("longest health wait, idle (2 s)", [figures.idle]);
   line(`longest health wait during a suggestion (${SUGGEST_DETECTORS} detectors, both ways)`, figures.suggestion);
   line(`longest health wait during a PDF (${SHEET_LOOPS}-loop terminal sheet)`, figures.pdf);
+  const h = figures.readsDuringHeavy;
+  if (h) {
+    const notOk = h.statuses.filter((x) => x !== 200).length;
+    console.log(`${BIG_DETECTORS}-detector layout reads during four ${SHEET_LOOPS}-loop sheet PDFs and two suggestions at once (${ms(h.workMs)}): ${h.latencies.length} reads, p95 ${ms(p95(h.latencies))}, longest ${ms(Math.max(...h.latencies))}, ${notOk} not 200`);
+    under("layout read during 4 sheet PDFs + 2 suggestions, p95", p95(h.latencies), 50, "ms", `${h.latencies.length} reads of a ${BIG_DETECTORS}-detector layout over ${(h.workMs / 1000).toFixed(1)} s; ${figures.appProcesses} app processes`);
+  }
+  if (figures.bigPdfMs !== undefined) {
+    console.log(`${BIG_DETECTORS}-detector terminal sheet PDF, uncached: ${ms(figures.bigPdfMs)}`);
+    under("500-detector terminal sheet PDF, uncached", figures.bigPdfMs / 1000, 2, "s", "one request, first of its revision");
+  }
 }

@@ -1,8 +1,10 @@
-// Runs every bench/*-bench.ts file's exported run(), in name order. `npm run bench`; `npm run bench -- loop` runs the files
+// Runs every bench/*-bench.ts file's exported run(), in name order, then the table of every
+// figure beside its target (bench/figures.ts). `npm run bench`; `npm run bench -- loop` runs the files
 // whose names contain "loop"; a filter naming one file exactly (`loop-bench` or `loop-bench.ts`) runs that file alone.
 import { readdirSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
+import { printTable } from "./figures";
 
 const here = dirname(fileURLToPath(import.meta.url));
 const filter = process.argv[2];
@@ -21,4 +23,5 @@ for (const f of files) {
   console.log(`\n== ${f} ==`);
   await mod.run();
 }
+printTable();
 process.exit(0);

@@ -27,4 +27,5 @@ if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib catalog models fon
 fi
 
 echo "Loopwright on http://localhost:3000 — demo sign-ins are in README.md; demo mail at http://127.0.0.1:$((SMTP_PORT + 1))/. Ctrl-C stops the app; npm run stop stops MariaDB, the mail sink and the fake S3 server."
-exec npx next start --hostname 127.0.0.1 --port 3000
+# one app process per core behind port 3000 (LOOPWRIGHT_APP_PROCESSES=N for another count; 1 is a plain next start)
+exec node scripts/cluster.mjs --hostname 127.0.0.1 --port 3000

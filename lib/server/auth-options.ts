@@ -11,6 +11,7 @@ import type { Role } from "@/lib/auth/permissions";
 import { signInSchema } from "@/lib/auth/sign-in-schema";
 import { UNCONFIRMED_EMAIL } from "@/lib/auth/sign-up-schema";
 import { safeCallbackUrl } from "@/lib/http/same-origin";
+import { decodeSessionToken, encodeSessionToken } from "./session-token";
 
 // Shown to the user as is (next-auth passes a thrown message through as the error).
 export const WRONG_CREDENTIALS = "That e-mail and password do not match an account.";
@@ -19,6 +20,8 @@ export function authOptions(): NextAuthOptions {
   return {
     secret: env().NEXTAUTH_SECRET,
     session: { strategy: "jwt", maxAge: 12 * 60 * 60 },
+    // next-auth's own token format, with the derived key kept rather than derived for every request
+    jwt: { encode: encodeSessionToken, decode: decodeSessionToken as NonNullable<NextAuthOptions["jwt"]>["decode"] },
     pages: { signIn: "/sign-in" },
     providers: [
       CredentialsProvider({

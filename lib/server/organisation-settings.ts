@@ -2,6 +2,7 @@ import "server-only";
 import { db } from "./db";
 import { audit } from "./audit";
 import { ApiError } from "./errors";
+import { forgetOrganisation } from "./actor-cache";
 import { settingsOf, type Actor } from "./session";
 import { Organisation } from "@/models";
 import type { OrganisationSettingsInput } from "@/lib/organisation/settings-schema";
@@ -27,6 +28,7 @@ export async function updateOrganisationSettings(actor: Actor, input: Organisati
     const changed = (Object.keys(input) as (keyof OrganisationSettingsInput)[]).filter((k) => before[k] !== input[k]);
     if (!changed.length) return before;
     await org.update(input, { transaction });
+    forgetOrganisation(org.id, transaction);
     for (const key of changed)
       await audit({ organisationId: org.id, userId: actor.userId, action: "organisation.setting", entityType: "organisation", entityId: org.id, detail: { setting: key, from: before[key], to: input[key] } }, transaction);
     return view(org);

@@ -6,6 +6,7 @@ import { bindModels } from "./db";
 import { Membership, Organisation, User } from "@/models";
 import { can, refusal, type Permission, type Role } from "@/lib/auth/permissions";
 import { ApiError } from "./errors";
+import { cachedActor, lookupTicket, rememberActor } from "./actor-cache";
 import type { OrganisationSettings } from "@/lib/organisation/settings-schema";
 
 export interface Actor {
@@ -26,14 +27,17 @@ export function settingsOf(org: Organisation): OrganisationSettings {
 }
 
 /**
- * The signed-in member, re-read from the database on every request so that a changed role
- * or a removed membership takes effect at once (the token only names the user and organisation).
- * The same query reads the user's session version: a token signed in before the version was raised
- * (sign-out, a new password, a role change) is refused. No cache, so no staleness window and no extra query.
+ * The signed-in member. The token only names the user and organisation and carries the session version from
+ * sign-in; the membership, role, settings and current session version come from the database, kept per process
+ * for a few seconds (lib/server/actor-cache.ts) and forgotten at once on sign-out, a new password, a role change
+ * or a settings change. A token signed in before the version was raised is refused.
  */
 export async function currentActor(): Promise<Actor | null> {
   const session = (await getServerSession(authOptions())) as { userId?: number; organisationId?: number; sessionVersion?: number } | null;
   if (!session?.userId || !session.organisationId || typeof session.sessionVersion !== "number") return null;
+  const cached = cachedActor(session.userId, session.organisationId, session.sessionVersion);
+  if (cached) return cached;
+  const ticket = lookupTicket();
   bindModels();
   const membership = await Membership.findOne({
     where: { userId: session.userId, organisationId: session.organisationId },
@@ -42,7 +46,9 @@ export async function currentActor(): Promise<Actor | null> {
   if (!membership) return null;
   const m = membership as Membership & { User: User; Organisation: Organisation };
   if (m.User.sessionVersion !== session.sessionVersion) return null;
-  return { userId: m.userId, organisationId: m.organisationId, organisationName: m.Organisation.name, role: m.role, name: m.User.name, email: m.User.email, settings: settingsOf(m.Organisation) };
+  const actor: Actor = { userId: m.userId, organisationId: m.organisationId, organisationName: m.Organisation.name, role: m.role, name: m.User.name, email: m.User.email, settings: settingsOf(m.Organisation) };
+  rememberActor(ticket, actor, m.User.sessionVersion);
+  return actor;
 }
 
 /** For API handlers and actions: 401 when signed out, 403 when the role lacks the permission. */

@@ -1,5 +1,5 @@
 import { execFileSync, spawn } from "node:child_process";
-import { existsSync } from "node:fs";
+import { existsSync, readdirSync, readFileSync } from "node:fs";
 import { createServer } from "node:net";
 import { join } from "node:path";
 
@@ -28,16 +28,57 @@ export interface RunningServer {
   base: string;
   log(): string;
   stop(): void;
+  /** CPU time (user + system) the server's processes have used so far, ms; NaN where /proc is not there. */
+  cpuMs(): number;
 }
 
-/** `next start` in its own process group on a free port; resolves once GET /api/health answers 200. */
-export async function startServer(opts: { root: string; distDir: string; databaseUrl: string; secret: string; env?: Record<string, string> }): Promise<RunningServer> {
+let ticksPerSecond: number | undefined;
+
+/** User + system CPU time of every live process in process group `pgid`, ms (Linux /proc; 10 ms resolution at 100 Hz). */
+export function processGroupCpuMs(pgid: number): number {
+  try {
+    ticksPerSecond ??= Number(execFileSync("getconf", ["CLK_TCK"]).toString().trim()) || 100;
+    let ticks = 0;
+    for (const d of readdirSync("/proc")) {
+      if (!/^\d+$/.test(d)) continue;
+      let stat: string;
+      try {
+        stat = readFileSync(`/proc/${d}/stat`, "utf8");
+      } catch {
+        continue; // ended meanwhile
+      }
+      // fields after the command name (which may hold spaces): state ppid pgrp ... utime(14) stime(15)
+      const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+      if (Number(f[2]) === pgid) ticks += Number(f[11]) + Number(f[12]);
+    }
+    return (ticks * 1000) / ticksPerSecond;
+  } catch {
+    return NaN;
+  }
+}
+
+/**
+ * `next start` in its own process group on a free port; resolves once GET /api/health answers 200. With
+ * `processes`, the production start's cluster launcher (scripts/cluster.mjs) with that many app processes instead.
+ */
+export async function startServer(opts: { root: string; distDir: string; databaseUrl: string; secret: string; env?: Record<string, string>; processes?: number }): Promise<RunningServer> {
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
   let log = "";
-  const child = spawn("npx", ["next", "start", "--hostname", "127.0.0.1", "--port", String(port)], {
+  const listen = ["--hostname", "127.0.0.1", "--port", String(port)];
+  const [cmd, args] = opts.processes ? [process.execPath, ["scripts/cluster.mjs", ...listen]] : ["npx", ["next", "start", ...listen]];
+  const child = spawn(cmd, args, {
     cwd: opts.root,
-    env: { ...process.env, DATABASE_URL: opts.databaseUrl, NEXTAUTH_URL: base, NEXTAUTH_SECRET: opts.secret, NEXT_DIST_DIR: opts.distDir, LOOPWRIGHT_DEV_OUTBOX: "0", ...opts.env },
+    env: {
+      ...process.env,
+      DATABASE_URL: opts.databaseUrl,
+      NEXTAUTH_URL: base,
+      NEXTAUTH_SECRET: opts.secret,
+      NEXT_DIST_DIR: opts.distDir,
+      LOOPWRIGHT_DEV_OUTBOX: "0",
+      ...(opts.processes ? { LOOPWRIGHT_APP_PROCESSES: String(opts.processes) } : {}),
+      ...opts.env,
+    },
     detached: true,
     stdio: ["ignore", "pipe", "pipe"],
   });
@@ -52,7 +93,7 @@ export async function startServer(opts: { root: string; distDir: string; databas
       }
   };
   for (let i = 0; i < 240; i++) {
-    if (await fetch(`${base}/api/health`).then((r) => r.status === 200, () => false)) return { base, log: () => log, stop };
+    if (await fetch(`${base}/api/health`).then((r) => r.status === 200, () => false)) return { base, log: () => log, stop, cpuMs: () => processGroupCpuMs(child.pid!) };
     if (child.exitCode !== null) break;
     await sleep(250);
   }
@@ -101,10 +142,29 @@ export class CookieClient {
     return { status: res.status, text, json };
   }
 
-  async signIn(email: string, password: string): Promise<void> {
+  /** This client presents the other's cookies from now on (another instance, the same session). */
+  adoptCookies(other: CookieClient): this {
+    this.cookies = new Map(other.cookies);
+    return this;
+  }
+
+  /** One sign-in attempt through next-auth's credentials endpoint: the error it names, or null when signed in. */
+  async attemptSignIn(email: string, password: string): Promise<{ status: number; error: string | null }> {
     const csrf = await this.request("/api/auth/csrf");
     const res = await this.request("/api/auth/callback/credentials", { method: "POST", form: { csrfToken: csrf.json.csrfToken, email, password, json: "true", callbackUrl: "/" } });
+    const url = typeof res.json?.url === "string" ? new URL(res.json.url, this.base) : null;
+    return { status: res.status, error: url?.searchParams.get("error") ?? (res.status === 200 ? null : res.text.slice(0, 200)) };
+  }
+
+  async signIn(email: string, password: string): Promise<void> {
+    const res = await this.attemptSignIn(email, password);
     const session = await this.request("/api/auth/session");
-    if (res.status !== 200 || !(session.json?.userId > 0)) throw new Error(`sign-in of ${email} failed: ${res.status} ${res.text.slice(0, 200)}`);
+    if (res.status !== 200 || res.error || !(session.json?.userId > 0)) throw new Error(`sign-in of ${email} failed: ${res.status} ${res.error ?? ""}`);
+  }
+
+  /** next-auth's sign-out (POST /api/auth/signout with its CSRF token). */
+  async signOut(): Promise<ClientResponse> {
+    const csrf = await this.request("/api/auth/csrf");
+    return this.request("/api/auth/signout", { method: "POST", form: { csrfToken: csrf.json.csrfToken, json: "true", callbackUrl: "/" } });
   }
 }
