@@ -28,4 +28,4 @@ fi
 
 echo "Loopwright on http://localhost:3000 — demo sign-ins are in README.md; demo mail at http://127.0.0.1:$((SMTP_PORT + 1))/. Ctrl-C stops the app; npm run stop stops MariaDB, the mail sink and the fake S3 server."
 # one app process per core behind port 3000 (LOOPWRIGHT_APP_PROCESSES=N for another count; 1 is a plain next start)
-exec node scripts/cluster.mjs --hostname 127.0.0.1 --port 3000
+exec node scripts/serve-every-core.mjs --hostname 127.0.0.1 --port 3000

@@ -5,7 +5,7 @@ import type { Actor } from "./session";
 // The session check's membership lookup, kept per process for a few seconds: most requests then cost a token
 // check and a Map read instead of a three-table query. Anything that ends sessions or changes what an Actor holds
 // forgets the entries it touches, in this process at once and after its transaction commits, and tells the other
-// app processes of the same server (scripts/cluster.mjs relays the message). Another machine's processes keep
+// app processes of the same server (scripts/serve-every-core.mjs relays the message). Another machine's processes keep
 // their copy until it expires: that is the window, LOOPWRIGHT_ACTOR_CACHE_MS (default 3,000 ms; 0 turns it off).
 
 interface Entry {

@@ -59,14 +59,14 @@ export function processGroupCpuMs(pgid: number): number {
 
 /**
  * `next start` in its own process group on a free port; resolves once GET /api/health answers 200. With
- * `processes`, the production start's cluster launcher (scripts/cluster.mjs) with that many app processes instead.
+ * `processes`, the production start's cluster launcher (scripts/serve-every-core.mjs) with that many app processes instead.
  */
 export async function startServer(opts: { root: string; distDir: string; databaseUrl: string; secret: string; env?: Record<string, string>; processes?: number }): Promise<RunningServer> {
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
   let log = "";
   const listen = ["--hostname", "127.0.0.1", "--port", String(port)];
-  const [cmd, args] = opts.processes ? [process.execPath, ["scripts/cluster.mjs", ...listen]] : ["npx", ["next", "start", ...listen]];
+  const [cmd, args] = opts.processes ? [process.execPath, ["scripts/serve-every-core.mjs", ...listen]] : ["npx", ["next", "start", ...listen]];
   const child = spawn(cmd, args, {
     cwd: opts.root,
     env: {

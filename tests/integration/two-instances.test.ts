@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { CookieClient, ensureBuild, startServer, type RunningServer } from "@/tests/api-registry/http-server";
 
 // Two production instances on two ports against one MariaDB, as behind a load balancer: instance A through the
-// production start's cluster launcher with two app processes (scripts/cluster.mjs), instance B a plain next start.
+// production start's cluster launcher with two app processes (scripts/serve-every-core.mjs), instance B a plain next start.
 // Nothing is shared between them but the database and the session secret.
 
 const DB_NAME = "loopwright_test_instances";

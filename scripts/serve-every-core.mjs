@@ -1,7 +1,7 @@
 // The production server on every core: Node's cluster module forks LOOPWRIGHT_APP_PROCESSES app processes
 // (default: one per core), each running Next's own `next start`; they share one listening port, and the
 // primary hands each new connection to one of them. Used by `npm start` (scripts/start.sh) and by the
-// two-instance test. Usage: node scripts/cluster.mjs --hostname 127.0.0.1 --port 3000
+// two-instance test. Usage: node scripts/serve-every-core.mjs --hostname 127.0.0.1 --port 3000
 //
 // An app process that dies after it was serving is started again (at most once a second); one that dies in its first
 // STARTUP_MS (a bad setting, a missing build: Next listens before it loads the build, so listening proves nothing)
