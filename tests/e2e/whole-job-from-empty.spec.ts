@@ -199,21 +199,26 @@ test("a new firm does a whole job from an empty database: sign-up, members, site
       await d.getByTestId("suggestion-single").getByRole("button", { name: "Accept as a new layout" }).click();
       await expect(d).toHaveURL(new RegExp(`/sites/${siteId}/layouts/\\d+$`), { timeout: 30_000 });
       layoutId = Number(/\/layouts\/(\d+)$/.exec(d.url())![1]);
-      const layout = (await (await d.request.get(`/api/layouts/${layoutId}`)).json()) as { layout: { name: string } };
       // every detector of the schedule has its input
       await d.goto(`/sites/${siteId}/layouts`);
+      await expect(d.getByTestId(`layout-card-${layoutId}`)).toContainText("Suggested: one detector per input");
       await expect(d.getByTestId(`layout-card-${layoutId}`)).toContainText("5 detectors placed, 0 unplaced");
 
       await d.goto(`/sites/${siteId}/layouts/${layoutId}/review`);
       await expect(d.getByTestId("review-state")).toHaveAttribute("data-state", "draft");
       await d.getByTestId("action-submit").getByRole("button", { name: "Send for review" }).click();
-      await expect(d.getByTestId("review-message")).toContainText("is now");
+      await expect(d.getByTestId("review-message")).toContainText("is now in review", { timeout: 30_000 }); // the schedule and catalog are frozen with it
       await expect(d.getByTestId("review-state")).toHaveAttribute("data-state", "in-review");
       const approve = d.getByTestId("action-approve");
       await expect(approve).toHaveAttribute("data-allowed", "false");
       await expect(approve.getByRole("button", { name: "Approve" })).toBeDisabled();
       await expect(approve).toContainText("cannot approve");
-      expect(layout.layout.name).toBe("Suggested: one detector per input");
+      // the button is disabled, so the server's own refusal is checked through the API
+      const asked = await d.request.post(`/api/layouts/${layoutId}/review`, { data: { action: "approve" } });
+      expect(asked.status()).toBe(403);
+      expect((await asked.json()).error).toMatch(/only engineer members can/);
+      await d.reload();
+      await expect(d.getByTestId("review-state")).toHaveAttribute("data-state", "in-review");
     });
 
     await test.step("the engineer approves", async () => {
@@ -221,7 +226,7 @@ test("a new firm does a whole job from an empty database: sign-up, members, site
       await e.goto(`/sites/${siteId}/layouts/${layoutId}/review`);
       await expect(e.getByTestId("review-state")).toHaveAttribute("data-state", "in-review");
       await e.getByTestId("action-approve").getByRole("button", { name: "Approve" }).click();
-      await expect(e.getByTestId("review-message")).toContainText("is now approved");
+      await expect(e.getByTestId("review-message")).toContainText("is now approved", { timeout: 30_000 });
       await expect(e.getByTestId("review-state")).toHaveAttribute("data-state", "approved");
       await expect(e.getByTestId("decision-log")).toContainText(`approved by ${people.engineer.name}`);
       await expect(e.getByTestId("solo-approval")).toHaveCount(0); // a second pair of eyes: no "without a second review"
