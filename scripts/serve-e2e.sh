@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # Started by Playwright: a fresh e2e database with demo data, a fake SMTP server, and the built app on
 # E2E_PORT (default 3100; the SMTP sink listens 1000 above it and its mail page 1001 above, the fake S3 server 1500 above).
+# With E2E_EMPTY=1 the database is migrated but gets no demo data (tests/e2e/support-empty-server.ts starts it so).
 set -euo pipefail
 source "$(dirname "$0")/env.sh"
 cd "$ROOT"
@@ -27,10 +28,11 @@ export DATABASE_URL="$(db_url "loopwright_e2e_$PORT")"
 export NEXTAUTH_URL="http://localhost:$PORT"
 export NEXTAUTH_SECRET="$(cat "$DATA_DIR/session-secret")"
 export SMTP_PORT="$SMTP"
-# a second organisation, for the cross-organisation checks of tests/e2e/api-*.spec.ts
-export LOOPWRIGHT_SEED_RIVAL=1
 npx tsx scripts/migrate.ts
-npx tsx scripts/seed.ts
+if [ "${E2E_EMPTY:-}" != 1 ]; then
+  # a second organisation, for the cross-organisation checks of tests/e2e/api-*.spec.ts
+  LOOPWRIGHT_SEED_RIVAL=1 npx tsx scripts/seed.ts
+fi
 bash scripts/mail-sink.sh stop "$SMTP"
 bash scripts/mail-sink.sh start "$SMTP" "$DATABASE_URL"
 export_s3_env "$S3"

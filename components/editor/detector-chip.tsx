@@ -8,6 +8,8 @@ import { FindingMarker } from "@/components/editor/finding-marker";
 import { voltsText } from "@/lib/solver/supply-lines";
 import { isLifeSafety } from "@/lib/catalog/life-safety";
 import { unassign } from "@/lib/layout/operations";
+import { useFormat } from "@/components/format/format-provider";
+import { lengthCell } from "@/lib/format/length-input";
 
 /** What a chip shows; also drawn in the drag overlay. On a chip the label is the control (`labelProps`), so its
  * name is what it shows; the zone, the fire badge and the figures sit beside it. */
@@ -17,6 +19,7 @@ export function ChipFace({ detectorId, labelProps }: { detectorId: string; label
   const c = d ? ix.detectors.get(d.catalogId) : undefined;
   const zone = zones.get(detectorId);
   const v = result.detectors.find((x) => x.detectorId === detectorId);
+  const { units } = useFormat().settings;
   return (
     <span className="flex min-w-0 flex-col text-left">
       <span className="flex items-start gap-1 font-medium leading-tight">
@@ -31,9 +34,9 @@ export function ChipFace({ detectorId, labelProps }: { detectorId: string; label
         {c && isLifeSafety(c) ? <span className="mt-px shrink-0 rounded bg-fault px-1 text-[10px] font-semibold text-white">FIRE</span> : null}
       </span>
       {/* the cable length never gives way to a long type name: the name is cut, the length stays */}
-      <span className="flex min-w-0 gap-1 text-[11px] text-slate-500" title={`${c?.name ?? "detector type not in the catalog"}${d ? ` · ${d.cableM} m` : ""}`}>
+      <span className="flex min-w-0 gap-1 text-[11px] text-slate-500" title={`${c?.name ?? "detector type not in the catalog"}${d ? ` · ${lengthCell(d.cableM, units)}` : ""}`}>
         <span className="truncate">{c?.name ?? "detector type not in the catalog"}</span>
-        {d ? <span className="shrink-0 tabular-nums" data-testid={`cable-${detectorId}`}>· {d.cableM} m</span> : null}
+        {d ? <span className="shrink-0 tabular-nums" data-testid={`cable-${detectorId}`}>· {lengthCell(d.cableM, units)}</span> : null}
       </span>
       {v ? (
         <span className={`text-[11px] ${v.ok ? "text-slate-500" : "font-semibold text-fault"}`} data-testid={`volts-${detectorId}`}>

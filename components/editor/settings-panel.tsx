@@ -7,6 +7,8 @@ import { addBoard } from "@/lib/layout/operations";
 import type { BoardKind, LayoutPower } from "@/lib/layout/schema";
 import { CUSTOM_PROFILE_ID, safetyFactors, standbyProfile, standbyProfiles } from "@/lib/solver";
 import { plural } from "@/lib/vocabulary/plural";
+import { useFormat } from "@/components/format/format-provider";
+import { fieldToMetres, lengthCell, lengthUnit, metresToTyped, typedToMetres } from "@/lib/format/length-input";
 
 /** Hardware choices that are not drag and drop: the panel, adding boards, power and bus settings. */
 export function SettingsPanel() {
@@ -22,6 +24,8 @@ export function SettingsPanel() {
     : [];
   const [choice, setChoice] = useState(choices[0] ? `${choices[0].kind}:${choices[0].id}` : "");
   const [busRun, setBusRun] = useState("");
+  // bus cable typed in the organisation's unit, kept in metres in the layout
+  const { units } = useFormat().settings;
   const setPower = (patch: Partial<LayoutPower>) => {
     const power = { ...doc.power, ...patch };
     apply({ ok: true, layout: { ...doc, power }, message: `Power settings: ${standbyProfile(power.standbyProfileId)?.label ?? power.standbyProfileId}, safety factor ${power.safetyFactor.toFixed(2)}` });
@@ -62,7 +66,7 @@ export function SettingsPanel() {
               onClick={() => {
                 if (!selectedChoice) return;
                 // a bus device asks for its run of bus cable; addBoard refuses a blank or 0 m with a plain message
-                const edit = addBoard(doc, ctx, selectedChoice.kind, selectedChoice.id, undefined, selectedChoice.onBus ? Number(busRun || "0") : undefined);
+                const edit = addBoard(doc, ctx, selectedChoice.kind, selectedChoice.id, undefined, selectedChoice.onBus ? typedToMetres(Number(busRun || "0"), units) : undefined);
                 apply(edit);
                 if (edit.ok) setBusRun("");
               }}
@@ -72,9 +76,9 @@ export function SettingsPanel() {
           </div>
           {selectedChoice?.onBus ? (
             <label className="mt-1 block">
-              Data bus cable to it (m)
+              Data bus cable to it ({lengthUnit(units)})
               <input type="number" min={0} step="any" inputMode="decimal" required className="mt-1 block w-full rounded border border-line px-2 py-1" value={busRun} onChange={(e) => setBusRun(e.target.value)} data-testid="add-board-bus-run" />
-              <span className="text-slate-600">Added to the data bus total ({doc.busCableM} m now).</span>
+              <span className="text-slate-600">Added to the data bus total ({lengthCell(doc.busCableM, units)} now).</span>
             </label>
           ) : null}
         </div>
@@ -127,18 +131,18 @@ export function SettingsPanel() {
         {!safetyFactors.some((f) => f.value === doc.power.safetyFactor) ? <p className="mt-1">Custom factor in this layout: {doc.power.safetyFactor}</p> : null}
       </fieldset>
       <label className="mt-3 block">
-        <span className="font-medium">Data bus cable, total length (m)</span>
+        <span className="font-medium">Data bus cable, total length ({lengthUnit(units)})</span>
         <input
           key={doc.busCableM}
           type="number"
           min={0}
           step="any"
           className="mt-1 block w-full rounded border border-line px-2 py-1"
-          defaultValue={doc.busCableM}
+          defaultValue={metresToTyped(doc.busCableM, units)}
           disabled={!canWrite}
           onBlur={(e) => {
-            const v = Number(e.currentTarget.value);
-            if (Number.isFinite(v) && v >= 0 && v !== doc.busCableM) apply({ ok: true, layout: { ...doc, busCableM: v }, message: `Data bus cable set to ${v} m` });
+            const v = fieldToMetres(e.currentTarget.value, units, doc.busCableM);
+            if (typeof v === "number" && v >= 0 && v !== doc.busCableM) apply({ ok: true, layout: { ...doc, busCableM: v }, message: `Data bus cable set to ${lengthCell(v, units)}` });
           }}
         />
       </label>

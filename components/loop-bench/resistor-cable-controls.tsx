@@ -6,6 +6,8 @@ import { AWG_CHOICES, gaugeIn, MM2_CHOICES, withSharedOhms } from "./bench-actio
 import { NumberField, Section, SelectField } from "./controls";
 import { ResistorField } from "./resistor-field";
 import type { Bench } from "./use-bench";
+import { useFormat } from "@/components/format/format-provider";
+import { lengthCell, lengthUnit, metresToTyped, typedToMetres } from "@/lib/format/length-input";
 
 /** The fitted resistor values and the parts' tolerance. */
 export function ResistorControls({ bench }: { bench: Bench }) {
@@ -43,6 +45,8 @@ export function ResistorControls({ bench }: { bench: Bench }) {
 /** The cable: conductor size in either unit, length (slider and field) and the temperature range. */
 export function CableControls({ bench }: { bench: Bench }) {
   const { s, update, perKm } = bench;
+  // typed and shown in the organisation's unit; the bench computes in metres
+  const { units } = useFormat().settings;
   return (
     <Section title="Cable">
       <div className="grid grid-cols-[7rem_1fr] items-end gap-2">
@@ -72,7 +76,7 @@ export function CableControls({ bench }: { bench: Bench }) {
       <p className="-mt-2 text-xs text-slate-500">{Number.isFinite(perKm) ? `${formatOhms(perKm)} per km of one conductor at 20 °C (copper)` : ""}</p>
       <div>
         <label htmlFor="bench-length-slider" className="text-sm font-medium">
-          Cable length (one way): <span className="tabular-nums">{s.lengthM} m</span>
+          Cable length (one way): <span className="tabular-nums">{lengthCell(s.lengthM, units)}</span>
         </label>
         <input
           id="bench-length-slider"
@@ -83,14 +87,14 @@ export function CableControls({ bench }: { bench: Bench }) {
           value={Math.min(Math.max(s.lengthM, 0), MAX_LENGTH_M)}
           onChange={(e) => update({ lengthM: e.target.valueAsNumber })}
           className="mt-2 w-full accent-[var(--color-signal)]"
-          aria-valuetext={`${s.lengthM} metres`}
+          aria-valuetext={units === "imperial" ? `${metresToTyped(s.lengthM, units)} feet` : `${s.lengthM} metres`}
         />
         <div className="flex justify-between text-xs text-slate-500">
-          <span>0 m</span>
-          <span>{MAX_LENGTH_M} m</span>
+          <span>0 {lengthUnit(units)}</span>
+          <span>{lengthCell(MAX_LENGTH_M, units)}</span>
         </div>
       </div>
-      <NumberField label="Cable length (one way)" unit="m" value={s.lengthM} min={0} step={1} onChange={(lengthM) => update({ lengthM })} testId="cable-length" />
+      <NumberField label="Cable length (one way)" unit={lengthUnit(units)} value={metresToTyped(s.lengthM, units)} min={0} step={1} onChange={(v) => update({ lengthM: typedToMetres(v, units) })} testId="cable-length" />
       <div className="grid grid-cols-2 gap-2">
         <NumberField label="Coldest" unit="°C" value={s.tempMinC} onChange={(tempMinC) => update({ tempMinC })} />
         <NumberField label="Hottest" unit="°C" value={s.tempMaxC} onChange={(tempMaxC) => update({ tempMaxC })} />

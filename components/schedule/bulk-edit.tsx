@@ -5,10 +5,13 @@ import { supervisionPreferenceSchema, type BulkEditPatch } from "@/lib/schedule/
 import { Button } from "@/components/ui/button";
 import { bulkPatch } from "@/components/schedule/schedule-rows";
 import { supervisionLabels, type SiteArea } from "@/components/schedule/schedule-labels";
+import { useFormat } from "@/components/format/format-provider";
+import { lengthUnit } from "@/lib/format/length-input";
 
 /** Set fields of every selected detector at once, or delete them. */
 export function BulkEdit({ count, areas, onApply, onDelete, onClear }: { count: number; areas: SiteArea[]; onApply: (patch: BulkEditPatch["patch"]) => void; onDelete: () => void; onClear: () => void }) {
   const [error, setError] = useState<string | null>(null);
+  const { units } = useFormat().settings;
   return (
     <form
       aria-label="Bulk edit"
@@ -18,7 +21,7 @@ export function BulkEdit({ count, areas, onApply, onDelete, onClear }: { count: 
         e.preventDefault();
         const f = new FormData(e.currentTarget);
         const field = (name: string) => String(f.get(name) ?? "");
-        const r = bulkPatch({ area: field("area"), cableM: field("cableM"), gauge: field("gauge"), supervision: field("supervision") });
+        const r = bulkPatch({ area: field("area"), cableM: field("cableM"), gauge: field("gauge"), supervision: field("supervision") }, units);
         if ("error" in r) return setError(r.error);
         setError(null);
         onApply(r.patch);
@@ -37,7 +40,7 @@ export function BulkEdit({ count, areas, onApply, onDelete, onClear }: { count: 
         </datalist>
       </label>
       <label>
-        Cable run (m)
+        Cable run ({lengthUnit(units)})
         <input name="cableM" type="number" step="any" min={0} className="mt-1 block w-24 rounded border border-line bg-white px-2 py-1" />
       </label>
       <label>

@@ -13,6 +13,8 @@ import { Button } from "@/components/ui/button";
 import { LongText } from "@/components/ui/long-text";
 import { siteAreasOf, supervisionLabels, type DetectorType } from "@/components/schedule/schedule-labels";
 import { plural } from "@/lib/vocabulary/plural";
+import { useFormat } from "@/components/format/format-provider";
+import { lengthCell } from "@/lib/format/length-input";
 
 /** Upload a CSV file, see every row and every problem with its row number, and only then store it. */
 export function CsvImport({ siteId, types, onImported }: { siteId: number; types: DetectorType[]; onImported: (count: number) => void }) {
@@ -22,6 +24,7 @@ export function CsvImport({ siteId, types, onImported }: { siteId: number; types
   const [busy, setBusy] = useState(false);
   const [addPlaces, setAddPlaces] = useState(false);
   const places = useSiteAreas();
+  const { units } = useFormat().settings;
   const typeName = new Map(types.map((t) => [t.id, t.name]));
 
   async function choose(f: File | undefined) {
@@ -128,7 +131,7 @@ export function CsvImport({ siteId, types, onImported }: { siteId: number; types
                     <td className="max-w-[10rem] pr-2">
                       <LongText text={r.detector.room} />
                     </td>
-                    <td className="pr-2 text-right">{r.detector.cableM} m</td>
+                    <td className="pr-2 text-right">{lengthCell(r.detector.cableM, units)}</td>
                     <td className="pr-2">{formatGauge(r.detector.gauge)}</td>
                     <td>{supervisionLabels[r.detector.supervision]}</td>
                   </tr>

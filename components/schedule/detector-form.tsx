@@ -5,6 +5,8 @@ import { createDetectorFormSchema, formatGauge, parseGauge, supervisionPreferenc
 import { Button } from "@/components/ui/button";
 import { supervisionLabels, type DetectorType, type SiteArea } from "@/components/schedule/schedule-labels";
 import { PlacePicker } from "@/components/schedule/place-picker";
+import { useFormat } from "@/components/format/format-provider";
+import { fieldToMetres, lengthUnit, metresToTyped } from "@/lib/format/length-input";
 
 type Values = Omit<ScheduleDetector, "id">;
 
@@ -19,6 +21,8 @@ export function DetectorForm({ types, areas, initial, submitLabel, onSubmit, onC
   // a new key after a successful add resets the area and room pickers
   const [resetKey, setResetKey] = useState(0);
   const formId = initial ? "edit-detector" : "add-detector";
+  // the cable run is typed in the organisation's unit and sent in metres
+  const { units } = useFormat().settings;
 
   async function submit(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
@@ -29,7 +33,7 @@ export function DetectorForm({ types, areas, initial, submitLabel, onSubmit, onC
       catalogId: f.get("catalogId"),
       area: f.get("area"),
       room: f.get("room"),
-      cableM: f.get("cableM"),
+      cableM: fieldToMetres(String(f.get("cableM") ?? ""), units, initial?.cableM),
       gauge: gauge ?? undefined,
       supervision: f.get("supervision"),
     });
@@ -85,8 +89,8 @@ export function DetectorForm({ types, areas, initial, submitLabel, onSubmit, onC
       </label>
       <PlacePicker key={resetKey} formId={formId} fallbackAreas={areas} initialArea={start.area} initialRoom={start.room} />
       <label className="text-sm">
-        <span className="font-medium">Cable run (m)</span>
-        <input name="cableM" type="number" step="any" min={0} defaultValue={start.cableM || ""} className={`${field} ${errors.cableM ? "border-fault" : "border-line"}`} aria-invalid={!!errors.cableM} />
+        <span className="font-medium">Cable run ({lengthUnit(units)})</span>
+        <input name="cableM" type="number" step="any" min={0} defaultValue={start.cableM ? metresToTyped(start.cableM, units) : ""} className={`${field} ${errors.cableM ? "border-fault" : "border-line"}`} aria-invalid={!!errors.cableM} />
         {err("cableM")}
       </label>
       <label className="text-sm">

@@ -1,4 +1,6 @@
 import { parseGauge, type BulkEditPatch, type ScheduleDetector, type SupervisionPreference } from "@/lib/schedule/schema";
+import { lengthUnit, metresToTyped, typedToMetres } from "@/lib/format/length-input";
+import type { UnitSystem } from "@/lib/organisation/settings-schema";
 
 // Pure helpers of the device schedule table: which rows show in which order, and the bulk edit's patch.
 
@@ -53,7 +55,8 @@ export function scheduleRows(detectors: ScheduleDetector[], query: RowQuery, typ
 export const nextSort = (s: ScheduleSort, key: SortKey): ScheduleSort => ({ key, dir: s?.key === key ? (s.dir === 1 ? -1 : 1) : 1 });
 
 /** The bulk edit's fields as a patch; blank fields stay as they are. */
-export function bulkPatch(fields: { area: string; cableM: string; gauge: string; supervision: string }): { patch: BulkEditPatch["patch"] } | { error: string } {
+/** `units`: the organisation's, in which the cable run is typed (stored in metres). */
+export function bulkPatch(fields: { area: string; cableM: string; gauge: string; supervision: string }, units: UnitSystem = "metric"): { patch: BulkEditPatch["patch"] } | { error: string } {
   const patch: BulkEditPatch["patch"] = {};
   const area = fields.area.trim();
   const cable = fields.cableM.trim();
@@ -61,8 +64,9 @@ export function bulkPatch(fields: { area: string; cableM: string; gauge: string;
   if (area) patch.area = area;
   if (cable) {
     const n = Number(cable);
-    if (!(n > 0 && n <= 2000)) return { error: "the cable run must be more than 0 m and at most 2000 m" };
-    patch.cableM = n;
+    const m = Number.isFinite(n) ? typedToMetres(n, units) : NaN;
+    if (!(m > 0 && m <= 2000)) return { error: `the cable run must be more than 0 ${lengthUnit(units)} and at most ${metresToTyped(2000, units)} ${lengthUnit(units)}` };
+    patch.cableM = m;
   }
   if (gauge) {
     const g = parseGauge(gauge);

@@ -5,6 +5,8 @@ import { DetectorForm } from "@/components/schedule/detector-form";
 import { LongText } from "@/components/ui/long-text";
 import { nextSort, SCHEDULE_COLUMNS, type ScheduleSort } from "@/components/schedule/schedule-rows";
 import { supervisionLabels, type DetectorType, type SiteArea } from "@/components/schedule/schedule-labels";
+import { useFormat } from "@/components/format/format-provider";
+import { lengthCell, lengthUnit } from "@/lib/format/length-input";
 
 export interface ScheduleTableProps {
   rows: ScheduleDetector[];
@@ -32,6 +34,7 @@ export function ScheduleTable(props: ScheduleTableProps) {
   const allVisibleSelected = visibleIds.length > 0 && visibleIds.every((id) => selected.has(id));
   const toggle = (id: string) => onSelect(selected.has(id) ? new Set([...selected].filter((x) => x !== id)) : new Set([...selected, id]));
   const span = SCHEDULE_COLUMNS.length + 2;
+  const { units } = useFormat().settings;
 
   return (
     <div className="relative overflow-x-auto rounded-lg border border-line bg-white">
@@ -52,7 +55,7 @@ export function ScheduleTable(props: ScheduleTableProps) {
             {SCHEDULE_COLUMNS.map((c) => (
               <th key={c.key} aria-sort={sort?.key === c.key ? (sort.dir === 1 ? "ascending" : "descending") : "none"} className={`px-2 py-2 ${c.numeric ? "text-right" : ""}`}>
                 <button type="button" className="font-medium hover:text-ink" onClick={() => onSort(nextSort(sort, c.key))}>
-                  {c.label}
+                  {c.key === "cableM" ? `Cable (${lengthUnit(units)})` : c.label}
                   <span aria-hidden className="ml-1 text-xs">
                     {sort?.key === c.key ? (sort.dir === 1 ? "▲" : "▼") : ""}
                   </span>
@@ -101,7 +104,7 @@ export function ScheduleTable(props: ScheduleTableProps) {
                 <td className="max-w-[12rem] px-2 py-1.5">
                   <LongText text={d.room} />
                 </td>
-                <td className="px-2 py-1.5 text-right tabular-nums">{d.cableM} m</td>
+                <td className="px-2 py-1.5 text-right tabular-nums">{lengthCell(d.cableM, units)}</td>
                 <td className="px-2 py-1.5">{formatGauge(d.gauge)}</td>
                 <td className="px-2 py-1.5">{supervisionLabels[d.supervision]}</td>
                 {canWrite ? (

@@ -5,7 +5,7 @@ import { audit } from "./audit";
 import { ApiError, notFound } from "./errors";
 import { findSite, loadStructure } from "./sites";
 import { addPlaces } from "./site-structure";
-import { describePlace, matchPlace, unknownPlaces, type KnownArea, type UnknownPlace } from "@/lib/sites/places";
+import { checkPlace, describePlace, matchPlace, unknownPlaces, type KnownArea, type UnknownPlace } from "@/lib/sites/places";
 import { effectiveCatalogFor } from "./catalogs";
 import type { Actor } from "./session";
 import { Layout, LayoutReview, LayoutRevision, ScheduleDetectorRecord } from "@/models";
@@ -58,6 +58,17 @@ function checkCatalogIds(catalog: Catalog, ids: { path: string; catalogId: strin
   if (issues.length) throw new ApiError(422, "Some fields are not valid.", issues);
 }
 
+/**
+ * A detector's area and room must be places of the site's structure (a CSV import offers to add unknown ones; one
+ * detector is refused with 422 naming the field). Gives the names in the site's own spelling.
+ */
+async function placeInStructure(siteId: number, area: string, room: string, transaction: Transaction, pathPrefix = ""): Promise<{ area: string; room: string }> {
+  const floors = await loadStructure(siteId, transaction);
+  const r = checkPlace(floors.flatMap((f) => f.areas), area, room);
+  if (!r.ok) throw new ApiError(422, `${r.issue.message} Nothing was saved.`, [{ path: `${pathPrefix}${r.issue.path}`, message: r.issue.message }]);
+  return { area: r.area, room: r.room };
+}
+
 async function nextPosition(siteId: number, transaction: Transaction): Promise<number> {
   const max = (await ScheduleDetectorRecord.max("position", { where: { siteId }, transaction })) as number | null;
   return max == null ? 0 : max + 1;
@@ -68,8 +79,9 @@ export async function createDetector(actor: Actor, siteId: number, input: Create
   await findSite(actor, siteId);
   checkCatalogIds(await catalogFor(actor.organisationId), [{ path: "catalogId", catalogId: input.catalogId }]);
   const rec = await db().transaction(async (transaction) => {
+    const place = await placeInStructure(siteId, input.area, input.room, transaction);
     const position = await nextPosition(siteId, transaction);
-    const r = await ScheduleDetectorRecord.create({ siteId, position, ...rowColumns(input) } as ScheduleDetectorRecord, { transaction });
+    const r = await ScheduleDetectorRecord.create({ siteId, position, ...rowColumns({ ...input, ...place }) } as ScheduleDetectorRecord, { transaction });
     await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "schedule.create", entityType: "schedule_detector", entityId: r.id, detail: { siteId, label: input.label, catalogId: input.catalogId } }, transaction);
     return r;
   });
@@ -83,7 +95,11 @@ export async function updateDetector(actor: Actor, siteId: number, detectorId: n
   const rec = await db().transaction(async (transaction) => {
     const r = await ScheduleDetectorRecord.findOne({ where: { id: detectorId, siteId }, transaction, lock: transaction.LOCK.UPDATE });
     if (!r) throw notFound("That detector");
-    await r.update(rowColumns(patch), { transaction });
+    // checked when the place changes: a room alone in the detector's own area, an area alone with its own room; an
+    // edit that keeps the place (a cable length) is never refused for a place the structure lost meanwhile
+    const [area, room] = [patch.area ?? r.area, patch.room ?? r.room];
+    const place = area !== r.area || room !== r.room ? await placeInStructure(siteId, area, room, transaction) : {};
+    await r.update(rowColumns({ ...patch, ...place }), { transaction });
     await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "schedule.update", entityType: "schedule_detector", entityId: r.id, detail: { siteId, patch } }, transaction);
     return r;
   });
@@ -98,6 +114,26 @@ function rowIds(ids: string[]): number[] {
   return [...new Set(out)];
 }
 
+/**
+ * A bulk patch that sets an area or a room is checked for every selected row (an area alone keeps each row's room);
+ * refused whole when any row would name a place the site lacks, with the rows named. Gives the site's spelling.
+ */
+async function bulkPlace(siteId: number, rows: ScheduleDetectorRecord[], patch: BulkEditPatch["patch"], transaction: Transaction): Promise<{ area?: string; room?: string }> {
+  const areas = (await loadStructure(siteId, transaction)).flatMap((f) => f.areas);
+  const refused = new Map<string, { path: string; message: string; labels: string[] }>();
+  let place: { area: string; room: string } | null = null;
+  for (const r of rows) {
+    const c = checkPlace(areas, patch.area ?? r.area, patch.room ?? r.room);
+    if (c.ok) place ??= c;
+    else refused.set(c.issue.message, { path: `patch.${c.issue.path}`, message: c.issue.message, labels: [...(refused.get(c.issue.message)?.labels ?? []), r.label] });
+  }
+  if (refused.size) {
+    const issues = [...refused.values()].map((x) => ({ path: x.path, message: `${x.message} (${x.labels.join(", ")})` }));
+    throw new ApiError(422, `${issues.map((i) => i.message).join(" ")} Nothing was changed.`, issues);
+  }
+  return { ...(patch.area !== undefined && place ? { area: place.area } : {}), ...(patch.room !== undefined && place ? { room: place.room } : {}) };
+}
+
 /** One patch applied to many rows in one transaction; refused whole when any id is not in this site's schedule. */
 export async function bulkEditDetectors(actor: Actor, siteId: number, edit: BulkEditPatch): Promise<{ updated: number }> {
   ensureCan(actor, "schedule:write");
@@ -105,9 +141,10 @@ export async function bulkEditDetectors(actor: Actor, siteId: number, edit: Bulk
   if (edit.patch.catalogId) checkCatalogIds(await catalogFor(actor.organisationId), [{ path: "patch.catalogId", catalogId: edit.patch.catalogId }]);
   const ids = rowIds(edit.ids);
   return db().transaction(async (transaction) => {
-    const found = await ScheduleDetectorRecord.count({ where: { id: { [Op.in]: ids }, siteId }, transaction });
-    if (found !== ids.length) throw new ApiError(404, `${ids.length - found} of the selected detectors are not in this schedule; nothing was changed.`);
-    await ScheduleDetectorRecord.update(rowColumns(edit.patch), { where: { id: { [Op.in]: ids }, siteId }, transaction });
+    const rows = await ScheduleDetectorRecord.findAll({ where: { id: { [Op.in]: ids }, siteId }, attributes: ["id", "label", "area", "room"], transaction });
+    if (rows.length !== ids.length) throw new ApiError(404, `${ids.length - rows.length} of the selected detectors are not in this schedule; nothing was changed.`);
+    const patch = edit.patch.area !== undefined || edit.patch.room !== undefined ? { ...edit.patch, ...(await bulkPlace(siteId, rows, edit.patch, transaction)) } : edit.patch;
+    await ScheduleDetectorRecord.update(rowColumns(patch), { where: { id: { [Op.in]: ids }, siteId }, transaction });
     await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "schedule.bulk-update", entityType: "site", entityId: siteId, detail: { ids, patch: edit.patch } }, transaction);
     return { updated: ids.length };
   });

@@ -53,3 +53,23 @@ export function unknownPlaces(areas: readonly KnownArea[], rows: readonly { row:
 export function describePlace(u: { area: string; room: string | null }): string {
   return u.room === null ? `area ${u.area}` : `room ${u.room} in ${u.area}`;
 }
+
+export interface PlaceIssue {
+  path: "area" | "room";
+  message: string;
+}
+
+/**
+ * A single detector's area and room checked against the site's structure: the names in the site's own spelling,
+ * or what is wrong, keyed by the field. No area and no room is allowed (not placed yet); a room needs its area.
+ */
+export function checkPlace(areas: readonly KnownArea[], area: string, room: string): { ok: true; area: string; room: string } | { ok: false; issue: PlaceIssue } {
+  if (area.trim() === "") {
+    return room.trim() === "" ? { ok: true, area: "", room: "" } : { ok: false, issue: { path: "room", message: `Room: “${room}” needs its area; pick the area first.` } };
+  }
+  const m = matchPlace(areas, area, room);
+  if (!m.unknown) return { ok: true, area: m.area, room: m.room };
+  if (m.unknown.room === null || !areas.some((a) => placeKey(a.name) === placeKey(m.area)))
+    return { ok: false, issue: { path: "area", message: `Area: “${area}” is not an area of this site. Pick one of the site's areas, or add it to the site's structure first.` } };
+  return { ok: false, issue: { path: "room", message: `Room: “${room}” is not a room of ${m.area}. Pick one of its rooms, or add it to the site's structure first.` } };
+}

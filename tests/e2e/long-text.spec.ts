@@ -10,7 +10,7 @@ const LABEL_MAX = 200; // lib/schedule/schema.ts TEXT_LIMITS
 const ROOM_MAX = 120;
 
 test("long labels are refused over the limit, stated in the form, and never widen the page", async ({ page }) => {
-  const made = await page.request.post("/api/sites", { data: { name: `Long text ${Date.now()}`, address: "1 Wide Street", areas: [{ name: "Hall", rooms: ["Lobby"] }] } });
+  const made = await page.request.post("/api/sites", { data: { name: `Long text ${Date.now()}`, address: "1 Wide Street", areas: [{ name: "Hall", rooms: ["Lobby", "R".repeat(ROOM_MAX)] }] } }); // a detector's room must be one of the site's
   expect(made.status()).toBe(200);
   const siteId = ((await made.json()) as { id: number }).id;
   const detector = { catalogId: "contact-door-surface", area: "Hall", room: "Lobby", cableM: 10, gauge: { awg: 22 }, supervision: "single-eol" };

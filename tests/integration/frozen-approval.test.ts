@@ -104,7 +104,7 @@ describe("the approved design is frozen", () => {
     expect(refused.message).toContain("Hall motion is on the approved layout “Option A” (revision 1)");
     expect(await listSchedule(f.actors.designer, f.site.id)).toHaveLength(3); // the refusal deleted nothing
     expect((await deleteDetectors(f.actors.designer, f.site.id, [motion.id], { confirmApproved: true })).approvedLayouts.map((u) => u.name)).toEqual(["Option A"]);
-    await createDetector(f.actors.designer, f.site.id, { label: "Store door", catalogId: "contact-door-surface", area: "Ground", room: "Store", cableM: 8, gauge: { awg: 22 }, supervision: "single-eol" });
+    await createDetector(f.actors.designer, f.site.id, { label: "Hall cupboard door", catalogId: "contact-door-surface", area: "Ground", room: "Hall", cableM: 8, gauge: { awg: 22 }, supervision: "single-eol" });
 
     const after = await snapshot();
     expect(after.sheet).toBe(before.sheet);
@@ -120,7 +120,7 @@ describe("the approved design is frozen", () => {
       ["Front door", "changed"],
       ["Back door", "changed"],
       ["Hall motion", "removed"],
-      ["Store door", "added"],
+      ["Hall cupboard door", "added"],
     ]);
     expect(drift.differences[0].changes).toEqual([{ field: "cable run", was: "12 m", now: "1999 m" }]);
     const redraft = await redraftFromSchedule(f.actors.designer, f.layout.id);

@@ -12,7 +12,7 @@ beforeAll(() => {
 
 async function siteWithOrg() {
   const o = await makeOrganisation("Schedule");
-  const site = await createSite(o.actors.designer, { name: "Test library", address: "", description: "", areas: [{ name: "Ground", rooms: ["Hall"] }] });
+  const site = await createSite(o.actors.designer, { name: "Test library", address: "", description: "", areas: [{ name: "Ground", rooms: ["Hall"] }, { name: "First floor", rooms: ["Hall", "Landing"] }] });
   return { ...o, site };
 }
 
@@ -45,7 +45,12 @@ describe("device schedule in MariaDB", () => {
     const { actors, site } = await siteWithOrg();
     const ids: string[] = [];
     for (const label of ["D1", "D2", "D3"]) ids.push((await createDetector(actors.designer, site.id, { label, catalogId: "contact-door-surface", area: "Ground", room: "Hall", cableM: 10, gauge: { awg: 22 }, supervision: "double-eol" })).id);
-    expect(await bulkEditDetectors(actors.designer, site.id, { ids: ids.slice(0, 2), patch: { area: "First floor", supervision: "shared-ok" } })).toEqual({ updated: 2 });
+    // a place the site lacks is refused whole, naming the field and the detectors, and changes nothing
+    await expect(bulkEditDetectors(actors.designer, site.id, { ids, patch: { area: "Basement", cableM: 5 } })).rejects.toMatchObject({ status: 422, issues: [{ path: "patch.area", message: expect.stringContaining("“Basement” is not an area of this site. Pick one of the site's areas, or add it to the site's structure first. (D1, D2, D3)") }] });
+    await expect(bulkEditDetectors(actors.designer, site.id, { ids, patch: { room: "Landing" } })).rejects.toMatchObject({ status: 422, issues: [{ path: "patch.room", message: expect.stringContaining("“Landing” is not a room of Ground") }] });
+    expect((await listSchedule(actors.designer, site.id)).map((d) => [d.area, d.room, d.cableM])).toEqual([["Ground", "Hall", 10], ["Ground", "Hall", 10], ["Ground", "Hall", 10]]);
+    // an area alone keeps each row's room, which the new area must have; the site's spelling is stored
+    expect(await bulkEditDetectors(actors.designer, site.id, { ids: ids.slice(0, 2), patch: { area: "first FLOOR", supervision: "shared-ok" } })).toEqual({ updated: 2 });
     const list = await listSchedule(actors.designer, site.id);
     expect(list.map((d) => [d.label, d.area, d.supervision])).toEqual([
       ["D1", "First floor", "shared-ok"],

@@ -68,4 +68,11 @@ describe("bulk patch", () => {
     expect(bulkPatch({ ...blank, cableM: "2001" })).toMatchObject({ error: expect.stringMatching(/^the cable run/) });
     expect(bulkPatch({ ...blank, gauge: "thick" })).toMatchObject({ error: expect.stringMatching(/^write a gauge/) });
   });
+
+  it("takes the cable run in feet for an organisation on imperial units, and sends metres", () => {
+    // NIST Handbook 44, Appendix C: 1 ft = 0.3048 m exactly
+    expect(bulkPatch({ ...blank, cableM: "100" }, "imperial")).toEqual({ patch: { cableM: 30.48 } });
+    // 2000 m / 0.3048 = 6561.68 ft (arithmetic): the limit is stated in feet
+    expect(bulkPatch({ ...blank, cableM: "6600" }, "imperial")).toEqual({ error: "the cable run must be more than 0 ft and at most 6561.68 ft" });
+  });
 });
