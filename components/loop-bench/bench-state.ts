@@ -1,7 +1,7 @@
 // The loop bench's settings, the loop they describe, and the reading for the chosen states and fault.
 // Pure: the bench runs the engine in the browser on every change.
 import type { ContactType, InputType, Report, WiringScheme } from "@/lib/catalog/schema";
-import { analyzeLoop, readingAt, reportsOf, rowLabel, type DetectorState, type Fault, type LoopAnalysis, type LoopSpec, type Placement } from "@/lib/loop";
+import { analyzeLoop, readingAt, reportsOf, rowLabel, type CableCores, type DetectorState, type Fault, type LoopAnalysis, type LoopSpec, type Placement } from "@/lib/loop";
 import { conductorFaultOf, type ConductorChoice } from "./conductor-choice";
 
 export const MAX_DETECTORS = 4;
@@ -29,6 +29,15 @@ export interface BenchSettings {
   fault: Fault;
   /** A fault on the cable's cores instead of the input-pair fault (which is then "none"). */
   conductor: ConductorChoice | null;
+  /** A cable carrying the tamper pair too (resistor at the detector, tamper contacts); null: the pair the placement needs. */
+  cable?: TamperCable | null;
+}
+
+export type TamperCable = Extract<CableCores, "four-core-alarm-tamper" | "six-core-alarm-tamper">;
+
+/** The cable the bench's loop uses: a tamper-pair cable only where the loop can carry one. */
+export function benchCores(s: Pick<BenchSettings, "cable" | "placement" | "scheme" | "tamper">): TamperCable | undefined {
+  return s.cable && s.placement === "at-detector" && s.tamper ? s.cable : undefined;
 }
 
 export { SCHEME_WORDS, PLACEMENT_WORDS } from "@/lib/vocabulary/words";
@@ -73,6 +82,8 @@ export function toLoopSpec(s: BenchSettings): LoopSpec {
   if (s.scheme === "single-eol" || s.scheme === "double-eol" || s.scheme === "shared") loop.eolOhms = s.eolOhms ?? undefined;
   if (s.scheme === "double-eol") loop.alarmOhms = s.alarmOhms ?? undefined;
   if (s.scheme === "shared" && s.sharedOhms[0] !== null && s.sharedOhms[1] !== null) loop.sharedOhms = [s.sharedOhms[0], s.sharedOhms[1]];
+  const cores = benchCores(s);
+  if (cores) loop.cores = cores;
   const cf = conductorFaultOf(s.conductor, loop);
   if (cf) loop.conductorFaults = [cf];
   return loop;
@@ -109,6 +120,7 @@ export function settingsFor(t: InputType, keep?: Partial<BenchSettings>): BenchS
     states: Array.from({ length: MAX_DETECTORS }, () => "rest" as DetectorState),
     fault: "none",
     conductor: keep?.conductor ?? null,
+    cable: keep?.cable ?? null,
   };
   return { ...base, contact: defaultContact(t, scheme, base) };
 }

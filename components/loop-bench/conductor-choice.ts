@@ -22,7 +22,7 @@ export const CONDUCTOR_KIND_WORDS: Record<ConductorKind | "none", string> = {
 export const POSITION_WORDS: Record<ConductorPosition, string> = { panel: "at the panel end", middle: "in the middle of the run", detector: "at the detector end" };
 
 /** Colours drawn for each core (white drawn with a grey edge so it shows on a light background). */
-export const CORE_INK: Record<CoreColour, string> = { yellow: "#c99a06", blue: "#1f5fbf", green: "#2e8b57", white: "#ffffff" };
+export const CORE_INK: Record<CoreColour, string> = { yellow: "#c99a06", blue: "#1f5fbf", green: "#2e8b57", white: "#ffffff", red: "#c62828", black: "#1c1c1c" };
 
 export function coreColoursOf(loop: LoopSpec): CoreColour[] {
   return CORE_COLOURS[coresOf(loop)];

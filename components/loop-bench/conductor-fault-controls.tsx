@@ -1,5 +1,7 @@
 "use client";
 // Choose a conductor fault: the kind, the core(s) by colour as drawn on the schematic, and the position.
+import { CABLE_CORES_WORDS } from "@/lib/loop";
+import type { TamperCable } from "./bench-state";
 import { Section, Segmented } from "./controls";
 import { CONDUCTOR_KIND_WORDS, CORE_INK, coreColoursOf, POSITION_WORDS, toggleCore, withKind, type ConductorKind, type ConductorPosition } from "./conductor-choice";
 import type { Bench } from "./use-bench";
@@ -13,6 +15,20 @@ export function ConductorFaultControls({ bench }: { bench: Bench }) {
       <p className="-mt-2 text-xs text-slate-500">
         The cable&apos;s {colours.length} cores, by colour as drawn on the schematic{loop.placement === "loop-back" && loop.scheme !== "none" ? " (four-core: the loop-back pair too)" : ""}.
       </p>
+      {s.placement === "at-detector" && s.tamper ? (
+        <Segmented<TamperCable | "pair">
+          legend="Cable"
+          name="cable"
+          value={s.cable ?? "pair"}
+          columns={1}
+          options={[
+            { value: "pair", label: "the input pair only (two-core)" },
+            ...(["four-core-alarm-tamper", "six-core-alarm-tamper"] as const).map((k) => ({ value: k, label: CABLE_CORES_WORDS[k] })),
+          ]}
+          onChange={(cable) => update({ cable: cable === "pair" ? null : cable })}
+          testId="cable-cores"
+        />
+      ) : null}
       <Segmented<ConductorKind | "none">
         legend="Fault on the cable's cores"
         name="conductor-kind"

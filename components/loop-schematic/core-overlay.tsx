@@ -4,7 +4,7 @@ import type { ConductorFault, CoreColour } from "@/lib/loop";
 import { FAULT, MUTED } from "./symbols";
 
 /** Colours drawn for each core (white with a grey edge so it shows on a light background). */
-const INK: Record<CoreColour, string> = { yellow: "#c99a06", blue: "#1f5fbf", green: "#2e8b57", white: "#ffffff" };
+const INK: Record<CoreColour, string> = { yellow: "#c99a06", blue: "#1f5fbf", green: "#2e8b57", white: "#ffffff", red: "#c62828", black: "#1c1c1c" };
 
 export interface CoreOverlayProps {
   /** Each core's colour and the height of its line on the drawing. */

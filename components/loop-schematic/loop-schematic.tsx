@@ -4,7 +4,7 @@
 import { useId } from "react";
 import type { InputType } from "@/lib/catalog/schema";
 import type { ConductorFault, DetectorState, Fault, LoopSpec } from "@/lib/loop";
-import { CORE_COLOURS, coresOf, FAULT_WORDS, statesLabel } from "@/lib/loop";
+import { carriesTamperPair, CORE_COLOURS, coresOf, FAULT_WORDS, statesLabel } from "@/lib/loop";
 import { CoreOverlay } from "./core-overlay";
 import { PLACEMENT_WORDS, SCHEME_WORDS } from "@/lib/vocabulary/words";
 import { schematicModel, type ContactEl, type ParallelEl, type ResistorEl, type Rung, type SeriesEl } from "./schematic-model";
@@ -260,8 +260,8 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
       })}
 
       {/* the cores by colour: yellow out, blue back; on a loop-back cable green returns to the resistor, white goes out to blue */}
-      {conductorFault !== undefined && coresOf(loop) !== "four-core-alarm-tamper" ? (
-        <CoreOverlay cores={CORE_COLOURS[coresOf(loop)].map((colour) => ({ colour, y: { yellow: yA, blue: yB, white: yC, green: yD }[colour] }))} x0={PX} x1={CX} lengthM={loop.cable.lengthM} fault={conductorFault} />
+      {conductorFault !== undefined && !carriesTamperPair(coresOf(loop)) ? (
+        <CoreOverlay cores={CORE_COLOURS[coresOf(loop)].map((colour) => ({ colour, y: colour === "yellow" ? yA : colour === "blue" ? yB : colour === "white" ? yC : yD }))} x0={PX} x1={CX} lengthM={loop.cable.lengthM} fault={conductorFault} />
       ) : null}
 
       {/* injected fault */}

@@ -2,14 +2,15 @@
 // and verdicts on what the panel can and cannot see.
 import type { InputType, Report } from "@/lib/catalog/schema";
 import type { Finding, FindingTarget } from "@/lib/findings";
-import { conductorAt, compileLoop, encodeStates, enumerateStates, evalFaults, FAULTS, SCHEME_SHARED, STATE_ACTIVE, STATE_TAMPER, type LoopModel } from "./loop-model";
+import { conductorAt, compileLoop, contactSums, evalFaultsFrom, FAULTS, SCHEME_SHARED, STATE_ACTIVE, STATE_TAMPER, stateCombos, type LoopModel } from "./loop-model";
 import { acceptableFor, bandIndex, compileBands, marginOf, REPORT_BIT, reportsBetween } from "./loop-bands";
 import { inputTypeProblems, loopShapeProblems, type LoopProblem } from "./loop-problems";
 import { maxCableRun, type CableRow } from "./max-cable";
-import { FAULT_WORDS, statesLabel } from "./row-labels";
 import { buildFindings } from "./loop-findings";
 import { resistorUses } from "./resistor-uses";
 import { attachWiring, wiringProblems } from "./wiring-analysis";
+import { indistinguishableGroups } from "./indistinguishable";
+import { ReadingRow } from "./reading-row";
 import type { Fault, LoopAnalysis, LoopSpec, Reading } from "./types";
 import { withFieldLabel } from "@/lib/vocabulary/field-labels";
 
@@ -37,44 +38,17 @@ function expectedFor(m: LoopModel, code: readonly number[]): Report {
 }
 
 // Per-call work arrays, reused: allocating typed arrays per loop showed in the profile. Used only within one call
-// (buildFindings reads the situations, and the pair search the expected bits, before analyzeLoop returns).
+// (the pair grouping reads the situations and the expected bits before analyzeLoop returns).
 const scratchArrays = [new Int32Array(256), new Int32Array(256), new Int32Array(256)];
 /** The four fault readings at: low parts and coldest, high parts and hottest, nominal, and both on a zero-length cable. */
 const READINGS = [0, 1, 2, 3, 4].map(() => new Float64Array(4));
+/** The contacts' share of the network for one state combination (contactSums). */
+const CONTACTS = new Float64Array(3);
+/** Situations a row can be in, as the findings group indistinguishable pairs (see FAULT_SITUATION). */
+const SITUATIONS = 6;
 function scratch(n: number, k = 0): Int32Array {
   if (scratchArrays[k].length < n) scratchArrays[k] = new Int32Array(Math.max(n, 2 * scratchArrays[k].length));
   return scratchArrays[k];
-}
-
-/**
- * Every pair of rows (i < j, in that order) that can give the same report while expecting different ones. A row
- * whose interval stays in one band pairs only with the rows touching that band: those are walked from a list per
- * report; a row straddling bands (rare) is compared with every later row.
- */
-function indistinguishablePairs(masks: readonly number[], exp: Int32Array): Array<[number, number]> {
-  const out: Array<[number, number]> = [];
-  const nRows = masks.length;
-  const byBit: number[][] = [];
-  const next = scratch(nRows, 2); // single-band rows: where the rows after it start in its band's list
-  for (let i = 0; i < nRows; i++) {
-    const mi = masks[i];
-    for (let b = 0; 1 << b <= mi; b++)
-      if (mi & (1 << b)) {
-        const list = (byBit[b] ??= []);
-        list.push(i);
-        next[i] = list.length;
-      }
-  }
-  for (let i = 0; i < nRows; i++) {
-    const mi = masks[i];
-    const ei = exp[i];
-    if (mi === 0) continue;
-    if ((mi & (mi - 1)) === 0) {
-      const list = byBit[31 - Math.clz32(mi)];
-      for (let k = next[i]; k < list.length; k++) if (ei !== exp[list[k]]) out.push([i, list[k]]);
-    } else for (let j = i + 1; j < nRows; j++) if ((mi & masks[j]) !== 0 && ei !== exp[j]) out.push([i, j]);
-  }
-  return out;
 }
 
 function invalidAnalysis(problems: LoopProblem[], target: FindingTarget): LoopAnalysis {
@@ -108,52 +82,42 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
   const eLo = m.eol * lo, aLo = m.alarm * lo, saLo = m.sa * lo, sbLo = m.sb * lo;
   const eHi = m.eol * hi, aHi = m.alarm * hi, saHi = m.sa * hi, sbHi = m.sb * hi;
 
-  const combos = enumerateStates(loop.detectors);
+  const { combos, codes } = stateCombos(loop.detectors);
   // each row's situation for the findings' grouping: 0 all at rest, 1 an alarm, 2 a tamper, then the faults
   const situations = scratch(combos.length * 4);
   const rows: Reading[] = [];
   const masks: number[] = [];
   const cableRows: CableRow[] = [];
   const [vLo, vHi, vNom, vLo0, vHi0] = READINGS;
+  const k = CONTACTS;
   const expBits = scratch(combos.length * 4, 1);
-  for (const states of combos) {
-    const code = encodeStates(states);
+  for (let c = 0; c < combos.length; c++) {
+    const states = combos[c];
+    const code = codes[c];
     const exp0 = expectedFor(m, code);
     const exp0Bit = REPORT_BIT[exp0];
     const exp0Ok = acceptableFor(exp0);
     const sit0 = exp0 === "normal" ? 0 : exp0 === "open" ? 2 : 1;
-    const sl = statesLabel(loop.detectors, states);
-    evalFaults(m, code, rcLo, eLo, aLo, saLo, sbLo, vLo);
-    evalFaults(m, code, rcHi, eHi, aHi, saHi, sbHi, vHi);
-    evalFaults(m, code, rcNom, m.eol, m.alarm, m.sa, m.sb, vNom);
+    contactSums(m, code, k);
+    evalFaultsFrom(m, k, rcLo, eLo, aLo, saLo, sbLo, vLo);
+    evalFaultsFrom(m, k, rcHi, eHi, aHi, saHi, sbHi, vHi);
+    evalFaultsFrom(m, k, rcNom, m.eol, m.alarm, m.sa, m.sb, vNom);
     // The same rows on a zero-length cable: the longest run starts from readings in their band there.
-    evalFaults(m, code, 0, eLo, aLo, saLo, sbLo, vLo0);
-    evalFaults(m, code, 0, eHi, aHi, saHi, sbHi, vHi0);
+    evalFaultsFrom(m, k, 0, eLo, aLo, saLo, sbLo, vLo0);
+    evalFaultsFrom(m, k, 0, eHi, aHi, saHi, sbHi, vHi0);
     for (let f = 0; f < 4; f++) {
       const minOhms = vLo[f];
       const maxOhms = vHi[f];
-      const nominalOhms = vNom[f];
       const iLo = bandIndex(cb, minOhms);
       const iHi = bandIndex(cb, maxOhms);
-      const reports = reportsBetween(cb, iLo, iHi);
       const fault: Fault = FAULTS[f];
       const expected: Report = f === 0 ? exp0 : f === 3 ? "open" : "short";
       let mask = 0;
       for (let b = iLo; b <= iHi; b++) mask |= cb.masks[b];
-      rows.push({
-        states,
-        fault,
-        minOhms,
-        maxOhms,
-        reports,
-        uncertain: iLo !== iHi,
-        marginOhms: marginOf(cb, iLo, iHi, minOhms, maxOhms),
-        expected,
-        nominalOhms,
-        label: f === 0 ? sl : `${FAULT_WORDS[fault]} (${sl})`,
-      });
-      expBits[rows.length - 1] = f === 0 ? exp0Bit : f === 3 ? OPEN_BIT : SHORT_BIT;
-      situations[rows.length - 1] = f === 0 ? sit0 : FAULT_SITUATION[f];
+      const i = rows.length;
+      rows.push(new ReadingRow(states, fault, minOhms, maxOhms, reportsBetween(cb, iLo, iHi), iLo !== iHi, marginOf(cb, iLo, iHi, minOhms, maxOhms), expected, vNom[f], loop.detectors));
+      expBits[i] = f === 0 ? exp0Bit : f === 3 ? OPEN_BIT : SHORT_BIT;
+      situations[i] = f === 0 ? sit0 : FAULT_SITUATION[f];
       masks.push(mask);
       const hi0 = vHi0[f];
       if (hi0 < Infinity) {
@@ -177,7 +141,7 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
     faults[FAULTS[f] as Exclude<Fault, "none">] = verdict;
   }
 
-  const indistinguishable = indistinguishablePairs(masks, expBits);
+  const groups = indistinguishableGroups(masks, expBits, situations, SITUATIONS);
 
   const conductorOhms = { minOhms: m.conductors * rcLo, maxOhms: m.conductors * rcHi };
   const hotPerM = conductorAt(m, m.tMax, 1);
@@ -186,7 +150,7 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
     findings: [],
     resistors: resistorUses(loop, inputType),
     faults,
-    indistinguishable,
+    indistinguishable: groups.pairs,
     maxCableM: maxCableRun(m, cableRows, hi),
     valid: true,
     conductorOhms,
@@ -205,7 +169,7 @@ export function analyzeLoop(loop: LoopSpec, inputType: InputType, target: Findin
       return { states: r.states, minOhms: r.minOhms, maxOhms: r.maxOhms, report, unique: r.reports.length === 1 && report === r.expected && (masks[i] & others) === 0 };
     });
   }
-  const findings: Finding[] = buildFindings({ loop, inputType, model: m, rows, masks, analysis, situations }, target);
+  const findings: Finding[] = buildFindings({ loop, inputType, model: m, rows, masks, analysis, groups }, target);
   analysis.findings = findings;
   attachWiring(analysis, loop, inputType, m, target);
   return analysis;

@@ -17,8 +17,16 @@ export function awgAreaMm2(awg: number): number {
   return (Math.PI / 4) * d * d;
 }
 
+const awgAreas = new Map<number, number>();
+
 export function gaugeAreaMm2(gauge: CableGauge): number {
-  return "awg" in gauge ? awgAreaMm2(gauge.awg) : gauge.mm2;
+  if (!("awg" in gauge)) return gauge.mm2;
+  let a = awgAreas.get(gauge.awg);
+  if (a === undefined) {
+    a = awgAreaMm2(gauge.awg);
+    if (awgAreas.size < 100) awgAreas.set(gauge.awg, a);
+  }
+  return a;
 }
 
 /** R(T) = R20 × (1 + α (T − 20)). */

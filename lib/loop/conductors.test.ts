@@ -3,9 +3,10 @@ import { analyzeLoop } from "./analyze-loop";
 import { readingAt } from "./loop-model";
 import { loopSpecSchema } from "./loop-schema";
 import { conductorReading, enumerateConductorFaults } from "./conductors";
+import { conductorOhms } from "./cable";
 import { compileLoop } from "./loop-model";
 import { testInputType, testLifeSafetyInputType } from "./test-support/input-types";
-import type { LoopSpec } from "./types";
+import type { ConductorFault, LoopSpec } from "./types";
 
 const base: LoopSpec = {
   scheme: "single-eol",
@@ -93,11 +94,70 @@ describe("conductor faults", () => {
     expect(faults.filter((f) => f.kind === "open")).toHaveLength(6);
   });
 
+  it("an open core is never taken for an unchanged reading", () => {
+    const a = analyzeLoop({ ...base, conductorFaults: [{ kind: "open", core: "blue", atM: 20 }] }, testInputType);
+    // ∞ in every state; on this input the band above normal is an alarm, so the open is reported, as something else
+    expect(a.conductors!.faults[0].rows.map((r) => r.maxOhms)).toEqual([Infinity, Infinity]);
+    expect(a.conductors!.faults[0].verdict).toBe("mistaken");
+  });
+
+  describe("six-core cable: alarm, tamper and supply pairs", () => {
+    const six: LoopSpec = { ...base, scheme: "double-eol", cores: "six-core-alarm-tamper", detectors: [{ label: "Hall", contact: "NC", tamper: true, lifeSafety: false }] };
+    const fault = (f: NonNullable<LoopSpec["conductorFaults"]>, loop = six) => analyzeLoop({ ...loop, conductorFaults: f }, testInputType).conductors!.faults;
+
+    it("enumerates every pair of its six cores, each core open and to earth, at three points", () => {
+      const faults = enumerateConductorFaults(six);
+      // 6 cores: 15 pairs × 3 positions; 6 × 3 opens; 6 × 3 earth faults
+      expect(faults.filter((f) => f.kind === "short")).toHaveLength(45);
+      expect(faults.filter((f) => f.kind === "open")).toHaveLength(18);
+      expect(faults.filter((f) => f.kind === "earth")).toHaveLength(18);
+      const a = analyzeLoop({ ...six, conductorFaults: "all" }, testInputType);
+      expect(a.valid).toBe(true);
+      expect(a.conductors!.colours).toEqual(["yellow", "blue", "green", "white", "red", "black"]);
+      expect(a.conductors!.faults.every((f) => f.rows.length === 3)).toBe(true);
+    });
+
+    it("the supply cut drops the relay to its alarm position: every row without a tamper reads R + Ra through four cores", () => {
+      for (const f of [{ kind: "open", core: "red", atM: 40 }, { kind: "open", core: "black", atM: 0 }, { kind: "short", cores: ["red", "black"], atM: 20 }] satisfies ConductorFault[]) {
+        const [r] = fault([f]);
+        expect(r.label).toMatch(/cutting the detectors' supply$/);
+        // nominal: R 5.6 kΩ + Ra 5.6 kΩ (contact open) + 4 cores of 40 m 0.22 mm² at 25 °C + the closed tamper contact
+        const rc = conductorOhms({ mm2: 0.22 }, 40, 25); // IEC 60028: 1/58 Ω·mm²/m at 20 °C, α = 0.00393/°C
+        expect(r.rows[0].nominalOhms).toBeCloseTo(5600 + 5600 + 4 * rc + 0.05, 6);
+        expect(r.rows.map((x) => x.reports)).toEqual([["active"], ["active"], ["open"]]);
+        // reported, but as an alarm rather than a fault
+        expect(r.verdict).toBe("mistaken");
+      }
+    });
+
+    it("a short from the alarm pair's return to the supply's 0 V bypasses the tamper pair: a defeat", () => {
+      const [r] = fault([{ kind: "short", cores: ["blue", "black"], atM: 40 }]);
+      expect(r.rows.find((x) => x.states[0] === "tamper")!.reports).toEqual(["normal"]);
+      expect(r.verdict).toBe("defeat");
+    });
+
+    it("a short from the feeding core to either supply core reads as a short", () => {
+      for (const other of ["red", "black"] as const) expect(fault([{ kind: "short", cores: ["yellow", other], atM: 40 }])[0].verdict).toBe("detected");
+    });
+
+    it("a supply core to earth is watched only where the input watches earth", () => {
+      expect(fault([{ kind: "earth", core: "red", atM: 20 }])[0].verdict).toBe("not-supervised");
+      expect(analyzeLoop({ ...six, conductorFaults: [{ kind: "earth", core: "red", atM: 20 }] }, { ...testInputType, earthFaultMonitor: true }).conductors!.faults[0].verdict).toBe("detected");
+    });
+
+    it("needs the resistor at the detector and a tamper contact; the request schema takes it", () => {
+      const a = analyzeLoop({ ...six, detectors: [{ ...six.detectors[0], tamper: false }] }, testInputType);
+      expect(a.valid).toBe(false);
+      expect(a.findings[0].message).toContain("a six-core, alarm, tamper and supply pairs cable needs at least one detector with a tamper contact");
+      expect(loopSpecSchema.safeParse({ ...six, conductorFaults: [{ kind: "short", cores: ["red", "yellow"], atM: 0 }] }).success).toBe(true);
+    });
+  });
+
   it("the schema names unknown cores and impossible positions", () => {
-    const r = loopSpecSchema.safeParse({ ...base, conductorFaults: [{ kind: "short", cores: ["yellow", "green"], atM: 5 }, { kind: "open", core: "blue", atM: 99 }, { kind: "open", core: "red", atM: 1 }] });
+    const r = loopSpecSchema.safeParse({ ...base, conductorFaults: [{ kind: "short", cores: ["yellow", "green"], atM: 5 }, { kind: "open", core: "blue", atM: 99 }, { kind: "open", core: "purple", atM: 1 }] });
     expect(r.success).toBe(false);
     const msgs = r.error!.issues.map((i) => `${i.path.join(".")}: ${i.message}`);
-    expect(msgs).toContain("conductorFaults.2.core: a core is yellow, blue, green or white");
+    expect(msgs).toContain("conductorFaults.2.core: a core is yellow, blue, green, white, red or black");
     // the shape check stops at the unknown colour; a known colour not in this cable is named with the cable's cores
     const r2 = loopSpecSchema.safeParse({ ...base, conductorFaults: [{ kind: "short", cores: ["yellow", "green"], atM: 5 }, { kind: "open", core: "blue", atM: 99 }] });
     const m2 = r2.error!.issues.map((i) => `${i.path.join(".")}: ${i.message}`);

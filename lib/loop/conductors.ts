@@ -18,18 +18,35 @@ export const CORE_COLOURS: Record<CableCores, CoreColour[]> = {
   "two-core": ["yellow", "blue"],
   "four-core-loop-back": ["yellow", "blue", "green", "white"],
   "four-core-alarm-tamper": ["yellow", "blue", "green", "white"],
+  "six-core-alarm-tamper": ["yellow", "blue", "green", "white", "red", "black"],
 };
 
 export const CABLE_CORES_WORDS: Record<CableCores, string> = {
   "two-core": "two-core",
   "four-core-loop-back": "four-core loop-back",
   "four-core-alarm-tamper": "four-core, alarm and tamper pairs",
+  "six-core-alarm-tamper": "six-core, alarm, tamper and supply pairs",
 };
+
+/** A cable carrying a detector's alarm pair and tamper pair, linked in series at the panel onto one input. */
+export function carriesTamperPair(cores: CableCores): boolean {
+  return cores === "four-core-alarm-tamper" || cores === "six-core-alarm-tamper";
+}
+
+/**
+ * The detectors' supply fails: the red (+) or black (0 V) core open, or the two touching. A powered detector's
+ * output relay then drops to its alarm position (a fail-safe output; common practice, no published source).
+ */
+export function cutsSupply(f: ConductorFault | null): boolean {
+  if (f === null) return false;
+  if (f.kind === "open") return f.core === "red" || f.core === "black";
+  return f.kind === "short" && f.cores.includes("red") && f.cores.includes("black");
+}
 
 /** "all" conductor faults are enumerated up to this many detectors; past it, list the faults to check. */
 export const MAX_DETECTORS_FOR_ALL_FAULTS = 8;
 
-const Y = 0, B = 1, G = 2, W = 3;
+const Y = 0, B = 1, G = 2, W = 3, RED = 4, BLACK = 5;
 
 export function coresOf(loop: Pick<LoopSpec, "cores" | "placement" | "scheme">): CableCores {
   return loop.cores ?? (loop.placement === "loop-back" && loop.scheme !== "none" ? "four-core-loop-back" : "two-core");
@@ -67,9 +84,9 @@ export function conductorProblems(loop: LoopSpec, out: ConductorProblem[] = []):
     out.push({ path: ["cores"], message: "a loop-back resistor is reached through a four-core loop-back cable: choose that cable" });
   if (cores === "four-core-loop-back" && (loop.placement !== "loop-back" || loop.scheme === "none"))
     out.push({ path: ["cores"], message: "a four-core loop-back cable carries a loop-back resistor: choose the loop-back resistor placement on a scheme with resistors" });
-  if (cores === "four-core-alarm-tamper") {
+  if (carriesTamperPair(cores)) {
     if (loop.placement !== "at-detector") out.push({ path: ["cores"], message: "the alarm and tamper pairs in one cable are modelled with the resistor at the detector" });
-    if (!loop.detectors.some((d) => d.tamper)) out.push({ path: ["cores"], message: "a four-core alarm and tamper cable needs at least one detector with a tamper contact" });
+    if (!loop.detectors.some((d) => d.tamper)) out.push({ path: ["cores"], message: `a ${CABLE_CORES_WORDS[cores]} cable needs at least one detector with a tamper contact` });
   }
   if (loop.pathway === "class-a" && loop.conductorFaults !== undefined)
     out.push({ path: ["conductorFaults"], message: "conductor faults are checked on Class B loops; a Class A loop is checked for every single open on its own" });
@@ -135,8 +152,9 @@ const PART_WORDS: Record<LoopPart, string> = {
 
 export function conductorFaultLabel(f: ConductorFault, loop: LoopSpec): string {
   const where = f.kind === "part-short" ? "" : positionWords(f.atM, loop.cable.lengthM);
-  if (f.kind === "short") return `a short between the ${f.cores[0]} and ${f.cores[1]} cores ${where}`;
-  if (f.kind === "open") return `the ${f.core} core open ${where}`;
+  const supply = cutsSupply(f) ? ", cutting the detectors' supply" : "";
+  if (f.kind === "short") return `a short between the ${f.cores[0]} and ${f.cores[1]} cores ${where}${supply}`;
+  if (f.kind === "open") return `the ${f.core} core open ${where}${supply}`;
   if (f.kind === "earth") return `the ${f.core} core to earth ${where}`;
   const whose = f.detector !== undefined ? `${loop.detectors[f.detector].label}'s ` : "the ";
   return `a short across ${whose}${PART_WORDS[f.part]} alone`;
@@ -184,7 +202,11 @@ export function conductorCircuit(m: LoopModel, cores: CableCores, st: ArrayLike<
     parts.push({ part: p, detector, a, b });
     c.add(a, b, ohms);
   };
-  const closed = (i: number) => (m.no[i] === 1 ? st[i] === STATE_ACTIVE : st[i] !== STATE_ACTIVE);
+  const unpowered = cutsSupply(fault);
+  const closed = (i: number) => {
+    const alarm = unpowered || st[i] === STATE_ACTIVE;
+    return m.no[i] === 1 ? alarm : !alarm;
+  };
   const group = (a: number, b: number) => {
     if (m.groupNO) for (let i = 0; i < m.n; i++) part("contact", a, b, closed(i) ? rk : Infinity, i);
     else {
@@ -207,10 +229,17 @@ export function conductorCircuit(m: LoopModel, cores: CableCores, st: ArrayLike<
   // Panel end; with the resistor(s) at the input terminals, the cable hangs off them (added below).
   const placementPanel = m.placement === PLACE_PANEL && m.scheme !== SCHEME_NONE;
   if (!placementPanel) c.add(1, P[Y], 0);
-  if (cores === "four-core-alarm-tamper") {
+  if (carriesTamperPair(cores)) {
     c.add(P[B], P[G], 0); // the link at the panel that puts the tamper pair in series
     c.add(P[W], 0, 0);
   } else c.add(P[B], 0, 0);
+  if (cores === "six-core-alarm-tamper") {
+    // The supply's 0 V is the input's return; its + joins it through the supply, which counts as 0 Ω for the
+    // resistance the input measures (the supply zeroed, as for a Thévenin resistance). The detectors' supply
+    // terminals carry no current to the contacts: the far ends of red and black go nowhere else.
+    c.add(P[BLACK], 0, 0);
+    c.add(P[RED], 0, 0);
+  }
   return finishCircuit(c, m, cores, P, D, tap, st, v, fault, parts, group, sharedPair, placementPanel);
 }
 
@@ -234,7 +263,7 @@ function finishCircuit(
     c.add(a, b, ohms);
   };
   // Tamper contacts in series, on the alarm pair or, in an alarm and tamper cable, on the tamper pair.
-  let s = cores === "four-core-alarm-tamper" ? D[G] : D[Y];
+  let s = carriesTamperPair(cores) ? D[G] : D[Y];
   for (let i = 0; i < m.n; i++)
     if (m.tamper[i] === 1) {
       const x = c.node();
@@ -242,7 +271,7 @@ function finishCircuit(
       s = x;
     }
   let t = s;
-  if (cores === "four-core-alarm-tamper") {
+  if (carriesTamperPair(cores)) {
     c.add(s, D[W], 0);
     t = D[Y];
   }
@@ -306,7 +335,7 @@ export function conductorReading(m: LoopModel, cores: CableCores, st: ArrayLike<
 }
 
 function expectedOf(f: ConductorFault): Report {
-  if (f.kind === "open") return "open";
+  if (f.kind === "open" || cutsSupply(f)) return "open";
   if (f.kind === "earth") return "trouble";
   return "short";
 }
@@ -323,7 +352,8 @@ export function bandRow(cb: CompiledBands, states: ConductorReading["states"], m
   };
 }
 
-const same = (a: number, b: number) => a === b || Math.abs(a - b) <= 1e-9 * Math.max(1, Math.abs(a));
+// an open (∞) is never the same as a finite reading: |∞ − x| ≤ 1e-9 · ∞ would say it is
+const same = (a: number, b: number) => a === b || (Number.isFinite(a) && Number.isFinite(b) && Math.abs(a - b) <= 1e-9 * Math.max(1, Math.abs(a)));
 
 export function analyzeConductors(loop: LoopSpec, inputType: InputType, m: LoopModel): ConductorAnalysis {
   const cores = coresOf(loop);

@@ -10,7 +10,7 @@ export { rowsMatchingReading } from "./meter-reading";
 export { LIFE_SAFETY_CAUTION } from "./loop-findings";
 export { statesLabel, rowLabel, REPORT_WORDS, FAULT_WORDS } from "./row-labels";
 export { loopJsonReplacer, loopJsonReviver } from "./loop-json";
-export { CORE_COLOURS, CABLE_CORES_WORDS, coresOf, conductorFaultLabel, conductorFaultReading, enumerateConductorFaults, positionWords } from "./conductors";
+export { carriesTamperPair, CORE_COLOURS, CABLE_CORES_WORDS, coresOf, conductorFaultLabel, cutsSupply, conductorFaultReading, enumerateConductorFaults, positionWords } from "./conductors";
 export { classAProblems } from "./class-a";
 
 export {

@@ -4,6 +4,7 @@ import type { Finding, FindingTarget, Severity } from "@/lib/findings";
 import { formatOhms, formatOhmsRange } from "@/lib/resistors/format-ohms";
 import { combineFromStock } from "@/lib/resistors/stock-combination";
 import { nearestPreferred } from "@/lib/resistors/e-series";
+import type { PairGroups } from "./indistinguishable";
 import type { LoopModel } from "./loop-model";
 import { REPORT_WORDS, reportsWords } from "./row-labels";
 import { acceptableFor, REPORT_BIT } from "./loop-bands";
@@ -20,8 +21,8 @@ export interface FindingsInput {
   rows: Reading[];
   masks: number[];
   analysis: LoopAnalysis;
-  /** Each row's index in SITUATION_ORDER, when the caller has it already (else worked out from the row). */
-  situations?: ArrayLike<number>;
+  /** The indistinguishable pairs counted by the two situations (SITUATION_ORDER) they mix up. */
+  groups: PairGroups;
 }
 
 const ROLE_WORDS: Record<ResistorUse["role"], string> = {
@@ -39,12 +40,15 @@ function push(out: Finding[], target: FindingTarget, code: string, severity: Sev
   out.push({ code, severity, message, why, target });
 }
 
-function faultRows(rows: readonly Reading[], f: Reading["fault"]): Reading[] {
-  return rows.filter((r) => r.fault === f);
-}
-
-function worst(rs: Reading[], bad: (r: Reading) => boolean): Reading {
-  return rs.find(bad) ?? rs[0];
+/** The first row with fault `f` that is `bad`, else the first row with that fault. */
+function worstOf(rows: readonly Reading[], f: Reading["fault"], bad: (r: Reading) => boolean): Reading {
+  let first: Reading | undefined;
+  for (const r of rows)
+    if (r.fault === f) {
+      if (bad(r)) return r;
+      first ??= r;
+    }
+  return first!;
 }
 
 function isOnly(r: Reading, allowed: readonly Report[]): boolean {
@@ -135,7 +139,7 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
   }
   const shortMistaken = (["short-panel", "short-detector"] as const).filter((f) => analysis.faults[f] === "mistaken");
   if (shortMistaken.length && !shortDefeat.length) {
-    const r = worst(faultRows(rows, shortMistaken[0]), (x) => !isOnly(x, ["short", "trouble"]));
+    const r = worstOf(rows, shortMistaken[0], (x) => !isOnly(x, ["short", "trouble"]));
     push(out, target, "short-misread",
       "warning",
       `${reads(r)}, not short`,
@@ -143,7 +147,7 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
     );
   }
   if (analysis.faults.cut === "defeat") {
-    const r = worst(faultRows(rows, "cut"), (x) => x.reports.includes("normal"));
+    const r = worstOf(rows, "cut", (x) => x.reports.includes("normal"));
     const why =
       placement === "at-panel"
         ? "The resistor is across the input terminals, so a cut cable leaves the panel reading the resistor alone: normal. The detectors are cut off without a report. Fit the resistor at the detector."
@@ -152,7 +156,7 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
           : "A cut cable reads as normal, so the detectors are cut off without any report.";
     push(out, target, "cut-reads-normal", "error", `Defeat: ${reads(r)}`, why);
   } else if (analysis.faults.cut === "mistaken") {
-    const r = worst(faultRows(rows, "cut"), (x) => !isOnly(x, ["open", "trouble"]));
+    const r = worstOf(rows, "cut", (x) => !isOnly(x, ["open", "trouble"]));
     push(out, target, "cut-misread",
       "warning",
       `${reads(r)}, not open`,
@@ -183,8 +187,8 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
     push(out, target, "margin-thin", "note", `${reads(thin)}, only ${formatOhms(thin.marginOhms)} from a band edge`, "A small margin leaves little room for a contact that ages, a joint that corrodes or a hotter cable run.");
 
   // States the panel can't tell apart, grouped by the kinds of situation involved (an alarm and a cut, …).
-  if (analysis.indistinguishable.length) {
-    const groups = indistinguishableGroups(rows, analysis.indistinguishable, ctx.situations);
+  if (ctx.groups.pairs.length) {
+    const groups = indistinguishableGroups(rows, ctx.groups);
     push(out, target, "readings-indistinguishable",
       "note",
       `The panel can't tell apart: ${groups.map((g) => `${g.words} (${g.count === 1 ? "" : `${g.count} cases, `}e.g. ${g.example})`).join("; ")}`,
@@ -290,10 +294,13 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
 const FAULT_SHORT_WORDS = { "short-panel": "a short at the panel end", "short-detector": "a short at the detector end", cut: "a cut conductor" } as const;
 
 function describeDecode(states: readonly string[], names: readonly string[]): string {
-  const a = states.map((s, i) => (s === "active" ? names[i] : null)).filter(Boolean);
-  const t = states.map((s, i) => (s === "tamper" ? names[i] : null)).filter(Boolean);
-  const act = a.length === 0 ? (t.length ? "" : "both at rest") : a.length === 2 ? "both active" : `${a[0]} active`;
-  const tam = t.length === 0 ? "" : `${t.join(" and ")} tamper open`;
+  // a shared input has two detectors: written out without intermediate arrays (this runs for every shared loop)
+  const a0 = states[0] === "active";
+  const a1 = states[1] === "active";
+  const t0 = states[0] === "tamper";
+  const t1 = states[1] === "tamper";
+  const act = a0 && a1 ? "both active" : a0 ? `${names[0]} active` : a1 ? `${names[1]} active` : t0 || t1 ? "" : "both at rest";
+  const tam = t0 && t1 ? `${names[0]} and ${names[1]} tamper open` : t0 ? `${names[0]} tamper open` : t1 ? `${names[1]} tamper open` : "";
   return act && tam ? `${act}, ${tam}` : act || tam;
 }
 
@@ -321,37 +328,17 @@ function silencingShort(rows: readonly Reading[], defeats: readonly Reading["fau
     const hit = rows.find((x) => x.fault === f && alarm(x));
     if (hit) return hit;
   }
-  return worst(faultRows(rows, order[0]), normal);
+  return worstOf(rows, order[0], normal);
 }
 
 const SITUATION_ORDER = ["all at rest", "an alarm", "a tamper", "a short at the detector end", "a short at the panel end", "a cut conductor"];
 const GROUP_WORDS = SITUATION_ORDER.map((a, i) => SITUATION_ORDER.map((b, j) => (i === j ? `${a} and another ${a.replace(/^(a|an|all at) /, "")}` : `${a} and ${b}`)));
 
-/** Index in SITUATION_ORDER of what a row is: a fault, else all at rest, a tamper or an alarm. */
-function situation(r: Reading): number {
-  const f = r.fault;
-  if (f === "none") return r.expected === "normal" ? 0 : r.expected === "open" ? 2 : 1;
-  return f === "short-detector" ? 3 : f === "short-panel" ? 4 : 5;
-}
-
-const GROUP_COUNTS = new Int32Array(SITUATION_ORDER.length * SITUATION_ORDER.length);
-
 /** Pairs grouped by the two kinds of situation they mix up, in a fixed order, each with a count and the first example. */
-function indistinguishableGroups(rows: readonly Reading[], pairs: readonly [number, number][], known?: ArrayLike<number>): { words: string; count: number; example: string }[] {
+function indistinguishableGroups(rows: readonly Reading[], g: PairGroups): { words: string; count: number; example: string }[] {
   const n = SITUATION_ORDER.length;
-  const sit = known ?? Int8Array.from(rows, situation);
-  const counts = GROUP_COUNTS.fill(0);
-  const examples: string[] = [];
-  for (let q = 0; q < pairs.length; q++) {
-    const i = pairs[q][0];
-    const j = pairs[q][1];
-    const a = sit[i];
-    const b = sit[j];
-    const k = a < b ? a * n + b : b * n + a;
-    if (counts[k]++ === 0) examples[k] = `${rows[i].label} and ${rows[j].label}`;
-  }
   const out: { words: string; count: number; example: string }[] = [];
-  for (let k = 0; k < n * n; k++) if (counts[k]) out.push({ words: GROUP_WORDS[(k / n) | 0][k % n], count: counts[k], example: examples[k] });
+  for (let k = 0; k < n * n; k++) if (g.counts[k]) out.push({ words: GROUP_WORDS[(k / n) | 0][k % n], count: g.counts[k], example: `${rows[g.firstI[k]].label} and ${rows[g.firstJ[k]].label}` });
   return out;
 }
 

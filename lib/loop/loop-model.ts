@@ -117,35 +117,50 @@ function par(a: number, b: number): number {
 }
 
 /**
- * The readings for all four faults at once (none, short at the panel end, short at the detector end, cut),
- * written to `out[0..3]`. `st[i]` is 0 rest, 1 active, 2 tamper; `rc` is one conductor; resistor values as
- * given. Allocation-free: this is the hot path.
+ * The contacts' share of the detector-end network for one combination of states, which no cable length or
+ * resistor value changes: `k[0]` the tamper contacts in series, `k[1]` the alarm contact group (shared inputs:
+ * detector A's contact) and `k[2]` detector B's contact. `st[i]` is 0 rest, 1 active, 2 tamper.
  */
-export function evalFaults(m: LoopModel, st: ArrayLike<number>, rc: number, eol: number, alarm: number, sa: number, sb: number, out: Float64Array): void {
+export function contactSums(m: LoopModel, st: ArrayLike<number>, k: Float64Array): void {
   const rk = m.rk;
   const n = m.n;
   let t = 0;
   for (let i = 0; i < n; i++) if (m.tamper[i] === 1) t += st[i] === STATE_TAMPER ? Infinity : rk;
+  k[0] = t;
+  if (m.scheme === SCHEME_SHARED) {
+    k[1] = (m.no[0] === 1 ? st[0] === STATE_ACTIVE : st[0] !== STATE_ACTIVE) ? rk : Infinity;
+    k[2] = (m.no[1] === 1 ? st[1] === STATE_ACTIVE : st[1] !== STATE_ACTIVE) ? rk : Infinity;
+    return;
+  }
+  let g: number;
+  if (m.groupNO) {
+    g = Infinity;
+    for (let i = 0; i < n; i++) if (st[i] === STATE_ACTIVE) g = par(g, rk);
+  } else {
+    g = 0;
+    for (let i = 0; i < n; i++) g += st[i] === STATE_ACTIVE ? Infinity : rk;
+  }
+  k[1] = g;
+  k[2] = 0;
+}
 
+/**
+ * The readings for all four faults at once (none, short at the panel end, short at the detector end, cut),
+ * written to `out[0..3]`, from the contacts' share `k` (see contactSums); `rc` is one conductor; resistor values
+ * as given. Allocation-free: this is the hot path.
+ */
+export function evalFaultsFrom(m: LoopModel, k: Float64Array, rc: number, eol: number, alarm: number, sa: number, sb: number, out: Float64Array): void {
+  const t = k[0];
   let d: number; // detector-end network
   let panel = 0; // 0 none, 1 R + w, 2 R ∥ w, 3 R + (Ra ∥ w)
   const lb = m.placement === PLACE_LOOPBACK ? 2 * rc : 0;
   const atPanel = m.placement === PLACE_PANEL;
   if (m.scheme === SCHEME_SHARED) {
-    const ca = (m.no[0] === 1 ? st[0] === STATE_ACTIVE : st[0] !== STATE_ACTIVE) ? rk : Infinity;
-    const cb = (m.no[1] === 1 ? st[1] === STATE_ACTIVE : st[1] !== STATE_ACTIVE) ? rk : Infinity;
-    d = t + par(ca, sa) + par(cb, sb);
+    d = t + par(k[1], sa) + par(k[2], sb);
     if (atPanel) panel = 1;
     else d += eol + lb;
   } else {
-    let g: number;
-    if (m.groupNO) {
-      g = Infinity;
-      for (let i = 0; i < n; i++) if (st[i] === STATE_ACTIVE) g = par(g, rk);
-    } else {
-      g = 0;
-      for (let i = 0; i < n; i++) g += st[i] === STATE_ACTIVE ? Infinity : rk;
-    }
+    const g = k[1];
     if (m.scheme === SCHEME_NONE) d = t + g;
     else if (atPanel) {
       d = t + g;
@@ -179,6 +194,14 @@ export function evalFaults(m: LoopModel, st: ArrayLike<number>, rc: number, eol:
     out[2] = eol + par(alarm, w2);
     out[3] = eol + alarm;
   }
+}
+
+const contactScratch = new Float64Array(3);
+
+/** The readings for all four faults at once for states `st` (see contactSums and evalFaultsFrom). */
+export function evalFaults(m: LoopModel, st: ArrayLike<number>, rc: number, eol: number, alarm: number, sa: number, sb: number, out: Float64Array): void {
+  contactSums(m, st, contactScratch);
+  evalFaultsFrom(m, contactScratch, rc, eol, alarm, sa, sb, out);
 }
 
 const scratch = new Float64Array(4);
@@ -258,4 +281,32 @@ export function enumerateStates(detectors: readonly { tamper: boolean }[]): Dete
       out.push(s);
     }
   return out;
+}
+
+export interface StateCombos {
+  /** As enumerateStates gives them; frozen, as they are shared by every loop of the same shape. */
+  combos: readonly DetectorState[][];
+  /** Each combination as codes (encodeStates). */
+  codes: readonly number[][];
+}
+
+const combosByShape = new Map<number, StateCombos>();
+
+/**
+ * The state combinations of a loop and their codes, made once per shape (detector count and which detectors have
+ * a tamper contact): enumerating them per loop showed in the profile of a cold layout.
+ */
+export function stateCombos(detectors: readonly { tamper: boolean }[]): StateCombos {
+  const n = detectors.length;
+  let key = n;
+  for (let i = 0; i < n && i < 24; i++) if (detectors[i].tamper) key += 32 * 2 ** i;
+  const hit = n <= 24 ? combosByShape.get(key) : undefined;
+  if (hit) return hit;
+  const combos = enumerateStates(detectors).map((s) => Object.freeze(s) as DetectorState[]);
+  const made: StateCombos = { combos: Object.freeze(combos), codes: Object.freeze(combos.map((s) => Object.freeze(encodeStates(s)) as number[])) };
+  if (n <= 24) {
+    if (combosByShape.size >= 1000) combosByShape.clear();
+    combosByShape.set(key, made);
+  }
+  return made;
 }

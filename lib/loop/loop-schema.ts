@@ -31,10 +31,10 @@ export const loopDetectorSchema = z.strictObject({
 
 const ohmsField = (what: string) => num(what).optional();
 
-export const cableCoresSchema = z.enum(["two-core", "four-core-loop-back", "four-core-alarm-tamper"], {
-  error: 'cores is "two-core", "four-core-loop-back" or "four-core-alarm-tamper"',
+export const cableCoresSchema = z.enum(["two-core", "four-core-loop-back", "four-core-alarm-tamper", "six-core-alarm-tamper"], {
+  error: 'cores is "two-core", "four-core-loop-back", "four-core-alarm-tamper" or "six-core-alarm-tamper"',
 });
-export const coreColourSchema = z.enum(["yellow", "blue", "green", "white"], { error: "a core is yellow, blue, green or white" });
+export const coreColourSchema = z.enum(["yellow", "blue", "green", "white", "red", "black"], { error: "a core is yellow, blue, green, white, red or black" });
 export const loopPartSchema = z.enum(["contact", "tamper", "eol", "alarm", "shared-a", "shared-b"], {
   error: 'part is "contact", "tamper", "eol", "alarm", "shared-a" or "shared-b"',
 });

@@ -89,9 +89,9 @@ describe("loop readings against ngspice", () => {
 
   it("random loops with every conductor fault (cores, opens, earth, part shorts) agree within 0.01 %", async () => {
     let compared = 0;
-    const withCores = fc.tuple(loopArb, fc.boolean()).map(([loop, alarmTamper]): LoopSpec => {
-      const at = alarmTamper && loop.placement === "at-detector" && loop.detectors.some((d) => d.tamper);
-      return { ...loop, cores: at ? "four-core-alarm-tamper" : undefined, conductorFaults: "all" };
+    const withCores = fc.tuple(loopArb, fc.constantFrom(undefined, "four-core-alarm-tamper", "six-core-alarm-tamper") as fc.Arbitrary<LoopSpec["cores"]>).map(([loop, cable]): LoopSpec => {
+      const at = cable !== undefined && loop.placement === "at-detector" && loop.detectors.some((d) => d.tamper);
+      return { ...loop, cores: at ? cable : undefined, conductorFaults: "all" };
     });
     await fc.assert(
       fc.asyncProperty(withCores, async (loop) => {

@@ -67,7 +67,13 @@ function addCase(net: Net, p: string, loop: LoopSpec, inputType: InputType | und
   const RA = (f.sharedOhms?.[0] ?? 0) * c.partFactor;
   const RB = (f.sharedOhms?.[1] ?? 0) * c.partFactor;
   const dets = loop.detectors;
-  const closed = (i: number) => (dets[i].contact === "NO" ? c.states[i] === "active" : c.states[i] !== "active");
+  const cf0 = c.conductorFault;
+  // A six-core cable's supply pair open, or its two cores touching: each detector's relay drops to its alarm position.
+  const noSupply = !!cf0 && ((cf0.kind === "open" && (cf0.core === "red" || cf0.core === "black")) || (cf0.kind === "short" && cf0.cores.includes("red") && cf0.cores.includes("black")));
+  const closed = (i: number) => {
+    const inAlarm = noSupply || c.states[i] === "active";
+    return dets[i].contact === "NO" ? inAlarm : !inAlarm;
+  };
   const contact = (a: string, b: string, i: number) => part("contact", a, b, closed(i) ? rk : Infinity, i);
   const pp = `${p}pp`;
   const gnd = "0";
@@ -91,7 +97,7 @@ function addCase(net: Net, p: string, loop: LoopSpec, inputType: InputType | und
     parts.push({ part: pt, detector, a, b });
     net.r(a, b, ohms);
   };
-  const alarmTamper = loop.cores === "four-core-alarm-tamper";
+  const alarmTamper = loop.cores === "four-core-alarm-tamper" || loop.cores === "six-core-alarm-tamper";
 
   // Tamper contacts in series from `a`; returns the far node.
   const tampers = (a: string): string => {
@@ -145,6 +151,14 @@ function addCase(net: Net, p: string, loop: LoopSpec, inputType: InputType | und
       wire("white", gnd, wt);
       net.r(tampers(gt), wt, 0);
       t = x;
+      if (loop.cores === "six-core-alarm-tamper") {
+        // the detectors' supply: black from the supply's 0 V (the input's return), red from its + through the
+        // supply, zeroed (0 V) for the resistance the input sees; at the detector they feed electronics only
+        const plus = net.node();
+        net.lines.push(`V${p}supply ${plus} ${gnd} DC 0`);
+        wire("red", plus, net.node());
+        wire("black", gnd, net.node());
+      }
     } else {
       wire("blue", gnd, y);
       t = tampers(x);

@@ -51,13 +51,14 @@ export interface LoopSpec {
 }
 
 /** Cores named by colour (the colours of common alarm cable; common practice, no published source). */
-export type CoreColour = "yellow" | "blue" | "green" | "white";
+export type CoreColour = "yellow" | "blue" | "green" | "white" | "red" | "black";
 /**
  * two-core: the input pair (yellow out, blue back). four-core-loop-back: the input pair plus green and white
  * out to the detector and back to the loop-back resistor. four-core-alarm-tamper: the alarm pair (yellow,
  * blue) and the tamper pair (green, white), linked in series at the panel so both sit on one input.
+ * six-core-alarm-tamper: the same two pairs plus the detectors' supply pair (red +, black 0 V) from the panel.
  */
-export type CableCores = "two-core" | "four-core-loop-back" | "four-core-alarm-tamper";
+export type CableCores = "two-core" | "four-core-loop-back" | "four-core-alarm-tamper" | "six-core-alarm-tamper";
 /** A part a stray strand or a wrong link can short on its own terminals. */
 export type LoopPart = "contact" | "tamper" | "eol" | "alarm" | "shared-a" | "shared-b";
 /** A conductor fault; `atM` is metres from the panel end (0) to the detector end (the cable length). */

@@ -51,7 +51,7 @@ export const resistorUseSchema = z
   })
   .meta({ description: "A resistor the loop carries: value, what the input type expects, preferred series and colour code." });
 
-const coreSchema = z.enum(["yellow", "blue", "green", "white"]);
+const coreSchema = z.enum(["yellow", "blue", "green", "white", "red", "black"]);
 const conductorFaultJsonSchema = z
   .discriminatedUnion("kind", [
     z.strictObject({ kind: z.literal("short"), cores: z.tuple([coreSchema, coreSchema]), atM: z.number().nonnegative() }),
@@ -64,7 +64,7 @@ const conductorReadingJsonSchema = readingJsonSchema.omit({ fault: true });
 
 export const conductorAnalysisJsonSchema = z
   .strictObject({
-    cores: z.enum(["two-core", "four-core-loop-back", "four-core-alarm-tamper"]),
+    cores: z.enum(["two-core", "four-core-loop-back", "four-core-alarm-tamper", "six-core-alarm-tamper"]),
     colours: z.array(coreSchema).meta({ description: "The cable's cores by colour (common practice, no published source)." }),
     faults: z.array(
       z.strictObject({

@@ -19,7 +19,8 @@ export const TOLERANCE_COLOURS: Record<string, BandColour> = {
   "10": "silver",
 };
 
-const cache = new Map<string, string[] | null>();
+// by tolerance, then value: numeric keys, as a string key built per call showed in the loop engine's profile
+const cache = new Map<number, Map<number, string[] | null>>();
 
 /**
  * The colour bands for a resistor: 4 bands (2 digits, multiplier, tolerance) for 5 % and wider,
@@ -28,10 +29,12 @@ const cache = new Map<string, string[] | null>();
  * or the tolerance has no colour.
  */
 export function colourBands(ohms: number, tolerancePct: number): string[] | null {
-  const key = `${ohms}|${tolerancePct}`;
-  if (cache.has(key)) return cache.get(key)!;
+  let byValue = cache.get(tolerancePct);
+  if (!byValue) cache.set(tolerancePct, (byValue = new Map()));
+  const hit = byValue.get(ohms);
+  if (hit !== undefined) return hit;
   const out = computeBands(ohms, tolerancePct);
-  cache.set(key, out);
+  byValue.set(ohms, out);
   return out;
 }
 

@@ -137,3 +137,30 @@ test("a four-core loop-back: shorting two chosen cores changes the verdict and t
   await expect(page.getByTestId("defeat-warning")).toContainText("a short between the green and yellow cores at the detector end reads as normal");
   await shot(page, "cores-yellow-green");
 });
+
+test("a six-core cable: the supply cut reads as an alarm, and a short to the supply's 0 V hides the tamper", async ({ page }) => {
+  await page.goto("/loop-bench");
+  await page.getByLabel("Input type", { exact: true }).selectOption({ label: "2.2 kΩ input" });
+  await page.getByRole("radio", { name: "single end-of-line", exact: true }).check();
+  await page.getByRole("radio", { name: "resistor at the detector", exact: true }).check();
+  await page.getByLabel("Each detector has a tamper contact (NC, in series)").check();
+  await page.getByTestId("cable-cores").getByRole("radio", { name: "six-core, alarm, tamper and supply pairs", exact: true }).check();
+  await page.getByTestId("conductor-kind").getByRole("radio", { name: "one core open", exact: true }).check();
+  // six cores offered by colour, the supply pair among them
+  await expect(page.getByTestId("conductor-cores").getByRole("button")).toHaveCount(6);
+  await page.getByTestId("core-red").click();
+  await page.getByTestId("conductor-position").getByRole("radio", { name: "at the detector end", exact: true }).check();
+  await expect(page.getByTestId("conductor-result")).toContainText(/the red core open at the detector end, cutting the detectors' supply/i);
+  // the relay drops to its alarm position: the detector at rest reads as an alarm, not as a fault
+  await expect(page.getByTestId("panel-report")).toHaveText(/^active/);
+  await expect(page.getByTestId("conductor-verdict")).toHaveText("mistaken");
+
+  await page.getByTestId("conductor-kind").getByRole("radio", { name: "short between two cores", exact: true }).check();
+  await page.getByTestId("core-blue").click();
+  await page.getByTestId("core-black").click();
+  await page.getByTestId("detector-state-0").getByRole("radio", { name: "tamper", exact: true }).check();
+  await expect(page.getByTestId("conductor-result")).toContainText(/a short between the blue and black cores at the detector end/i);
+  await expect(page.getByTestId("panel-report")).toHaveText("normal");
+  await expect(page.getByTestId("conductor-verdict")).toHaveText("defeat");
+  await shot(page, "six-core-blue-black");
+});

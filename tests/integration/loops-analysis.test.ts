@@ -63,4 +63,22 @@ describe("loop analysis against the organisation's catalog", () => {
       issues: expect.arrayContaining([{ path: "loop.scheme", message: expect.stringContaining("does not take single end-of-line wiring") }]),
     });
   });
+
+  it("takes a six-core cable's conductor faults and answers each with its rows; a supply core on a two-core cable is a 422", async () => {
+    const { org } = await makeOrganisation();
+    const loop = { scheme: "single-eol", detectors: [{ label: "Rear door", contact: "NC", tamper: true }], tolerancePct: 5, cable: { gauge: { awg: 22 }, lengthM: 80, tempMinC: 0, tempMaxC: 35 } };
+    const body = analyzeRequestSchema.parse({ inputType: "input-2k2", loop: { ...loop, cores: "six-core-alarm-tamper", conductorFaults: [{ kind: "open", core: "black", atM: 80 }, { kind: "short", cores: ["blue", "black"], atM: 0 }] } });
+    const analysis = await analyzeLoopFor(org.id, body);
+    expect(analysis.conductors!.colours).toEqual(["yellow", "blue", "green", "white", "red", "black"]);
+    expect(analysis.conductors!.faults.map((f) => [f.label, f.verdict])).toEqual([
+      ["the black core open at the detector end, cutting the detectors' supply", "mistaken"],
+      ["a short between the blue and black cores at the panel end", "defeat"],
+    ]);
+    // as the request arrives, unparsed: the check runs inside
+    const twoCore = { inputType: "input-2k2", loop: { ...loop, conductorFaults: [{ kind: "open", core: "red", atM: 10 }] } } as unknown as Parameters<typeof analyzeLoopFor>[1];
+    await expect(analyzeLoopFor(org.id, twoCore)).rejects.toMatchObject({
+      status: 422,
+      issues: expect.arrayContaining([{ path: "loop.conductorFaults.0.core", message: expect.stringContaining("there is no red core in a two-core cable") }]),
+    });
+  });
 });

@@ -37,4 +37,17 @@ describe("the loop bench's conductor fault", () => {
       expect([again.minOhms, again.maxOhms, again.reports]).toEqual([r.minOhms, r.maxOhms, r.reports]);
     }
   });
+
+  it("the six-core cable is chosen only where the loop can carry it, and its supply cores can be faulted", () => {
+    const s = { ...settingsFor(t), tamper: true, cable: "six-core-alarm-tamper" as const, lengthM: 25 };
+    const loop = toLoopSpec({ ...s, conductor: { kind: "open", cores: ["red"], position: "detector" } });
+    expect(loop.cores).toBe("six-core-alarm-tamper");
+    expect(loop.conductorFaults).toEqual([{ kind: "open", core: "red", atM: 25 }]);
+    const a = analyzeLoop(loop, t);
+    expect(a.valid).toBe(true);
+    expect(a.conductors!.faults[0].label).toBe("the red core open at the detector end, cutting the detectors' supply");
+    // without tamper contacts, or with the resistor elsewhere, the bench falls back to the pair the placement needs
+    expect(toLoopSpec({ ...s, tamper: false }).cores).toBeUndefined();
+    expect(toLoopSpec({ ...s, placement: "at-panel" }).cores).toBeUndefined();
+  });
 });
