@@ -156,7 +156,10 @@ export function outputDeviceVoltage(l: OutputLoad, feed: SupplyFigures, out: Fin
     out.push({
       code: "output-device-voltage-low",
       severity: "error",
-      message: `${l.device.label} gets ${volts(v.volts)} V in alarm: ${volts(feed.volts)} V less ${drop}, below its minimum of ${volts(l.cat.minVolts)} V`,
+      message:
+        v.volts > 0
+          ? `${l.device.label} gets ${volts(v.volts)} V in alarm: ${volts(feed.volts)} V less ${drop}, below its minimum of ${volts(l.cat.minVolts)} V`
+          : `${l.device.label} gets no usable voltage in alarm: ${drop} is more than the ${volts(feed.volts)} V supply; it needs at least ${volts(l.cat.minVolts)} V`,
       why: "A sounder or strobe below its working voltage sounds weakly or not at all. Use a thicker cable, a shorter run, or an output nearer to it.",
       target,
     });

@@ -3,7 +3,7 @@ import { isLifeSafety } from "@/lib/catalog/life-safety";
 import type { Finding } from "@/lib/findings";
 import { LIFE_SAFETY_CAUTION } from "@/lib/loop";
 import { documentParts, type ZoneProgram } from "@/lib/layout/schema";
-import { plural } from "@/lib/vocabulary/plural";
+import { plural, pluralWord } from "@/lib/vocabulary/plural";
 import { listNames } from "@/lib/solver/format";
 import { ZONE_TYPE_WORDS } from "@/lib/vocabulary/words";
 import { GRADE_SOURCES } from "@/lib/solver/grade-rules";
@@ -69,7 +69,7 @@ export function checkZones(r: Resolved, wireless: WirelessPlaced[], grade: Grade
     for (const k of a.keypadKeys ?? []) {
       const b = r.byKey.get(k);
       if (b?.board?.kind !== "keypad")
-        out.push({ code: "area-keypad-unknown", severity: "error", message: `Area ${a.name} is set from ${b?.name ?? "a keypad not in this layout"}, which is not a keypad`, why: "An area is set and unset from a keypad of this layout.", target: { kind: "layout" } });
+        out.push({ code: "area-keypad-unknown", severity: "error", message: b ? `Area ${a.name} is set from ${b.name}, which is not a keypad` : `Area ${a.name} is set from a keypad that is not in this layout`, why: "An area is set and unset from a keypad of this layout.", target: { kind: "layout" } });
     }
 
   const zones: ZoneFigures[] = [];
@@ -143,14 +143,14 @@ export function checkZones(r: Resolved, wireless: WirelessPlaced[], grade: Grade
     out.push({
       code: "keypad-labels-cut",
       severity: "note",
-      message: `The keypad shows only the first ${panel.zoneLabelLength} characters of ${plural(cutUnprogrammed.length, "zone label")}: ${listNames(cutUnprogrammed)}`,
+      message: `The keypad shows only the first ${panel.zoneLabelLength} characters of the labels of ${plural(cutUnprogrammed.length, "zone")}: ${listNames(cutUnprogrammed)}`,
       why: "Zones not yet programmed take the detector's label; give each a keypad label short enough to read whole.",
       target: { kind: "layout" },
     });
   const zoned = new Set(sources.map((s) => s.detectorId));
   const stray = parts.zones.filter((z) => !zoned.has(z.detectorId)).length;
   if (stray)
-    out.push({ code: "zone-not-placed", severity: "note", message: `${plural(stray, "zone")} programmed for detectors on no input or receiver`, why: "Their programming is kept and used once the detectors are placed.", target: { kind: "layout" } });
+    out.push({ code: "zone-not-placed", severity: "note", message: `${plural(stray, "zone")} ${pluralWord(stray, "is", "are")} programmed for ${pluralWord(stray, "a detector", "detectors")} on no input or receiver`, why: "Their programming is kept and used once the detectors are placed.", target: { kind: "layout" } });
   const areas: AreaFigures[] = parts.areas.map((a) => ({ key: a.key, name: a.name, zones: zones.filter((z) => z.areaKey === a.key).length, keypadKeys: a.keypadKeys ?? [] }));
   return { zones, areas };
 }
