@@ -1,4 +1,5 @@
-import type { OutputBlock, Panel, Sounder, Strobe } from "@/lib/catalog/schema";
+import type { OutputBlock, Sounder, Strobe } from "@/lib/catalog/schema";
+import { outputSlots, panelOutputBlocks, type OutputSlot } from "@/lib/layout/outputs";
 import type { Finding } from "@/lib/findings";
 import { conductorOhms } from "@/lib/loop";
 import { documentParts, PANEL_KEY, type OutputDevice } from "@/lib/layout/schema";
@@ -13,26 +14,6 @@ import type { OutputDeviceVoltage, OutputFigures, SupplyFigures } from "@/lib/so
 
 /** Conductor temperature for the drop: the same hot end as for powered detectors (common practice, no published source). */
 const DROP_TEMP_C = 40;
-
-export interface OutputSlot {
-  boardKey: string;
-  output: number;
-  purpose: OutputBlock["purpose"];
-  switching: OutputBlock["switching"];
-  ratingMa: number;
-}
-
-/** A panel without its own output list has one relay siren output at its siren output rating. */
-export function panelOutputBlocks(panel: Panel): OutputBlock[] {
-  return panel.outputs ?? [{ purpose: "siren", count: 1, switching: "relay", ratingMa: panel.sirenOutputMa }];
-}
-
-/** A board's outputs numbered from 1, siren outputs first (the catalog keeps them first). */
-export function outputSlots(blocks: OutputBlock[], boardKey: string): OutputSlot[] {
-  const out: OutputSlot[] = [];
-  for (const b of blocks) for (let i = 0; i < b.count; i++) out.push({ boardKey, output: out.length + 1, purpose: b.purpose, switching: b.switching, ratingMa: b.ratingMa });
-  return out;
-}
 
 export function boardOutputBlocks(r: Resolved, b: ResolvedBoard): OutputBlock[] {
   if (b.key === PANEL_KEY) return panelOutputBlocks(r.panel);
