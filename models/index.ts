@@ -60,6 +60,7 @@ export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<S
   declare contactPhone: CreationOptional<string>;
   declare contactEmail: CreationOptional<string>;
   declare notes: CreationOptional<string | null>;
+  declare securityGrade: CreationOptional<number | null>;
   declare archivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -161,6 +162,7 @@ export function initModels(sequelize: Sequelize) {
       contactPhone: { type: DataTypes.STRING(60), allowNull: false, defaultValue: "" },
       contactEmail: { type: DataTypes.STRING(254), allowNull: false, defaultValue: "" },
       notes: { type: DataTypes.TEXT, allowNull: true },
+      securityGrade: { type: DataTypes.TINYINT.UNSIGNED, allowNull: true },
       archivedAt: { type: DataTypes.DATE, allowNull: true },
       ...stamps,
     },

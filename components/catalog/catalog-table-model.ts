@@ -24,6 +24,11 @@ const columnKeys: Record<CatalogKind, string[]> = {
   keypads: ["families", "inputs.count", "inputs.inputType", "standbyMa", "alarmMa", "listPrice"],
   powerSupplies: ["families", "outputMa", "outputVolts", "maxBatteryAh", "standbyMa", "alarmMa", "listPrice"],
   detectors: ["category", "contact", "tamper", "power.standbyMa", "power.alarmMa", "power.minVolts", "lifeSafety", "listPrice"],
+  sounders: ["placement", "standbyMa", "alarmMa", "ownBattery.chargingMa", "minVolts", "listPrice"],
+  strobes: ["standbyMa", "alarmMa", "minVolts", "listPrice"],
+  outputModules: ["families", "outputs", "standbyMa", "alarmMa", "listPrice"],
+  wirelessReceivers: ["families", "maxDevices", "standbyMa", "alarmMa", "listPrice"],
+  wirelessDetectors: ["category", "tamper", "batteryYears", "lifeSafety", "listPrice"],
 };
 
 /** Columns of one kind's table, labelled from the figures themselves; a figure no row has is left out. */

@@ -12,7 +12,7 @@ import { isLifeSafety } from "@/lib/solver/resolve";
 /** Sealed lead-acid standby battery sizes the trade stocks, Ah: the solver's list, so the bill and the battery note agree. */
 export const COMMON_BATTERY_AH = STANDARD_BATTERY_AH;
 
-export type BomKind = "panel" | "expansion" | "keypad" | "supply" | "detector" | "resistor" | "battery";
+export type BomKind = "panel" | "expansion" | "keypad" | "supply" | "outputs" | "receiver" | "detector" | "sounder" | "strobe" | "resistor" | "battery";
 
 export interface BomLine {
   kind: BomKind;
@@ -76,11 +76,11 @@ export function billOfMaterials(layout: LayoutDocument, schedule: Schedule, cata
     typeOf.set(b.key, block ? ix.inputTypes.get(block.inputType) : undefined);
   }
 
-  const placed = new Set(result.inputs.flatMap((i) => i.detectorIds));
+  const placed = new Set([...result.inputs.flatMap((i) => i.detectorIds), ...(layout.wireless ?? []).flatMap((w) => w.detectorIds)]);
   let unplaced = 0;
   let lifeSafety = false;
   for (const d of schedule) {
-    const cat = ix.detectors.get(d.catalogId);
+    const cat = ix.detectors.get(d.catalogId) ?? ix.wirelessDetectors.get(d.catalogId);
     if (!cat) {
       notes.push(`${d.label}: its detector type is not in the catalog: left out.`);
       continue;
@@ -88,6 +88,11 @@ export function billOfMaterials(layout: LayoutDocument, schedule: Schedule, cata
     if (isLifeSafety(cat)) lifeSafety = true;
     if (!placed.has(d.id)) unplaced++;
     add(lines, { kind: "detector", key: cat.id, catalogId: cat.id, description: cat.name, quantity: 1, unitPrice: cat.listPrice, note: null });
+  }
+  for (const o of layout.outputDevices ?? []) {
+    const cat = o.kind === "sounder" ? ix.sounders.get(o.catalogId) : ix.strobes.get(o.catalogId);
+    if (!cat) notes.push(`${o.label}: its hardware is not in the catalog: left out.`);
+    else add(lines, { kind: o.kind, key: cat.id, catalogId: cat.id, description: cat.name, quantity: 1, unitPrice: cat.listPrice, note: null });
   }
   if (unplaced) notes.push(`${unplaced} detector${unplaced === 1 ? " is" : "s are"} in the schedule but on no input; counted all the same.`);
 
@@ -131,7 +136,7 @@ export function billOfMaterials(layout: LayoutDocument, schedule: Schedule, cata
   }
   if (lifeSafety) notes.push(BATTERY_FIRE_CAUTION);
 
-  const order: BomKind[] = ["panel", "expansion", "keypad", "supply", "detector", "resistor", "battery"];
+  const order: BomKind[] = ["panel", "expansion", "keypad", "supply", "outputs", "receiver", "detector", "sounder", "strobe", "resistor", "battery"];
   const ohmsOf = (l: BomLine) => (l.kind === "resistor" ? Number(l.key.split("-")[1]) : 0);
   const list = [...lines.values()].sort((a, b) => order.indexOf(a.kind) - order.indexOf(b.kind) || ohmsOf(a) - ohmsOf(b));
   const total = list.reduce((s, l) => s + (l.total ?? 0), 0);

@@ -1,7 +1,7 @@
 // fast-check arbitraries for valid catalogs (test support only).
 import fc from "fast-check";
 import { expectedReadings } from "./expected-readings";
-import type { Band, Catalog, Detector, ExpansionBoard, InputType, Keypad, Panel, PowerSupply, Report, WiringScheme } from "./schema";
+import type { Band, Catalog, Detector, ExpansionBoard, InputType, Keypad, OutputBlock, OutputModule, Panel, PowerSupply, Report, Sounder, Strobe, WiringScheme, WirelessDetector, WirelessReceiver, ZoneType } from "./schema";
 
 const tricky = ["yes", "no", "null", "~", "1e3", "0x10", "- item", "a: b", "# not a comment", "'quoted'", '"dq"', " lead", "trail ", "multi\nline", "tab\there", "[x]", "{y}", "*alias", "&anchor", "!tag", "%", "@", "`", "…", "Ω", "µA", "über", "日本"];
 
@@ -98,6 +98,16 @@ export const inputTypeArb = (id: string): fc.Arbitrary<InputType> =>
 
 const priced = { name: textArb(120, 1), description: textArb(400), listPrice: fc.oneof(int(0, 5000), num(0, 1e6)) };
 const ma = () => fc.oneof(int(0, 3000), num(0, 3000));
+const ZONE_TYPES: ZoneType[] = ["instant", "entry-exit", "24-hour", "hold-up", "fire", "tamper", "technical"];
+const categories = fc.constantFrom<Detector["category"]>("door-contact", "window-contact", "motion", "glass-break", "vibration", "panic", "water", "temperature", "smoke", "heat");
+/** Output blocks as the loader wants them: siren blocks (panels only) before programmable ones. */
+const outputBlocksArb = (sirens: boolean): fc.Arbitrary<OutputBlock[]> =>
+  fc
+    .tuple(
+      sirens ? fc.array(fc.record({ count: int(1, 4), switching: fc.constantFrom<OutputBlock["switching"]>("relay", "transistor"), ratingMa: ma() }), { maxLength: 1 }) : fc.constant([]),
+      fc.array(fc.record({ count: int(1, 16), switching: fc.constantFrom<OutputBlock["switching"]>("relay", "transistor"), ratingMa: ma() }), { minLength: sirens ? 0 : 1, maxLength: 2 }),
+    )
+    .map(([si, pr]) => [...si.map((b) => ({ purpose: "siren" as const, ...b })), ...pr.map((b) => ({ purpose: "programmable" as const, ...b }))]);
 
 export function catalogArb(): fc.Arbitrary<Catalog> {
   return fc
@@ -134,6 +144,10 @@ export function catalogArb(): fc.Arbitrary<Catalog> {
             maxBatteryAh: num(0.5, 100),
             supplyVolts: num(6, 60),
             voltShare: num(0.1, 0.99),
+            outputs: fc.option(outputBlocksArb(true).filter((b) => b.length > 0), { nil: undefined }),
+            maxAreas: fc.option(int(1, 64), { nil: undefined }),
+            zoneLabelLength: fc.option(int(4, 64), { nil: undefined }),
+            zoneTypes: fc.option(fc.subarray(ZONE_TYPES, { minLength: 1 }), { nil: undefined }),
           })
           .map((r) => ({
             id: idFor("panel", i, s.raw[5 + i]),
@@ -151,6 +165,10 @@ export function catalogArb(): fc.Arbitrary<Catalog> {
             maxBatteryAh: r.maxBatteryAh,
             supplyVolts: r.supplyVolts,
             minDeviceVolts: r.supplyVolts * r.voltShare,
+            ...(r.outputs ? { outputs: r.outputs } : {}),
+            ...(r.maxAreas ? { maxAreas: r.maxAreas } : {}),
+            ...(r.zoneLabelLength ? { zoneLabelLength: r.zoneLabelLength } : {}),
+            ...(r.zoneTypes ? { zoneTypes: r.zoneTypes } : {}),
           }));
       // every family must belong to some panel: the first panels take the families in turn
       const nPanels = Math.max(s.nPanels, s.families.length);
@@ -178,6 +196,20 @@ export function catalogArb(): fc.Arbitrary<Catalog> {
             mounting: textArb(200, 1),
           })
           .map((r) => ({ id: idFor("det", i, s.raw[18 + (i % 2)]), ...r, lifeSafety: r.category === "smoke" || r.category === "heat" ? true : r.lifeSafety }));
+      const drawArb = { standbyMa: ma(), alarmMa: ma(), minVolts: num(1, 60) };
+      const sounder = (i: number): fc.Arbitrary<Sounder> =>
+        fc
+          .record({ ...priced, placement: fc.constantFrom<Sounder["placement"]>("internal", "external"), ...drawArb, charging: fc.option(ma(), { nil: undefined }), mounting: textArb(200, 1) })
+          .map(({ charging, ...r }) => ({ id: idFor("snd", i, s.raw[i]), ...r, ...(charging !== undefined && r.placement === "external" ? { ownBattery: { chargingMa: charging } } : {}) }));
+      const strobe = (i: number): fc.Arbitrary<Strobe> => fc.record({ ...priced, ...drawArb, mounting: textArb(200, 1) }).map((r) => ({ id: idFor("stb", i, s.raw[2 + i]), ...r }));
+      const outputModule = (i: number): fc.Arbitrary<OutputModule> =>
+        fc.record({ ...priced, families: fams(i + 4), outputs: outputBlocksArb(false), standbyMa: ma(), alarmMa: ma(), takesBusAddress: fc.boolean() }).map((r) => ({ id: idFor("omod", i, s.raw[4 + i]), ...r }));
+      const receiver = (i: number): fc.Arbitrary<WirelessReceiver> =>
+        fc.record({ ...priced, families: fams(i + 5), maxDevices: int(1, 256), standbyMa: ma(), alarmMa: ma(), takesBusAddress: fc.boolean() }).map((r) => ({ id: idFor("rcv", i, s.raw[6 + i]), ...r }));
+      const wirelessDetector = (i: number): fc.Arbitrary<WirelessDetector> =>
+        fc
+          .record({ ...priced, category: categories, lifeSafety: fc.boolean(), tamper: fc.boolean(), batteryYears: num(0.1, 20), mounting: textArb(200, 1) })
+          .map((r) => ({ id: idFor("wdet", i, s.raw[8 + i]), ...r, lifeSafety: r.category === "smoke" || r.category === "heat" ? true : r.lifeSafety }));
       const many = <T>(n: number, f: (i: number) => fc.Arbitrary<T>) => fc.tuple(...Array.from({ length: n }, (_, i) => f(i)));
       return fc
         .record({
@@ -187,6 +219,11 @@ export function catalogArb(): fc.Arbitrary<Catalog> {
           keypads: many(s.nKeypads, keypad),
           powerSupplies: many(s.nPsus, psu),
           detectors: many(s.nDetectors, detector),
+          sounders: many(s.seed[0] % 3, sounder),
+          strobes: many(s.seed[1] % 2, strobe),
+          outputModules: many(s.seed[2] % 2, outputModule),
+          wirelessReceivers: many(s.seed[3] % 2, receiver),
+          wirelessDetectors: many(s.seed[4] % 3, wirelessDetector),
         })
         .map((c) => c as Catalog);
     });

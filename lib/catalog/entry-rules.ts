@@ -1,6 +1,6 @@
 import type { CatalogPath } from "./errors";
 import { expectedReadings, type ExpectedReading } from "./expected-readings";
-import type { Band, CatalogKind, Detector, InputType, Panel, WiringScheme } from "./schema";
+import type { Band, CatalogKind, Detector, ExpansionBoard, InputType, OutputBlock, OutputModule, Panel, Sounder, WiringScheme, WirelessDetector } from "./schema";
 
 /** A rule broken by one entry. `path` is the field at fault; `at` where to point in the file if it differs (a missing field). */
 export interface EntryIssue {
@@ -99,7 +99,35 @@ export function panelIssues(p: Panel): EntryIssue[] {
     issues.push({ path: ["minDeviceVolts"], message: `minDeviceVolts (${p.minDeviceVolts} V) must be below supplyVolts (${p.supplyVolts} V)` });
   if (p.maxZones < p.onboardInputs.count)
     issues.push({ path: ["maxZones"], message: `maxZones (${p.maxZones}) is below the ${p.onboardInputs.count} on-board inputs` });
+  if (p.outputs) issues.push(...outputBlockIssues(p.outputs));
+  p.zoneTypes?.forEach((t, i) => {
+    if (p.zoneTypes!.indexOf(t) !== i) issues.push({ path: ["zoneTypes", i], message: `zone type "${t}" is listed twice` });
+  });
   return issues;
+}
+
+/** Siren outputs come first, so outputs number the same way on the panel, the sheet and the editor. */
+function outputBlockIssues(blocks: OutputBlock[], sirenAllowed = true): EntryIssue[] {
+  const issues: EntryIssue[] = [];
+  let programmableSeen = false;
+  blocks.forEach((b, i) => {
+    if (b.purpose === "siren" && !sirenAllowed) issues.push({ path: ["outputs", i, "purpose"], message: "only a control panel has siren outputs; list these as programmable" });
+    else if (b.purpose === "siren" && programmableSeen) issues.push({ path: ["outputs", i, "purpose"], message: "list siren outputs before programmable outputs" });
+    if (b.purpose === "programmable") programmableSeen = true;
+  });
+  return issues;
+}
+
+export function sounderIssues(s: Sounder): EntryIssue[] {
+  // An internal sounder runs from the system's own battery; only an external one carries a battery of its own.
+  if (s.ownBattery && s.placement === "internal") return [{ path: ["ownBattery"], message: "only an external sounder carries its own battery" }];
+  return [];
+}
+
+export function wirelessDetectorIssues(d: WirelessDetector): EntryIssue[] {
+  if ((d.category === "smoke" || d.category === "heat") && !d.lifeSafety)
+    return [{ path: ["lifeSafety"], message: `a ${d.category} detector is a life-safety device: lifeSafety must be true` }];
+  return [];
 }
 
 export function detectorIssues(d: Detector): EntryIssue[] {
@@ -118,6 +146,14 @@ export function entryIssues(kind: CatalogKind, entry: unknown): EntryIssue[] {
       return panelIssues(entry as Panel);
     case "detectors":
       return detectorIssues(entry as Detector);
+    case "expansionBoards":
+      return (entry as ExpansionBoard).outputs ? outputBlockIssues((entry as ExpansionBoard).outputs!, false) : [];
+    case "outputModules":
+      return outputBlockIssues((entry as OutputModule).outputs, false);
+    case "sounders":
+      return sounderIssues(entry as Sounder);
+    case "wirelessDetectors":
+      return wirelessDetectorIssues(entry as WirelessDetector);
     default:
       return [];
   }

@@ -1,6 +1,6 @@
 import { kindLabel } from "./kinds";
 import { CATEGORY_WORDS, SCHEME_WORDS } from "@/lib/vocabulary/words";
-import { catalogKinds, type Catalog, type CatalogKind, type Detector, type ExpansionBoard, type InputType, type Keypad, type Panel, type PowerSupply } from "./schema";
+import { catalogKinds, type Catalog, type CatalogKind, type Detector, type ExpansionBoard, type InputType, type Keypad, type OutputBlock, type OutputModule, type Panel, type PowerSupply, type Sounder, type Strobe, type WirelessDetector, type WirelessReceiver } from "./schema";
 
 /** One figure of an entry for a table cell: `key` is the schema field it comes from. */
 export interface Figure {
@@ -50,6 +50,46 @@ function panelFigures(p: Panel): Figure[] {
     f("maxBatteryAh", "Max standby battery", p.maxBatteryAh, "Ah"),
     f("supplyVolts", "Supply", p.supplyVolts, "V"),
     f("minDeviceVolts", "Min device voltage", p.minDeviceVolts, "V"),
+    f("outputs", "Outputs", outputsText(p.outputs ?? [{ purpose: "siren", count: 1, switching: "relay", ratingMa: p.sirenOutputMa }])),
+    f("maxAreas", "Max areas", p.maxAreas ?? 1),
+    ...(p.zoneLabelLength ? [f("zoneLabelLength", "Keypad label length", p.zoneLabelLength, "characters")] : []),
+  ];
+}
+
+/** "1 siren relay 1000 mA; 4 programmable transistor 100 mA" */
+export function outputsText(blocks: OutputBlock[]): string {
+  return blocks.map((b) => `${b.count} ${b.purpose} ${b.switching} ${b.ratingMa} mA`).join("; ");
+}
+
+const drawFigures = (e: { standbyMa: number; alarmMa: number; minVolts: number }) => [
+  f("standbyMa", "Standby draw", e.standbyMa, "mA"),
+  f("alarmMa", "Alarm draw", e.alarmMa, "mA"),
+  f("minVolts", "Min voltage", e.minVolts, "V"),
+];
+
+function sounderFigures(s: Sounder): Figure[] {
+  return [f("placement", "Placement", s.placement), ...drawFigures(s), f("ownBattery.chargingMa", "Own battery charging", s.ownBattery ? s.ownBattery.chargingMa : "none", s.ownBattery ? "mA" : ""), f("mounting", "Mounting", s.mounting)];
+}
+
+function strobeFigures(s: Strobe): Figure[] {
+  return [...drawFigures(s), f("mounting", "Mounting", s.mounting)];
+}
+
+function outputModuleFigures(m: OutputModule): Figure[] {
+  return [f("families", "Families", m.families.join(", ")), f("outputs", "Outputs", outputsText(m.outputs)), ...busFigures(m)];
+}
+
+function receiverFigures(r: WirelessReceiver): Figure[] {
+  return [f("families", "Families", r.families.join(", ")), f("maxDevices", "Wireless detectors", r.maxDevices), ...busFigures(r)];
+}
+
+function wirelessDetectorFigures(d: WirelessDetector): Figure[] {
+  return [
+    f("category", "Category", CATEGORY_WORDS[d.category]),
+    f("tamper", "Tamper", yesNo(d.tamper)),
+    f("lifeSafety", "Life-safety device", yesNo(d.lifeSafety)),
+    f("batteryYears", "Battery life", d.batteryYears, "years"),
+    f("mounting", "Mounting", d.mounting),
   ];
 }
 
@@ -61,6 +101,7 @@ const busFigures = (e: { standbyMa: number; alarmMa: number; takesBusAddress: bo
 
 function boardFigures(b: ExpansionBoard): Figure[] {
   const out = [f("families", "Families", b.families.join(", ")), f("inputs.count", "Inputs", b.inputs.count), f("inputs.inputType", "Input type", b.inputs.inputType), ...busFigures(b)];
+  if (b.outputs) out.push(f("outputs", "Outputs", outputsText(b.outputs)));
   if (b.ownSupply) out.push(f("ownSupply.outputMa", "Own supply output", b.ownSupply.outputMa, "mA"), f("ownSupply.maxBatteryAh", "Own max battery", b.ownSupply.maxBatteryAh, "Ah"));
   return out;
 }
@@ -110,6 +151,16 @@ export function entryFigures(kind: CatalogKind, entry: Catalog[CatalogKind][numb
       return powerSupplyFigures(entry as PowerSupply);
     case "detectors":
       return detectorFigures(entry as Detector);
+    case "sounders":
+      return sounderFigures(entry as Sounder);
+    case "strobes":
+      return strobeFigures(entry as Strobe);
+    case "outputModules":
+      return outputModuleFigures(entry as OutputModule);
+    case "wirelessReceivers":
+      return receiverFigures(entry as WirelessReceiver);
+    case "wirelessDetectors":
+      return wirelessDetectorFigures(entry as WirelessDetector);
   }
 }
 

@@ -8,6 +8,11 @@ export const kindLabel: Record<CatalogKind, string> = {
   keypads: "keypad",
   powerSupplies: "power supply",
   detectors: "detector",
+  sounders: "sounder",
+  strobes: "strobe",
+  outputModules: "output module",
+  wirelessReceivers: "wireless receiver",
+  wirelessDetectors: "wireless detector",
 };
 
 /** Plural headings for each kind. */
@@ -18,4 +23,9 @@ export const kindHeading: Record<CatalogKind, string> = {
   keypads: "Keypads",
   powerSupplies: "Power supplies",
   detectors: "Detectors",
+  sounders: "Sounders",
+  strobes: "Strobes and beacons",
+  outputModules: "Output modules",
+  wirelessReceivers: "Wireless receivers",
+  wirelessDetectors: "Wireless detectors",
 };

@@ -14,7 +14,7 @@ export function isLifeSafety(d: Pick<Detector, "lifeSafety" | "category">): bool
  */
 export function isLifeSafetyEntry(catalog: Catalog, kind: CatalogKind, entry: CatalogEntry): boolean {
   const fireInput = (id: string | undefined) => !!id && catalog.inputTypes.some((t) => t.id === id && t.lifeSafety);
-  if (kind === "detectors" && "category" in entry) return isLifeSafety(entry);
+  if ((kind === "detectors" || kind === "wirelessDetectors") && "category" in entry) return isLifeSafety(entry);
   if (kind === "inputTypes") return "lifeSafety" in entry && entry.lifeSafety === true;
   if (kind === "panels" && "onboardInputs" in entry) return fireInput(entry.onboardInputs.inputType);
   if ((kind === "expansionBoards" || kind === "keypads") && "inputs" in entry) return fireInput(entry.inputs?.inputType);

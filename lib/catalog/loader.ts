@@ -14,8 +14,13 @@ import {
   type ExpansionBoard,
   type InputType,
   type Keypad,
+  type OutputModule,
   type Panel,
   type PowerSupply,
+  type Sounder,
+  type Strobe,
+  type WirelessDetector,
+  type WirelessReceiver,
 } from "./schema";
 
 export { catalogDiff, type CatalogDiff, type ChangedEntry } from "./diff";
@@ -55,6 +60,11 @@ interface EntryTypes {
   keypads: Keypad;
   powerSupplies: PowerSupply;
   detectors: Detector;
+  sounders: Sounder;
+  strobes: Strobe;
+  outputModules: OutputModule;
+  wirelessReceivers: WirelessReceiver;
+  wirelessDetectors: WirelessDetector;
 }
 export type CatalogEntry = EntryTypes[CatalogKind];
 export type FoundEntry = { [K in CatalogKind]: { kind: K; entry: EntryTypes[K] } }[CatalogKind];
@@ -159,7 +169,7 @@ function locatedFrom(sources: CatalogSource[]): LocatedEntry[] {
 }
 
 function assemble(entries: LocatedEntry[]): Catalog {
-  const c: Catalog = { inputTypes: [], panels: [], expansionBoards: [], keypads: [], powerSupplies: [], detectors: [] };
+  const c = Object.fromEntries(catalogKinds.map((k) => [k, []])) as unknown as Catalog;
   for (const e of entries) (c[e.kind] as CatalogEntry[]).push(e.entry);
   return c;
 }
@@ -192,8 +202,8 @@ function validateLocated(entries: LocatedEntry[], opts: { references: boolean })
         const block = (e.entry as Keypad).inputs;
         if (block) inputRef(e, ["inputs", "inputType"], block.inputType);
       }
-      if (e.kind === "expansionBoards" || e.kind === "keypads" || e.kind === "powerSupplies")
-        (e.entry as ExpansionBoard | Keypad | PowerSupply).families.forEach((f, i) => {
+      if (e.kind === "expansionBoards" || e.kind === "keypads" || e.kind === "powerSupplies" || e.kind === "outputModules" || e.kind === "wirelessReceivers")
+        (e.entry as ExpansionBoard | Keypad | PowerSupply | OutputModule | WirelessReceiver).families.forEach((f, i) => {
           if (!families.has(f)) err(e, ["families", i], `no control panel in the catalog is of family "${f}"`);
         });
     }

@@ -78,6 +78,23 @@ const priced = {
 
 export const inputBlockSchema = z.strictObject({ count: z.number().int().min(1).max(256), inputType: idSchema });
 
+/** Zone types (trade words): what the panel does when a zone's detector reports. */
+export const zoneTypeSchema = z.enum(["instant", "entry-exit", "24-hour", "hold-up", "fire", "tamper", "technical"]);
+export type ZoneType = z.infer<typeof zoneTypeSchema>;
+
+/** How an output switches its load: a relay contact or a transistor (open-collector) stage. */
+export const outputSwitchingSchema = z.enum(["relay", "transistor"]);
+export type OutputSwitching = z.infer<typeof outputSwitchingSchema>;
+
+/** A block of outputs alike: the siren output(s) or programmable outputs, each rated `ratingMa`. */
+export const outputBlockSchema = z.strictObject({
+  purpose: z.enum(["siren", "programmable"]),
+  count: z.number().int().min(1).max(64),
+  switching: outputSwitchingSchema,
+  ratingMa: milliamps,
+});
+export type OutputBlock = z.infer<typeof outputBlockSchema>;
+
 export const panelSchema = z.strictObject({
   ...priced,
   family: idSchema,
@@ -98,6 +115,14 @@ export const panelSchema = z.strictObject({
   minDeviceVolts: z.number().positive().max(60),
   /** Battery voltage at the end of the standby period; default `defaultEndOfDischargeVolts(supplyVolts)`. */
   endOfDischargeVolts: z.number().positive().max(60).optional(),
+  /** The panel's own outputs, siren first; absent means one relay siren output rated `sirenOutputMa`. */
+  outputs: z.array(outputBlockSchema).max(8).optional(),
+  /** Areas the panel sets and unsets apart; absent means 1. */
+  maxAreas: z.number().int().min(1).max(64).optional(),
+  /** Characters of a zone's name the keypad shows; absent means the label is not checked. */
+  zoneLabelLength: z.number().int().min(4).max(64).optional(),
+  /** Zone types the panel offers; absent means all. */
+  zoneTypes: z.array(zoneTypeSchema).min(1).optional(),
 });
 export type Panel = z.infer<typeof panelSchema>;
 
@@ -121,6 +146,8 @@ export const expansionBoardSchema = z.strictObject({
   alarmMa: milliamps,
   takesBusAddress: z.boolean(),
   ownSupply: ownSupplySchema.optional(),
+  /** Programmable outputs on the board, if any. */
+  outputs: z.array(outputBlockSchema).max(8).optional(),
 });
 export type ExpansionBoard = z.infer<typeof expansionBoardSchema>;
 
@@ -178,6 +205,63 @@ export const detectorSchema = z.strictObject({
 });
 export type Detector = z.infer<typeof detectorSchema>;
 
+const deviceDraw = {
+  /** Drawn from the output at rest and in alarm. */
+  standbyMa: milliamps,
+  alarmMa: milliamps,
+  minVolts: z.number().positive().max(60),
+};
+
+export const sounderSchema = z.strictObject({
+  ...priced,
+  placement: z.enum(["internal", "external"]),
+  ...deviceDraw,
+  /** An external sounder with its own standby battery, charged from the output at rest. */
+  ownBattery: z.strictObject({ chargingMa: milliamps }).optional(),
+  mounting: z.string().min(1).max(200),
+});
+export type Sounder = z.infer<typeof sounderSchema>;
+
+export const strobeSchema = z.strictObject({
+  ...priced,
+  ...deviceDraw,
+  mounting: z.string().min(1).max(200),
+});
+export type Strobe = z.infer<typeof strobeSchema>;
+
+export const outputModuleSchema = z.strictObject({
+  ...priced,
+  families: z.array(idSchema).min(1),
+  outputs: z.array(outputBlockSchema).min(1).max(8),
+  standbyMa: milliamps,
+  alarmMa: milliamps,
+  takesBusAddress: z.boolean(),
+});
+export type OutputModule = z.infer<typeof outputModuleSchema>;
+
+export const wirelessReceiverSchema = z.strictObject({
+  ...priced,
+  families: z.array(idSchema).min(1),
+  /** Wireless detectors it can learn. */
+  maxDevices: z.number().int().min(1).max(256),
+  standbyMa: milliamps,
+  alarmMa: milliamps,
+  takesBusAddress: z.boolean(),
+});
+export type WirelessReceiver = z.infer<typeof wirelessReceiverSchema>;
+
+/** A battery-powered detector reporting by radio to a wireless receiver: no loop, no current from the system. */
+export const wirelessDetectorSchema = z.strictObject({
+  ...priced,
+  category: detectorCategorySchema,
+  lifeSafety: z.boolean(),
+  tamper: z.boolean(),
+  /** Years on one set of cells, at the maker's stated use. */
+  batteryYears: z.number().positive().max(20),
+  mounting: z.string().min(1).max(200),
+});
+export type WirelessDetector = z.infer<typeof wirelessDetectorSchema>;
+
 export const catalogFileSchema = z.strictObject({
   inputTypes: z.array(inputTypeSchema).default([]),
   panels: z.array(panelSchema).default([]),
@@ -185,10 +269,32 @@ export const catalogFileSchema = z.strictObject({
   keypads: z.array(keypadSchema).default([]),
   powerSupplies: z.array(powerSupplySchema).default([]),
   detectors: z.array(detectorSchema).default([]),
+  sounders: z.array(sounderSchema).default([]),
+  strobes: z.array(strobeSchema).default([]),
+  outputModules: z.array(outputModuleSchema).default([]),
+  wirelessReceivers: z.array(wirelessReceiverSchema).default([]),
+  wirelessDetectors: z.array(wirelessDetectorSchema).default([]),
 });
 export type CatalogFile = z.infer<typeof catalogFileSchema>;
 
 /** A whole validated catalog (the shipped files merged, or shipped + an organisation's upload). */
 export type Catalog = CatalogFile;
-export const catalogKinds = ["inputTypes", "panels", "expansionBoards", "keypads", "powerSupplies", "detectors"] as const;
+export const catalogKinds = [
+  "inputTypes",
+  "panels",
+  "expansionBoards",
+  "keypads",
+  "powerSupplies",
+  "detectors",
+  "sounders",
+  "strobes",
+  "outputModules",
+  "wirelessReceivers",
+  "wirelessDetectors",
+] as const;
 export type CatalogKind = (typeof catalogKinds)[number];
+
+/** A catalog stored before a kind existed (a frozen revision's copy) with every kind's list present. */
+export function completeCatalog(c: Partial<Catalog>): Catalog {
+  return Object.fromEntries(catalogKinds.map((k) => [k, c[k] ?? []])) as unknown as Catalog;
+}

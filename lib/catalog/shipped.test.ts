@@ -27,7 +27,7 @@ describe("the shipped catalog", () => {
     const r = loadShippedCatalog();
     expect(r.ok ? [] : r.errors).toEqual([]);
     expect(validateCatalog(catalog, sources)).toEqual([]);
-    expect(sources.map((s) => s.fileName)).toEqual(["detectors.yaml", "family-compact.yaml", "family-large.yaml", "family-mid.yaml", "input-types.yaml"]);
+    expect(sources.map((s) => s.fileName)).toEqual(["detectors.yaml", "family-compact.yaml", "family-large.yaml", "family-mid.yaml", "input-types.yaml", "sounders-outputs-wireless.yaml"]);
     clearShippedCatalogCache();
     expect(loadShippedCatalog().ok).toBe(true);
   });

@@ -1,4 +1,4 @@
-import type { Catalog, Detector, ExpansionBoard, InputType, Keypad, Panel, PowerSupply } from "@/lib/catalog/schema";
+import type { Catalog, Detector, ExpansionBoard, InputType, Keypad, OutputModule, Panel, PowerSupply, Sounder, Strobe, WirelessDetector, WirelessReceiver } from "@/lib/catalog/schema";
 import type { BoardKind } from "@/lib/layout/schema";
 
 // Id lookups over a catalog, built once per catalog object.
@@ -11,19 +11,27 @@ export interface CatalogIndex {
   keypads: Map<string, Keypad>;
   powerSupplies: Map<string, PowerSupply>;
   detectors: Map<string, Detector>;
+  sounders: Map<string, Sounder>;
+  strobes: Map<string, Strobe>;
+  outputModules: Map<string, OutputModule>;
+  wirelessReceivers: Map<string, WirelessReceiver>;
+  wirelessDetectors: Map<string, WirelessDetector>;
 }
 
 export type BoardEntry =
   | { kind: "expansion"; entry: ExpansionBoard }
   | { kind: "keypad"; entry: Keypad }
-  | { kind: "supply"; entry: PowerSupply };
+  | { kind: "supply"; entry: PowerSupply }
+  | { kind: "outputs"; entry: OutputModule }
+  | { kind: "receiver"; entry: WirelessReceiver };
 
 const cache = new WeakMap<Catalog, CatalogIndex>();
 
 export function indexCatalog(catalog: Catalog): CatalogIndex {
   let ix = cache.get(catalog);
   if (!ix) {
-    const byId = <T extends { id: string }>(xs: T[]) => new Map(xs.map((x) => [x.id, x]));
+    // a frozen revision's catalog may predate a kind: its list is then absent
+    const byId = <T extends { id: string }>(xs: T[] | undefined) => new Map((xs ?? []).map((x) => [x.id, x]));
     ix = {
       catalog,
       inputTypes: byId(catalog.inputTypes),
@@ -32,6 +40,11 @@ export function indexCatalog(catalog: Catalog): CatalogIndex {
       keypads: byId(catalog.keypads),
       powerSupplies: byId(catalog.powerSupplies),
       detectors: byId(catalog.detectors),
+      sounders: byId(catalog.sounders),
+      strobes: byId(catalog.strobes),
+      outputModules: byId(catalog.outputModules),
+      wirelessReceivers: byId(catalog.wirelessReceivers),
+      wirelessDetectors: byId(catalog.wirelessDetectors),
     };
     cache.set(catalog, ix);
   }
@@ -47,12 +60,20 @@ export function boardEntry(ix: CatalogIndex, kind: BoardKind, catalogId: string)
     const entry = ix.keypads.get(catalogId);
     return entry ? { kind, entry } : null;
   }
+  if (kind === "outputs") {
+    const entry = ix.outputModules.get(catalogId);
+    return entry ? { kind, entry } : null;
+  }
+  if (kind === "receiver") {
+    const entry = ix.wirelessReceivers.get(catalogId);
+    return entry ? { kind, entry } : null;
+  }
   const entry = ix.powerSupplies.get(catalogId);
   return entry ? { kind, entry } : null;
 }
 
 /** The input block of a board: expansion boards always, keypads sometimes, supplies never. */
 export function boardInputs(b: BoardEntry): { count: number; inputType: string } | null {
-  if (b.kind === "supply") return null;
+  if (b.kind === "supply" || b.kind === "outputs" || b.kind === "receiver") return null;
   return b.entry.inputs ?? null;
 }

@@ -2,7 +2,7 @@ import { PANEL_KEY, type BoardKind, type InputRef, type LayoutDocument } from "@
 
 // Human names for boards and inputs, used in announcements, findings and terminal sheets.
 
-const kindWords: Record<BoardKind, string> = { expansion: "Expansion board", keypad: "Keypad", supply: "Power supply" };
+const kindWords: Record<BoardKind, string> = { expansion: "Expansion board", keypad: "Keypad", supply: "Power supply", outputs: "Output module", receiver: "Wireless receiver" };
 
 /** A board's label, else "<kind> <n>" numbered among boards of the same kind in list order. */
 export function boardName(doc: Pick<LayoutDocument, "boards">, boardKey: string): string {
@@ -17,7 +17,7 @@ export function boardName(doc: Pick<LayoutDocument, "boards">, boardKey: string)
 
 /** All board names at once (list order), for callers naming many inputs. */
 export function boardNames(doc: Pick<LayoutDocument, "boards">): Map<string, string> {
-  const counts: Record<BoardKind, number> = { expansion: 0, keypad: 0, supply: 0 };
+  const counts: Record<BoardKind, number> = { expansion: 0, keypad: 0, supply: 0, outputs: 0, receiver: 0 };
   const names = new Map<string, string>([[PANEL_KEY, "Control panel"]]);
   for (const b of doc.boards) {
     counts[b.kind]++;

@@ -219,7 +219,10 @@ export function removeBoard(doc: LayoutDocument, ctx: LayoutContext, boardKey: s
   const parts = [`${name} removed`];
   if (freed) parts.push(`${plural(freed, "detector")} back to unplaced`);
   if (repowered) parts.push(`${plural(repowered, "board")} now on the panel's auxiliary output`);
-  return done({ ...doc, boards, inputs: doc.inputs.filter((i) => i.boardKey !== boardKey) }, parts.join("; "));
+  // sounders and strobes on its outputs go back to no output; wireless detectors it learnt back to unplaced
+  const outputs = doc.outputs?.filter((o) => o.boardKey !== boardKey);
+  const wireless = doc.wireless?.filter((w) => w.boardKey !== boardKey);
+  return done({ ...doc, boards, inputs: doc.inputs.filter((i) => i.boardKey !== boardKey), ...(outputs ? { outputs } : {}), ...(wireless ? { wireless } : {}) }, parts.join("; "));
 }
 
 /** Move the board at `fromIndex` to `toIndex` in the board list. */

@@ -36,7 +36,7 @@ function parseNumber(s: string): number | null {
  * Parse a schedule. Every problem is reported with its row and column; rows with errors are left out of `rows`.
  * Nothing is accepted here: the caller decides what to do when `errors` is not empty.
  */
-export function parseScheduleCsv(text: string, catalog: Pick<Catalog, "detectors">): ScheduleCsvParse {
+export function parseScheduleCsv(text: string, catalog: Pick<Catalog, "detectors"> & Partial<Pick<Catalog, "wirelessDetectors">>): ScheduleCsvParse {
   const out: ScheduleCsvParse = { rows: [], rowNumbers: [], errors: [] };
   const { records, error } = readCsv(text);
   if (error) {
@@ -58,7 +58,7 @@ export function parseScheduleCsv(text: string, catalog: Pick<Catalog, "detectors
   for (const c of required) if (!index.has(c)) out.errors.push({ row: 1, column: c, message: `the header has no ${c} column` });
   if (out.errors.length) return out;
 
-  const detectorById = new Map(catalog.detectors.map((d) => [d.id, d]));
+  const detectorById = new Map([...catalog.detectors, ...(catalog.wirelessDetectors ?? [])].map((d) => [d.id, d]));
   records.slice(1).forEach((rec, k) => {
     const row = k + 2;
     if (rec.every((f) => f.trim() === "")) return; // blank line

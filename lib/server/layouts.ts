@@ -12,7 +12,8 @@ import { isLifeSafety } from "@/lib/catalog/life-safety";
 import type { Catalog } from "@/lib/catalog/schema";
 import { boardEntry, indexCatalog } from "@/lib/layout/catalog-index";
 import { boardName } from "@/lib/layout/names";
-import { layoutDocumentSchema, type LayoutDocument } from "@/lib/layout/schema";
+import { layoutDocumentSchema, type LayoutDocument, type SecurityGrade } from "@/lib/layout/schema";
+import { standbyProfileForGrade } from "@/lib/solver/grade-rules";
 import type { CreateLayoutInput, SaveLayoutInput, SuggestRequest } from "@/lib/layout/layout-request-schema";
 import type { Schedule } from "@/lib/schedule/schema";
 import { solveLayout, type Suggestion } from "@/lib/solver";
@@ -73,6 +74,18 @@ export function referenceIssues(doc: LayoutDocument, schedule: Schedule, catalog
       if (!ids.has(d)) issues.push({ path: `document.inputs.${i}.detectorIds.${j}`, message: `detector ${d} is not in this site's device schedule` });
     }),
   );
+  doc.wireless?.forEach((w, i) =>
+    w.detectorIds.forEach((d, j) => {
+      if (!ids.has(d)) issues.push({ path: `document.wireless.${i}.detectorIds.${j}`, message: `detector ${d} is not in this site's device schedule` });
+    }),
+  );
+  doc.zones?.forEach((z, i) => {
+    if (!ids.has(z.detectorId)) issues.push({ path: `document.zones.${i}.detectorId`, message: `detector ${z.detectorId} is not in this site's device schedule` });
+  });
+  doc.outputDevices?.forEach((o, i) => {
+    const known = o.kind === "sounder" ? ix.sounders.has(o.catalogId) : ix.strobes.has(o.catalogId);
+    if (!known) issues.push({ path: `document.outputDevices.${i}.catalogId`, message: `${o.label}: no ${o.kind} ${o.catalogId} in the catalog` });
+  });
   return issues;
 }
 
@@ -153,13 +166,15 @@ export async function loadLayoutForEditor(actor: Actor, layoutId: number): Promi
 }
 
 /** A blank layout on a panel, with the standby profile the schedule calls for. */
-export function blankDocument(panelId: string, schedule: Schedule, catalog: Catalog): LayoutDocument {
+/** A layout with nothing placed. With the site's grade, it carries that grade and an intruder system sizes its battery for it. */
+export function blankDocument(panelId: string, schedule: Schedule, catalog: Catalog, grade: SecurityGrade | null = null): LayoutDocument {
   const ix = indexCatalog(catalog);
   const fire = schedule.some((d) => {
     const c = ix.detectors.get(d.catalogId);
     return !!c && isLifeSafety(c);
   });
-  return { panelId, boards: [], inputs: [], power: fire ? { standbyProfileId: "nfpa72-fire", safetyFactor: 1.25 } : { standbyProfileId: "intruder-grade-2", safetyFactor: 1.2 }, busCableM: 0 };
+  const power = fire ? { standbyProfileId: "nfpa72-fire", safetyFactor: 1.25 } : { standbyProfileId: grade ? standbyProfileForGrade(grade) : "intruder-grade-2", safetyFactor: 1.2 };
+  return { panelId, boards: [], inputs: [], power, busCableM: 0, ...(grade ? { grade } : {}) };
 }
 
 async function insertLayout(actor: Actor, siteId: number, name: string, document: LayoutDocument, summary: LayoutSolveSummary, note: string, detail: Record<string, unknown>): Promise<LayoutMeta> {
@@ -173,7 +188,8 @@ async function insertLayout(actor: Actor, siteId: number, name: string, document
 
 export async function createLayout(actor: Actor, siteId: number, input: CreateLayoutInput): Promise<LayoutView> {
   ensureCan(actor, "layout:write");
-  await findSite(actor, siteId);
+  const site = await findSite(actor, siteId);
+  const grade = (site.securityGrade ?? null) as SecurityGrade | null;
   const [schedule, catalog] = await Promise.all([loadSchedule(siteId), catalogFor(actor.organisationId)]);
   let document: LayoutDocument;
   let from: string;
@@ -181,12 +197,12 @@ export async function createLayout(actor: Actor, siteId: number, input: CreateLa
     document = input.document;
     from = "document";
   } else if ("panelId" in input) {
-    document = blankDocument(input.panelId, schedule, catalog);
+    document = blankDocument(input.panelId, schedule, catalog, grade);
     from = "blank";
   } else {
     const s = await suggestOffLoop(schedule, catalog, { allowShared: input.suggestion.allowShared, busCableM: input.suggestion.busCableM, pathway: input.suggestion.pathway });
     if (!s.found) throw new ApiError(422, `No suggestion: ${s.reason}`);
-    document = s.layout;
+    document = grade ? { ...s.layout, grade } : s.layout;
     from = input.suggestion.allowShared ? "suggestion-shared" : "suggestion-single";
   }
   checkReferences(document, schedule, catalog);

@@ -53,7 +53,8 @@ export async function listSchedule(actor: Actor, siteId: number): Promise<Schedu
 }
 
 function checkCatalogIds(catalog: Catalog, ids: { path: string; catalogId: string }[]) {
-  const known = new Set(catalog.detectors.map((d) => d.id));
+  // wireless detectors are in the schedule too: a receiver learns them instead of an input
+  const known = new Set([...catalog.detectors, ...(catalog.wirelessDetectors ?? [])].map((d) => d.id));
   const issues = ids.filter((x) => !known.has(x.catalogId)).map((x) => ({ path: x.path, message: `${x.catalogId} is not a detector in your organisation's catalog` }));
   if (issues.length) throw new ApiError(422, "Some fields are not valid.", issues);
 }

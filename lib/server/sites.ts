@@ -40,6 +40,8 @@ export interface SiteDetail extends SiteSummary {
   contactPhone: string;
   contactEmail: string;
   notes: string;
+  /** EN 50131-1 security grade, 1 to 4; null when not chosen. */
+  securityGrade: 1 | 2 | 3 | 4 | null;
   installers: SiteInstallerView[];
   floors: SiteFloorView[];
   /** Every area of every floor, in floor order: what a detector's area is chosen from. */
@@ -98,6 +100,7 @@ export async function getSite(actor: Actor, siteId: number): Promise<SiteDetail>
     contactPhone: site.contactPhone,
     contactEmail: site.contactEmail,
     notes: site.notes ?? "",
+    securityGrade: (site.securityGrade ?? null) as SiteDetail["securityGrade"],
     installers,
     floors,
     areas: floors.flatMap((f) => f.areas),
@@ -125,7 +128,7 @@ export async function createSite(actor: Actor, raw: SiteInputDraft): Promise<Sit
   const sequelize = db();
   const id = await sequelize.transaction(async (transaction) => {
     const site = await Site.create(
-      { organisationId: actor.organisationId, name: input.name, address: input.address, description: input.description, contactName: input.contactName, contactPhone: input.contactPhone, contactEmail: input.contactEmail, notes: input.notes },
+      { organisationId: actor.organisationId, name: input.name, address: input.address, description: input.description, contactName: input.contactName, contactPhone: input.contactPhone, contactEmail: input.contactEmail, notes: input.notes, securityGrade: input.securityGrade ?? null },
       { transaction },
     );
     await insertStructure(site.id, floorsOf(input), transaction);

@@ -6,7 +6,7 @@ import { effectiveCatalogInfo } from "./catalogs";
 import { loadSchedule } from "./schedules";
 import type { Actor } from "./session";
 import { RevisionSnapshot } from "@/models";
-import type { Catalog } from "@/lib/catalog/schema";
+import { completeCatalog, type Catalog } from "@/lib/catalog/schema";
 import { loopJsonReplacer, loopJsonReviver } from "@/lib/loop/loop-json";
 import type { Schedule } from "@/lib/schedule/schema";
 
@@ -47,5 +47,5 @@ export async function frozenInputs(layoutId: number, revision: number, transacti
   bindModels();
   const row = await RevisionSnapshot.findOne({ where: { layoutId, revision }, transaction });
   if (!row) return null;
-  return { schedule: decode<Schedule>(row.schedule), catalog: decode<Catalog>(row.catalog), catalogVersion: row.catalogVersion, takenAt: row.takenAt.toISOString() };
+  return { schedule: decode<Schedule>(row.schedule), catalog: completeCatalog(decode<Partial<Catalog>>(row.catalog)), catalogVersion: row.catalogVersion, takenAt: row.takenAt.toISOString() };
 }

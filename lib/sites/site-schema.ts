@@ -59,6 +59,8 @@ const detailFields = {
     .regex(/^[0-9+()./\s-]*$/, "digits, spaces and + ( ) - . / only"),
   contactEmail: email,
   notes: z.string().trim().max(10000, "at most 10000 characters"),
+  /** EN 50131-1 security grade; null or absent: not chosen yet. */
+  securityGrade: z.number().int("the security grade is 1 to 4").min(1, "the security grade is 1 to 4").max(4, "the security grade is 1 to 4").nullable().optional(),
 };
 
 /** The site form: the details without the structure (edited on its own). */
@@ -74,6 +76,7 @@ export const siteInputSchema = z
     contactPhone: detailFields.contactPhone.default(""),
     contactEmail: email.default(""),
     notes: detailFields.notes.default(""),
+    securityGrade: detailFields.securityGrade,
     floors: floorsSchema.optional(),
     areas: z.array(legacyAreaSchema).max(200).optional(),
   })

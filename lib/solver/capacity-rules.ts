@@ -43,8 +43,10 @@ export function inputContentFindings(ri: ResolvedInput): Finding[] {
   return out;
 }
 
-export function capacityFigures(r: Resolved, schedule: ScheduleDetector[], out: Finding[]): { boards: BoardFigures[]; totals: CapacityTotals } {
+/** `wireless`: wireless detectors learnt per receiver board; each is a zone too. */
+export function capacityFigures(r: Resolved, schedule: ScheduleDetector[], out: Finding[], wireless: Map<string, number> = new Map()): { boards: BoardFigures[]; totals: CapacityTotals } {
   const used = new Map<string, { inputs: number; detectors: number }>();
+  for (const [key, n] of wireless) used.set(key, { inputs: 0, detectors: n });
   for (const ri of r.inputs) {
     const u = used.get(ri.board.key) ?? { inputs: 0, detectors: 0 };
     u.inputs++;

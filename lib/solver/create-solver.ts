@@ -11,6 +11,11 @@ import { GenerationMemo } from "@/lib/solver/memo";
 import { checkPower, type VoltageEntry } from "@/lib/solver/power-rules";
 import { resolveLayout, unplacedFinding, type DetectorCache, type ResolvedInput } from "@/lib/solver/resolve";
 import type { SolveResult, Solver } from "@/lib/solver/types";
+import { checkGrade, gradeFigures } from "@/lib/solver/grade-rules";
+import { checkOutputs } from "@/lib/solver/output-rules";
+import { resolveWireless } from "@/lib/solver/wireless-rules";
+import { checkZones } from "@/lib/solver/zone-rules";
+import type { SecurityGrade } from "@/lib/layout/schema";
 
 // The solver with its caches, all keyed by content: each input's whole outcome (its findings, figures, loop
 // analysis and current) by what the input holds, loop analyses by the loop description, detector voltages by
@@ -46,15 +51,27 @@ export function createSolverWith(analyze: AnalyzeLoop, schedule: Schedule, catal
         shared: { inputs: 0, inputsSaved: 0, entries: [] },
         coverage: { used: 0, covered: 0, share: null },
         battery: null,
+        zones: [],
+        areas: [],
+        outputs: [],
+        outputDevices: [],
+        receivers: [],
+        grade: layout.grade ? gradeFigures(layout.grade as SecurityGrade) : null,
       };
     } else {
       outcomes = r.inputs.map((ri) => outcomeMemo.get(inputKey(ri), () => inputOutcome(ri, analyze, loopMemo)));
       for (const o of outcomes) for (const f of o.contentFindings) out.push(f);
-      const { boards, totals } = capacityFigures(r, schedule, out);
+      const wireless = resolveWireless(r, byId, out);
+      const learnt = new Map(wireless.receivers.map((w) => [w.boardKey, w.detectorIds.length]));
+      const { boards, totals } = capacityFigures(r, schedule, out, learnt);
       const bus = checkBus(r, layout.busCableM, out);
-      const power = checkPower(r, outcomes, layout.power, voltageCache, out);
+      const { outputs, loads } = checkOutputs(r, out);
+      const power = checkPower(r, outcomes, layout.power, voltageCache, out, loads);
       const loops = collectLoops(outcomes, out);
-      result = { findings: out, counts: { error: 0, warning: 0, note: 0 }, boards, totals, bus, ...power, ...loops };
+      const grade = layout.grade ? gradeFigures(layout.grade as SecurityGrade) : null;
+      if (grade) checkGrade(grade, layout.power.standbyProfileId, r.inputs, out);
+      const { zones, areas } = checkZones(r, wireless.placed, grade, out);
+      result = { findings: out, counts: { error: 0, warning: 0, note: 0 }, boards, totals, bus, ...power, ...loops, outputs, receivers: wireless.receivers, zones, areas, grade };
     }
     // Errors first, then warnings, then notes; rule order kept within a severity.
     const bySeverity: Finding[][] = [[], [], []];

@@ -9,7 +9,8 @@ import type { Detector } from "@/lib/catalog/schema";
 import type { InputOutcome } from "@/lib/solver/loop-rules";
 import type { PlacedDetector, Resolved, ResolvedBoard } from "@/lib/solver/resolve";
 import { CHECK_EDITION, resolveStandby } from "@/lib/solver/standby-profiles";
-import type { DetectorVoltage, SolveResult, SupplyFigures } from "@/lib/solver/types";
+import type { DetectorVoltage, OutputDeviceVoltage, SolveResult, SupplyFigures } from "@/lib/solver/types";
+import { outputDeviceVoltage, type OutputLoad } from "@/lib/solver/output-rules";
 
 // Current from each supply against its rating, standby battery, and the voltage left at each powered detector.
 
@@ -75,7 +76,14 @@ function voltageAt(d: PlacedDetector, p: NonNullable<Detector["power"]>, feed: S
   return { fig, finding, panelMinVolts, catId: d.cat.id };
 }
 
-export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutPower, voltageCache: Map<string, VoltageEntry>, out: Finding[]): Pick<SolveResult, "supplies" | "detectors" | "battery"> {
+export function checkPower(
+  r: Resolved,
+  outcomes: InputOutcome[],
+  power: LayoutPower,
+  voltageCache: Map<string, VoltageEntry>,
+  out: Finding[],
+  loads: OutputLoad[] = [],
+): Pick<SolveResult, "supplies" | "detectors" | "battery" | "outputDevices"> {
   const { panel } = r;
   // Current drawn by each board's detectors: per-input sums come cached with the input's outcome.
   const boardSums = new Map<string, Sums>();
@@ -96,14 +104,14 @@ export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutP
     supplies.push(s);
     bySupply.set(s.supplyKey, s);
   };
-  add({ supplyKey: PANEL_KEY, name: "Control panel auxiliary output", kind: "panel", volts: panel.supplyVolts, endVolts: panel.endOfDischargeVolts ?? defaultEndOfDischargeVolts(panel.supplyVolts), ratingMa: panel.auxOutputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: panel.ownStandbyMa, ownAlarmMa: panel.ownAlarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: panel.maxBatteryAh, powers: [] });
+  add({ supplyKey: PANEL_KEY, name: "Control panel auxiliary output", kind: "panel", volts: panel.supplyVolts, endVolts: panel.endOfDischargeVolts ?? defaultEndOfDischargeVolts(panel.supplyVolts), ratingMa: panel.auxOutputMa, loadRestMa: 0, loadAlarmMa: 0, outputRestMa: 0, outputAlarmMa: 0, ownRestMa: panel.ownStandbyMa, ownAlarmMa: panel.ownAlarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: panel.maxBatteryAh, powers: [] });
   for (const b of r.boards) {
     if (!b.entry || !b.board) continue;
     if (b.entry.kind === "supply")
-      add({ supplyKey: b.key, name: b.name, kind: "supply-board", volts: b.entry.entry.outputVolts, endVolts: b.entry.entry.endOfDischargeVolts ?? defaultEndOfDischargeVolts(b.entry.entry.outputVolts), ratingMa: b.entry.entry.outputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: b.entry.entry.standbyMa, ownAlarmMa: b.entry.entry.alarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: b.entry.entry.maxBatteryAh, powers: [] });
+      add({ supplyKey: b.key, name: b.name, kind: "supply-board", volts: b.entry.entry.outputVolts, endVolts: b.entry.entry.endOfDischargeVolts ?? defaultEndOfDischargeVolts(b.entry.entry.outputVolts), ratingMa: b.entry.entry.outputMa, loadRestMa: 0, loadAlarmMa: 0, outputRestMa: 0, outputAlarmMa: 0, ownRestMa: b.entry.entry.standbyMa, ownAlarmMa: b.entry.entry.alarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: b.entry.entry.maxBatteryAh, powers: [] });
     else if (b.entry.kind === "expansion" && b.entry.entry.ownSupply)
       // A board's own supply has no voltage of its own in the catalog: taken as the panel's (common practice, no published source).
-      add({ supplyKey: b.key, name: `${b.name} own supply`, kind: "own-supply", volts: panel.supplyVolts, endVolts: panel.endOfDischargeVolts ?? defaultEndOfDischargeVolts(panel.supplyVolts), ratingMa: b.entry.entry.ownSupply.outputMa, loadRestMa: 0, loadAlarmMa: 0, ownRestMa: b.entry.entry.standbyMa, ownAlarmMa: b.entry.entry.alarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: b.entry.entry.ownSupply.maxBatteryAh, powers: [] });
+      add({ supplyKey: b.key, name: `${b.name} own supply`, kind: "own-supply", volts: panel.supplyVolts, endVolts: panel.endOfDischargeVolts ?? defaultEndOfDischargeVolts(panel.supplyVolts), ratingMa: b.entry.entry.ownSupply.outputMa, loadRestMa: 0, loadAlarmMa: 0, outputRestMa: 0, outputAlarmMa: 0, ownRestMa: b.entry.entry.standbyMa, ownAlarmMa: b.entry.entry.alarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: b.entry.entry.ownSupply.maxBatteryAh, powers: [] });
   }
 
   // Where each board's detectors draw from.
@@ -145,6 +153,19 @@ export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutP
     feedOf.set(b.key, feed);
   }
 
+  // Sounders and strobes: on the panel's own outputs they draw from its battery beside the auxiliary output; on a
+  // board's outputs they draw through the supply that feeds the board, counting against its rating.
+  for (const l of loads) {
+    const feed = l.boardKey === PANEL_KEY ? panelAux : (feedOf.get(l.boardKey) ?? panelAux);
+    if (l.boardKey === PANEL_KEY) {
+      feed.outputRestMa += l.restMa;
+      feed.outputAlarmMa += l.alarmMa;
+    } else {
+      feed.loadRestMa += l.restMa;
+      feed.loadAlarmMa += l.alarmMa;
+    }
+  }
+
   // Standby battery.
   const { profile, standbyH, alarmMin } = resolveStandby(power);
   if (!profile)
@@ -160,8 +181,8 @@ export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutP
         why: "Past its rating the output's protection trips or its voltage sags, and everything on it can drop out. Move boards to a power supply or choose a larger one.",
         target,
       });
-    const restMa = (s.batteryRestMa = s.ownRestMa + s.loadRestMa);
-    const alarmMa = (s.batteryAlarmMa = s.ownAlarmMa + s.loadAlarmMa);
+    const restMa = (s.batteryRestMa = s.ownRestMa + s.loadRestMa + s.outputRestMa);
+    const alarmMa = (s.batteryAlarmMa = s.ownAlarmMa + s.loadAlarmMa + s.outputAlarmMa);
     s.batteryNeededAh = batteryAh({ restMa, alarmMa, standbyH, alarmMin, safetyFactor: sf });
     s.batteryPick = pickBattery(s.batteryNeededAh, s.maxBatteryAh, s.volts);
     // The same labels as the figures panel: "battery load at rest" is own draw plus output load.
@@ -193,7 +214,8 @@ export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutP
       target: { kind: "layout" },
     });
 
-  attachBreakdown(r, supplies, feedOf);
+  attachBreakdown(r, supplies, feedOf, loads);
+  const outputDevices: OutputDeviceVoltage[] = loads.map((l) => outputDeviceVoltage(l, l.boardKey === PANEL_KEY ? panelAux : (feedOf.get(l.boardKey) ?? panelAux), out));
 
   // Voltage at each powered detector after the drop on its cable.
   const detectors: DetectorVoltage[] = [];
@@ -211,5 +233,5 @@ export function checkPower(r: Resolved, outcomes: InputOutcome[], power: LayoutP
       if (c.finding) out.push(c.finding);
     }
   }
-  return { supplies, detectors, battery: { profileId: power.standbyProfileId, source: profile?.source ?? null, standbyH, alarmMin, safetyFactor: sf } };
+  return { supplies, detectors, outputDevices, battery: { profileId: power.standbyProfileId, source: profile?.source ?? null, standbyH, alarmMin, safetyFactor: sf } };
 }

@@ -80,6 +80,11 @@ function resolveDetectorsSlowly(inp: LayoutInput, cache: DetectorCache, ix: Cata
     }
     placed.add(id);
     const cat = ix.detectors.get(sched.catalogId);
+    if (!cat && ix.wirelessDetectors.has(sched.catalogId)) {
+      out.push({ code: "wireless-on-input", severity: "error", message: `${sched.label} is a wireless detector, placed on ${inputWhere(names, inp)}`, why: "A wireless detector has no loop; set it on a wireless receiver instead.", target: { kind: "detector", detectorId: id } });
+      complete = false;
+      continue;
+    }
     if (!cat) {
       out.push({ code: "detector-type-unknown", severity: "error", message: `${sched.label}: its detector type is not in the catalog`, why: "Its contact, tamper and current are unknown, so its loop and power cannot be checked.", target: { kind: "detector", detectorId: id } });
       complete = false;

@@ -1,4 +1,4 @@
-import type { WiringScheme } from "@/lib/catalog/schema";
+import type { OutputSwitching, WiringScheme, ZoneType } from "@/lib/catalog/schema";
 import type { Finding } from "@/lib/findings";
 import type { Fault, LoopAnalysis } from "@/lib/loop/types";
 import type { BoardKind, InputRef, LayoutDocument } from "@/lib/layout/schema";
@@ -66,7 +66,10 @@ export interface SupplyFigures {
   /** The supply's (or board's, or panel's) own consumption, carried by its battery. */
   ownRestMa: number;
   ownAlarmMa: number;
-  /** What the battery carries: own draw plus load. The battery note and every screen use these two. */
+  /** Sounders and strobes on the panel's own outputs (siren and programmable): on its battery, not through the auxiliary output. */
+  outputRestMa: number;
+  outputAlarmMa: number;
+  /** What the battery carries: own draw plus load plus output loads. The battery note and every screen use these two. */
   batteryRestMa: number;
   batteryAlarmMa: number;
   /** Own draw first, then each board and keypad it powers, then each powered detector; sums to batteryRestMa / batteryAlarmMa. */
@@ -139,6 +142,92 @@ export interface SolveResult {
   shared: { inputs: number; inputsSaved: number; entries: SharedInputFigures[] };
   coverage: { used: number; covered: number; share: number | null };
   battery: { profileId: string; source: string | null; standbyH: number; alarmMin: number; safetyFactor: number } | null;
+  zones: ZoneFigures[];
+  areas: AreaFigures[];
+  outputs: OutputFigures[];
+  outputDevices: OutputDeviceVoltage[];
+  receivers: ReceiverFigures[];
+  /** The layout's security grade and the limits it sets; null when no grade is chosen. */
+  grade: GradeFigures | null;
+}
+
+/** One zone as the installer keys it in: numbered in board order, input order, then wireless detectors by receiver. */
+export interface ZoneFigures {
+  number: number;
+  detectorId: string;
+  /** The name chosen (the programming's keypad label, else the detector's label). */
+  label: string;
+  /** What the keypad shows: the label cut to the panel's zone label length. */
+  keypadLabel: string;
+  labelCut: boolean;
+  type: ZoneType;
+  areaKey: string | null;
+  areaName: string | null;
+  partSet: boolean;
+  entryS: number | null;
+  exitS: number | null;
+  entryRoute: boolean;
+  chime: boolean;
+  /** "Control panel, input 3" or "Wireless receiver 1". */
+  where: string;
+  boardKey: string;
+  /** Null for a wireless detector. */
+  input: number | null;
+  wireless: boolean;
+}
+
+export interface AreaFigures {
+  key: string;
+  name: string;
+  zones: number;
+  keypadKeys: string[];
+}
+
+export interface OutputFigures {
+  boardKey: string;
+  output: number;
+  /** "Control panel, siren output 1" */
+  name: string;
+  purpose: "siren" | "programmable";
+  switching: OutputSwitching;
+  ratingMa: number;
+  deviceIds: string[];
+  restMa: number;
+  alarmMa: number;
+  ok: boolean;
+}
+
+/** The voltage left at a sounder or strobe after the drop on its cable, as for a powered detector. */
+export interface OutputDeviceVoltage {
+  deviceId: string;
+  boardKey: string;
+  output: number;
+  supplyKey: string;
+  supplyVolts: number;
+  currentMa: number;
+  cableOhms: number;
+  dropV: number;
+  volts: number;
+  minVolts: number;
+  ok: boolean;
+  endVolts: number;
+  okOnBattery: boolean;
+}
+
+export interface ReceiverFigures {
+  boardKey: string;
+  name: string;
+  detectorIds: string[];
+  maxDevices: number;
+}
+
+export interface GradeFigures {
+  grade: 1 | 2 | 3 | 4;
+  maxEntryS: number;
+  maxExitS: number;
+  standbyProfileIds: string[];
+  /** What changes at this grade, in words, each with where it comes from. */
+  rules: { text: string; source: string }[];
 }
 
 export interface Solver {

@@ -78,10 +78,12 @@ export const FAULT_WORDS: Record<"short-panel" | "short-detector" | "cut", strin
 };
 
 /** The kinds of board a layout holds, in words. */
-export const BOARD_KIND_WORDS: Record<"expansion" | "keypad" | "supply", string> = {
+export const BOARD_KIND_WORDS: Record<"expansion" | "keypad" | "supply" | "outputs" | "receiver", string> = {
   expansion: "expansion board",
   keypad: "keypad",
   supply: "power supply",
+  outputs: "output module",
+  receiver: "wireless receiver",
 };
 
 /** What an audit entry records, as the audit log shows it. */
@@ -116,3 +118,17 @@ export const AUDIT_ACTION_WORDS: Record<string, string> = {
 
 /** The kind of thing an audit entry is about. */
 export const AUDIT_ENTITY_WORDS: Record<string, string> = { invitation: "invitation", layout: "layout", membership: "member", organisation: "organisation", organisation_catalog: "catalog", schedule_detector: "detector", site: "site" };
+
+/** Zone types in the trade's words. */
+export const ZONE_TYPE_WORDS: Record<"instant" | "entry-exit" | "24-hour" | "hold-up" | "fire" | "tamper" | "technical", string> = {
+  instant: "instant",
+  "entry-exit": "entry/exit",
+  "24-hour": "24-hour",
+  "hold-up": "hold-up",
+  fire: "fire",
+  tamper: "tamper",
+  technical: "technical",
+};
+
+/** Output purposes and switching in words: "siren output", "programmable output"; "relay", "transistor". */
+export const OUTPUT_PURPOSE_WORDS: Record<"siren" | "programmable", string> = { siren: "siren output", programmable: "programmable output" };

@@ -75,8 +75,53 @@ export async function seedDemoDesign(transaction: Transaction, ids: { organisati
   for (const o of options) {
     const s = suggestHardware(schedule, o.catalog, { allowShared: o.allowShared, busCableM: 120 });
     if (!s.found) throw new Error(`demo data: no suggestion for "${o.name}": ${s.reason}`);
-    await storeLayout(transaction, ids, o.name, s.layout, schedule, catalog);
+    await storeLayout(transaction, ids, o.name, o.allowShared ? withZonesAndSounders(s.layout, schedule) : { ...s.layout, grade: 2 }, schedule, catalog);
   }
+}
+
+const BACK_OF_HOUSE = new Set([B, "Staff kitchen", "Office", "Store"]);
+
+/**
+ * The shared-input demo layout with the rest of a panel's programming filled in, so a newcomer sees it at once:
+ * two areas set from the keypads, zone types (hold-up buttons, fire detectors, the entrance as entry/exit with its
+ * lobby on the entry route), and two outdoor sounders (one with its own battery), an indoor sounder and a strobe on
+ * the panel's outputs.
+ */
+export function withZonesAndSounders(doc: LayoutDocument, schedule: Schedule): LayoutDocument {
+  const placed = new Set(doc.inputs.flatMap((i) => i.detectorIds));
+  const keypads = doc.boards.filter((b) => b.kind === "keypad").map((b) => b.key);
+  const zones = schedule
+    .filter((d) => placed.has(d.id))
+    .map((d) => {
+      const areaKey = BACK_OF_HOUSE.has(d.area) || BACK_OF_HOUSE.has(d.room) ? "back" : "public";
+      if (d.catalogId.startsWith("panic")) return { detectorId: d.id, type: "hold-up" as const, areaKey };
+      if (d.catalogId.startsWith("smoke") || d.catalogId.startsWith("heat")) return { detectorId: d.id, type: "fire" as const, areaKey };
+      if (d.catalogId.startsWith("water")) return { detectorId: d.id, type: "technical" as const, areaKey };
+      if (d.label === "Main entrance doors") return { detectorId: d.id, type: "entry-exit" as const, areaKey, entryS: 30, exitS: 45, keypadLabel: "Main entrance" };
+      if (d.label === "Entrance lobby motion") return { detectorId: d.id, type: "instant" as const, areaKey, entryRoute: true };
+      return { detectorId: d.id, type: "instant" as const, areaKey, ...(d.room === "Reading room" ? { partSet: true } : {}) };
+    });
+  const cable = (m: number) => ({ cableM: m, gauge: { awg: 22 } });
+  return {
+    ...doc,
+    grade: 2,
+    areas: [
+      { key: "public", name: "Public floors", keypadKeys: keypads.slice(0, 1) },
+      { key: "back", name: "Basement and staff rooms", keypadKeys: keypads.slice(1) },
+    ],
+    zones,
+    outputDevices: [
+      { id: "sounder-front", kind: "sounder", catalogId: "sounder-outdoor-battery", label: "Front wall sounder", ...cable(15) },
+      { id: "sounder-rear", kind: "sounder", catalogId: "sounder-outdoor", label: "Rear wall sounder", ...cable(25) },
+      { id: "sounder-hall", kind: "sounder", catalogId: "sounder-indoor", label: "Lending hall sounder", ...cable(20) },
+      { id: "strobe-front", kind: "strobe", catalogId: "strobe-amber", label: "Front wall strobe", ...cable(15) },
+    ],
+    outputs: [
+      { boardKey: "panel", output: 1, deviceIds: ["sounder-front", "sounder-rear"] },
+      { boardKey: "panel", output: 2, deviceIds: ["sounder-hall"] },
+      { boardKey: "panel", output: 3, deviceIds: ["strobe-front"] },
+    ],
+  };
 }
 
 async function storeLayout(transaction: Transaction, ids: { organisationId: number; siteId: number; userId: number }, name: string, document: LayoutDocument, schedule: Schedule, catalog: Catalog) {

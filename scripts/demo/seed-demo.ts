@@ -41,7 +41,7 @@ export async function seedDemo(transaction: Transaction, hash: (password: string
     users[u.role] = user.id;
   }
   const site = await Site.create(
-    { organisationId: org.id, name: demoBuilding.name, address: demoBuilding.address, description: demoBuilding.description, contactName: "Facilities desk", contactPhone: "", contactEmail: "facilities@quillfen-library.example" },
+    { organisationId: org.id, name: demoBuilding.name, address: demoBuilding.address, description: demoBuilding.description, contactName: "Facilities desk", contactPhone: "", contactEmail: "facilities@quillfen-library.example", securityGrade: 2 },
     { transaction },
   );
   await SiteInstaller.create({ siteId: site.id, userId: users.installer }, { transaction });

@@ -3,7 +3,7 @@ import type { Catalog } from "@/lib/catalog/schema";
 import type { Schedule } from "@/lib/schedule/schema";
 import type { LayoutDocument } from "@/lib/layout/schema";
 import { solveLayout } from "@/lib/solver";
-import { fixtureCatalog } from "@/lib/solver/testing/fixture-catalog";
+import { fixtureCatalog, zonedCatalog } from "@/lib/solver/testing/fixture-catalog";
 import { board, catalogWithPanel, det, emptyLayout, inp } from "@/lib/solver/testing/fixture-schedule";
 
 interface Sample {
@@ -51,6 +51,68 @@ const samples: Sample[] = [
   { doc: emptyLayout("fx-panel-small", { power: { standbyProfileId: "no-such-profile", safetyFactor: 1.2 } }), schedule: [] },
   { doc: emptyLayout("fx-panel-small", { inputs: pirs(8, "fx-pir-hungry").map((d, i) => inp("panel", i + 1, [d.id])) }), schedule: pirs(8, "fx-pir-hungry"), catalog: catalogWithPanel("fx-panel-small", { maxBatteryAh: 1, auxOutputMa: 100 }) },
   { doc: emptyLayout("fx-panel-small", { inputs: [inp("panel", 1, ["h1"]), inp("panel", 2, ["p1"])] }), schedule: [det("h1", "fx-pir-hungry", { cableM: 300, gauge: { awg: 24 } }), det("p1", "fx-pir", { cableM: 600, gauge: { awg: 24 } })] },
+  // zone programming, areas and the security grade
+  {
+    doc: emptyLayout("fx-panel-small", {
+      grade: 3,
+      boards: [board("k1", "keypad", "fx-keypad", 1)],
+      areas: [
+        { key: "a1", name: "Offices", keypadKeys: ["k1", "nope"] },
+        { key: "a2", name: "Warehouse" },
+        { key: "a3", name: "Yard" },
+      ],
+      inputs: [
+        inp("panel", 1, ["d1"]),
+        inp("panel", 2, ["s1"]),
+        inp("panel", 3, ["h1"]),
+        inp("panel", 4, ["pb"]),
+        inp("panel", 5, ["pb2"]),
+        inp("panel", 6, ["d2"], { scheme: "none" }),
+        inp("panel", 7, ["p1"], { scheme: "single-eol" }),
+        inp("panel", 8, ["d4"]),
+        inp("k1", 1, ["d5"]),
+      ],
+      zones: [
+        { detectorId: "d1", type: "entry-exit", entryS: 60, exitS: 90, entryRoute: true },
+        { detectorId: "s1", type: "instant" },
+        { detectorId: "h1", type: "fire" },
+        { detectorId: "pb", type: "instant" },
+        { detectorId: "pb2", type: "hold-up", partSet: true },
+        { detectorId: "d2", type: "instant", entryS: 20, areaKey: "ghost" },
+        { detectorId: "d4", type: "instant", keypadLabel: "Back office window" },
+        { detectorId: "x9", type: "instant" },
+      ],
+    }),
+    schedule: [det("d1", "fx-door", { label: "Front" }), det("s1", "fx-smoke", { label: "Stair" }), det("h1", "fx-heat", { label: "Kitchen" }), det("pb", "fx-panic", { label: "Till" }), det("pb2", "fx-panic", { label: "Safe" }), det("d2", "fx-door", { label: "Back" }), det("p1", "fx-pir", { label: "Hall" }), det("d4", "fx-door", { label: "Window" }), det("d5", "fx-door")],
+    catalog: zonedCatalog,
+  },
+  // outputs, sounders and strobes, wireless detectors
+  {
+    doc: emptyLayout("fx-panel-small", {
+      boards: [board("m1", "outputs", "fx-relays-4", 1), board("r1", "receiver", "fx-receiver", 2)],
+      inputs: [inp("panel", 1, ["w4"])],
+      outputDevices: [
+        { id: "o1", kind: "sounder", catalogId: "fx-sounder-out", label: "Front sounder", cableM: 20, gauge: { awg: 22 } },
+        { id: "o2", kind: "sounder", catalogId: "fx-sounder-out-bat", label: "Rear sounder", cableM: 20, gauge: { awg: 22 } },
+        { id: "o3", kind: "strobe", catalogId: "fx-strobe", label: "Gate strobe", cableM: 20, gauge: { awg: 22 } },
+        { id: "o4", kind: "sounder", catalogId: "fx-sounder-in", label: "Hall sounder", cableM: 10, gauge: { awg: 22 } },
+        { id: "o5", kind: "sounder", catalogId: "no-such-sounder", label: "Old sounder", cableM: 10, gauge: { awg: 22 } },
+        { id: "o6", kind: "sounder", catalogId: "fx-sounder-out", label: "Far sounder", cableM: 400, gauge: { awg: 24 } },
+      ],
+      outputs: [
+        { boardKey: "panel", output: 2, deviceIds: ["o1", "o3"] },
+        { boardKey: "panel", output: 9, deviceIds: ["o4"] },
+        { boardKey: "panel", output: 1, deviceIds: ["ghost", "o2", "o5"] },
+        { boardKey: "m1", output: 1, deviceIds: ["o1", "o6"] },
+      ],
+      wireless: [
+        { boardKey: "r1", detectorIds: ["w1", "w2", "w3", "wx", "dw"] },
+        { boardKey: "m1", detectorIds: ["w5"] },
+      ],
+    }),
+    schedule: [det("w1", "fx-w-pir"), det("w2", "fx-w-door"), det("w3", "fx-w-pir"), det("w4", "fx-w-pir", { label: "Lobby" }), det("w5", "fx-w-door"), det("dw", "fx-door", { label: "Shed" })],
+    catalog: zonedCatalog,
+  },
 ];
 
 /** Every finding of every sample, message and reason together. */

@@ -232,7 +232,44 @@ export const fixtureCatalogInput = {
     { id: "fx-pir-hungry", name: "Motion detector, dual technology", description: "Heavier draw.", listPrice: 45, category: "motion", lifeSafety: false, contact: "NC", tamper: true, power: { standbyMa: 40, alarmMa: 60, minVolts: 11.5 }, mounting: "wall" },
     { id: "fx-smoke", name: "Smoke detector", description: "Four-wire smoke detector.", listPrice: 35, category: "smoke", lifeSafety: true, contact: "NO", tamper: false, power: { standbyMa: 0.1, alarmMa: 25, minVolts: 18 }, mounting: "ceiling" },
     { id: "fx-heat", name: "Heat detector", description: "Fixed temperature.", listPrice: 20, category: "heat", lifeSafety: true, contact: "NO", tamper: false, power: null, mounting: "ceiling" },
+    { id: "fx-panic", name: "Hold-up button", description: "Latching push button.", listPrice: 15, category: "panic", lifeSafety: false, contact: "NC", tamper: false, power: null, mounting: "under a counter" },
+  ],
+  sounders: [
+    { id: "fx-sounder-in", name: "Indoor sounder", description: "Internal.", listPrice: 12, placement: "internal", standbyMa: 0, alarmMa: 150, minVolts: 9, mounting: "wall" },
+    { id: "fx-sounder-out", name: "Outdoor sounder", description: "External, no battery.", listPrice: 40, placement: "external", standbyMa: 5, alarmMa: 300, minVolts: 10, mounting: "outside wall" },
+    { id: "fx-sounder-out-bat", name: "Outdoor sounder with battery", description: "External with its own battery.", listPrice: 60, placement: "external", standbyMa: 10, alarmMa: 80, minVolts: 10.5, ownBattery: { chargingMa: 60 }, mounting: "outside wall" },
+  ],
+  strobes: [{ id: "fx-strobe", name: "Strobe", description: "Amber beacon.", listPrice: 15, standbyMa: 0, alarmMa: 100, minVolts: 9, mounting: "outside wall" }],
+  outputModules: [
+    { id: "fx-relays-4", name: "Relay module", description: "Four relays.", listPrice: 50, families: ["fx-alpha"], outputs: [{ purpose: "programmable", count: 4, switching: "relay", ratingMa: 1000 }], standbyMa: 20, alarmMa: 80, takesBusAddress: true },
+  ],
+  wirelessReceivers: [{ id: "fx-receiver", name: "Wireless receiver", description: "Learns two.", listPrice: 90, families: ["fx-alpha"], maxDevices: 2, standbyMa: 40, alarmMa: 45, takesBusAddress: true }],
+  wirelessDetectors: [
+    { id: "fx-w-pir", name: "Wireless motion detector", description: "Battery powered.", listPrice: 40, category: "motion", lifeSafety: false, tamper: true, batteryYears: 3, mounting: "corner" },
+    { id: "fx-w-door", name: "Wireless door contact", description: "Battery powered.", listPrice: 30, category: "door-contact", lifeSafety: false, tamper: true, batteryYears: 5, mounting: "door frame" },
   ],
 };
 
 export const fixtureCatalog: Catalog = catalogFileSchema.parse(fixtureCatalogInput);
+
+/**
+ * The fixture catalog with the small panel given outputs (a relay siren output, two 100 mA transistor outputs),
+ * two areas, a 10-character keypad label and every zone type but fire: for the zone, area and output rules.
+ */
+export const zonedCatalog: Catalog = {
+  ...fixtureCatalog,
+  panels: fixtureCatalog.panels.map((p) =>
+    p.id === "fx-panel-small"
+      ? {
+          ...p,
+          outputs: [
+            { purpose: "siren", count: 1, switching: "relay", ratingMa: 1000 },
+            { purpose: "programmable", count: 2, switching: "transistor", ratingMa: 100 },
+          ],
+          maxAreas: 2,
+          zoneLabelLength: 10,
+          zoneTypes: ["instant", "entry-exit", "24-hour", "hold-up", "tamper", "technical"],
+        }
+      : p,
+  ),
+};

@@ -45,7 +45,7 @@ export default async function EditSitePage({ params }: { params: Promise<{ siteI
       />
       {!canWrite ? <p className="mb-4 text-sm text-slate-600">{refusal(actor.role, "site:write")}</p> : null}
       <div className="flex flex-col gap-4">
-        {section("Details", <SiteDetailsSection siteId={site.id} canWrite={canWrite} values={{ name: site.name, address: site.address, description: site.description, contactName: site.contactName, contactPhone: site.contactPhone, contactEmail: site.contactEmail, notes: site.notes }} />)}
+        {section("Details", <SiteDetailsSection siteId={site.id} canWrite={canWrite} values={{ name: site.name, address: site.address, description: site.description, contactName: site.contactName, contactPhone: site.contactPhone, contactEmail: site.contactEmail, notes: site.notes, securityGrade: site.securityGrade }} />)}
         {section("Floors, areas and rooms", <StructureSection site={site} canWrite={canWrite} />)}
         {section("Installers", <InstallersSection siteId={site.id} assigned={site.installers} candidates={candidates} canWrite={canWrite} />)}
         {can(actor.role, "schedule:write") ? section("Start a new site from this one", <CopySiteForm siteId={site.id} name={site.name} />) : null}
