@@ -4,54 +4,56 @@ import type { PanelModel } from "@/lib/solver/suggest-model";
 import type { UnitTables } from "@/lib/solver/suggest-units";
 
 // The concrete layout from a solution of the model: boards bought in catalog order with bus addresses in turn,
-// each powered board on the feed the model chose, and the detectors of each class handed out to hosts in area
-// and room order, so an area's detectors land on as few boards as the counts allow.
+// each pool's boards powered by the feed the model chose, and the detectors of each host handed out in area and
+// room order, filling one board before the next, so an area's detectors land on as few boards as the counts allow.
+
+interface Unit {
+  dets: PlacedDetector[];
+  scheme: LayoutInput["scheme"];
+}
 
 export function buildFromSolution(m: PanelModel, units: UnitTables, value: (name: string) => number, classA: boolean): { boards: LayoutBoard[]; inputs: LayoutInput[]; counts: number[] } {
-  const on = (v: string) => value(v) > 0.5;
+  const count = (v: string | null) => (v === null ? 1 : Math.round(value(v)));
   const boards: LayoutBoard[] = [];
-  const keyOf = new Map<string, string>();
   const counts = m.items.map(() => 0);
   let address = m.panel.bus.addressMin;
-  m.items.forEach((it, j) => {
-    for (let k = 0; k < m.caps[j]; k++) {
-      const y = `y_${j}_${k}`;
-      if (!on(y)) continue;
-      counts[j]++;
-      const key = `b${boards.length + 1}`;
-      keyOf.set(y, key);
-      boards.push({ key, kind: it.kind, catalogId: it.id, busAddress: it.takesBus ? address++ : null });
-    }
+  const add = (j: number, poweredBy?: string): string => {
+    const it = m.items[j];
+    const key = `b${boards.length + 1}`;
+    counts[j]++;
+    boards.push({ key, kind: it.kind, catalogId: it.id, busAddress: it.takesBus ? address++ : null, ...(poweredBy ? { poweredBy } : {}) });
+    return key;
+  };
+  // supplies first, so the boards they feed can name them
+  const supplyKey = new Map<string, string>();
+  m.feeds.forEach((f) => {
+    if (f === "aux" || count(f) < 1) return;
+    supplyKey.set(f, add(Number(f.split("_")[1])));
   });
-  for (const y of m.fedBoards) {
-    if (!keyOf.has(y)) continue;
-    const f = m.feeds.find((f) => on(`w_${y}_${f}`));
-    if (f && f !== "aux") boards.find((b) => b.key === keyOf.get(y))!.poweredBy = keyOf.get(f);
-  }
   const byPlace = (a: PlacedDetector, b: PlacedDetector) => a.sched.area.localeCompare(b.sched.area) || a.sched.room.localeCompare(b.sched.room);
   const pools = units.classes.map((c) => [...c.members].sort(byPlace));
   const pathway = (dets: PlacedDetector[]): Pick<LayoutInput, "pathway"> => (classA && dets.some((d) => isLifeSafety(d.cat)) ? { pathway: "class-a" } : {});
   const inputs: LayoutInput[] = [];
   m.hosts.forEach((h, hi) => {
-    const key = h.y === null ? PANEL_KEY : keyOf.get(h.y);
-    if (!key) return;
-    let next = 1;
-    const put = (dets: PlacedDetector[], scheme: LayoutInput["scheme"]) => inputs.push({ boardKey: key, input: next++, detectorIds: dets.map((d) => d.sched.id), scheme, placement: "at-detector", ...pathway(dets) });
-    const units_: { dets: PlacedDetector[]; scheme: LayoutInput["scheme"] }[] = [];
+    const n = count(h.count);
+    if (n < 1) return;
+    const keys = h.kind === "onboard" ? [PANEL_KEY] : Array.from({ length: n }, () => add(h.itemIndex, h.feed && h.feed !== "aux" ? supplyKey.get(h.feed) : undefined));
+    const mine: Unit[] = [];
     units.classes.forEach((c, ci) => {
-      const n = Math.round(value(`x_${ci}_${hi}`));
-      for (let k = 0; k < n; k++) units_.push({ dets: [pools[ci].shift()!], scheme: c.single[h.type]!.scheme });
+      for (let k = Math.round(value(`x_${ci}_${hi}`)); k > 0; k--) mine.push({ dets: [pools[ci].shift()!], scheme: c.single[h.type]!.scheme });
     });
     m.pairs.forEach(([a, b], p) => {
-      const n = Math.round(value(`q_${p}_${hi}`));
-      for (let k = 0; k < n; k++) {
+      for (let k = Math.round(value(`q_${p}_${hi}`)); k > 0; k--) {
         const x = pools[a].shift()!;
         const y = pools[b].shift()!;
-        units_.push({ dets: units.swapped(x, y, h.type) ? [y, x] : [x, y], scheme: "shared" });
+        mine.push({ dets: units.swapped(x, y, h.type) ? [y, x] : [x, y], scheme: "shared" });
       }
     });
-    units_.sort((u, v) => byPlace(u.dets[0], v.dets[0]));
-    for (const u of units_) put(u.dets, u.scheme);
+    mine.sort((u, v) => byPlace(u.dets[0], v.dets[0]));
+    mine.forEach((u, i) => {
+      const key = keys[Math.floor(i / h.inputs)];
+      inputs.push({ boardKey: key, input: (i % h.inputs) + 1, detectorIds: u.dets.map((d) => d.sched.id), scheme: u.scheme, placement: "at-detector", ...pathway(u.dets) });
+    });
   });
   return { boards, inputs, counts };
 }

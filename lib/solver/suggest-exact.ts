@@ -44,11 +44,24 @@ interface Solved {
   objective: number;
   gap: number;
   value: (name: string) => number;
+  values: Map<string, number>;
 }
 
-function solveLp(highs: Highs, lp: string, timeLimitS: number): Solved {
+function solveLp(highs: Highs, lp: string, timeLimitS: number, start?: Solved): Solved {
   return highs.withModel<Solved>({ format: "lp", data: lp }, (m) => {
     m.options.set({ output_flag: false, time_limit: timeLimitS, mip_rel_gap: 1e-9 });
+    if (start) {
+      // the first pass's answer is feasible in the second: a start, so a time limit still leaves a layout
+      const colValue = new Float64Array(m.getLp().numCols);
+      for (const [name, v] of start.values) {
+        try {
+          colValue[m.getColByName(name) as number] = v;
+        } catch {
+          // not in this model
+        }
+      }
+      m.setSolution({ colValue });
+    }
     m.run();
     const st = m.getModelStatus();
     const c = highs.constants.modelStatus;
@@ -68,10 +81,10 @@ function solveLp(highs: Highs, lp: string, timeLimitS: number): Solved {
       return v;
     };
     // read every value now: the model is disposed when this returns
-    const names = lp.match(/\b[xqyw]_[A-Za-z0-9_]+/g) ?? [];
+    const names = lp.match(/\b[xqyn]_[A-Za-z0-9_]+/g) ?? [];
     for (const n of new Set(names)) value(n);
     const hasSolution = status === "optimal" || (status === "time-limit" && sol.colValue.length > 0 && Number.isFinite(m.getObjectiveValue()));
-    return { status: hasSolution ? status : status === "time-limit" ? "other" : status, objective: m.getObjectiveValue(), gap: status === "optimal" ? 0 : Number(m.info.get("mip_gap") ?? Infinity), value: (n: string) => values.get(n) ?? 0 };
+    return { values, status: hasSolution ? status : status === "time-limit" ? "other" : status, objective: m.getObjectiveValue(), gap: status === "optimal" ? 0 : Number(m.info.get("mip_gap") ?? Infinity), value: (n: string) => values.get(n) ?? 0 };
   });
 }
 
@@ -91,7 +104,7 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
   const power: LayoutPower = opts.power ?? (anyLife ? { standbyProfileId: "nfpa72-fire", safetyFactor: 1.25 } : { standbyProfileId: "intruder-grade-2", safetyFactor: 1.2 });
   const busCableM = opts.busCableM ?? 0;
   const classA = opts.pathway === "class-a";
-  const timeLimitS = opts.timeLimitS ?? 5;
+  const timeLimitS = opts.timeLimitS ?? 2;
   const units = unitTables(placed, catalog, opts.allowShared, classA);
   const { standbyH, alarmMin } = resolveStandby(power);
   const pw = { standbyH, alarmMin, safetyFactor: power.safetyFactor };
@@ -108,7 +121,7 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
 
   let optimal = true;
   let gap = 0;
-  const priced: { m: PanelModel; cost: number }[] = [];
+  const priced: { m: PanelModel; cost: number; r: Solved }[] = [];
   for (const { m } of models) {
     const r = solveLp(highs, m.lp({ minimise: "price" }), timeLimitS);
     if (r.status === "infeasible") reasons.push(`${m.panel.name}: no set of its family's boards and supplies powers this schedule within their ratings and battery limits`);
@@ -118,7 +131,7 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
         optimal = false;
         gap = Math.max(gap, r.gap);
       }
-      priced.push({ m, cost: m.panel.listPrice + r.objective });
+      priced.push({ m, cost: m.panel.listPrice + r.objective, r });
     }
   }
   if (!priced.length) return { found: false, reason: `No hardware in the catalog carries this schedule. ${reasons.join("; ")}`, candidatesTried: 0, proof: { optimal: true, gap: 0, method: "exact-model" } };
@@ -130,7 +143,7 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
   let best: { m: PanelModel; score: number; r: Solved } | null = null;
   for (const p of priced.sort((a, b) => a.cost - b.cost)) {
     if (p.cost > bound) continue;
-    const r = solveLp(highs, p.m.lp({ maximise: "supervision", maxPrice: bound }), timeLimitS);
+    const r = solveLp(highs, p.m.lp({ maximise: "supervision", maxPrice: bound }), timeLimitS, p.r);
     if (r.status !== "optimal" && r.status !== "time-limit") continue;
     if (!best || r.objective > best.score + 1e-6) best = { m: p.m, score: r.objective, r };
   }
@@ -146,5 +159,5 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
   const parts: SuggestionPart[] = [{ kind: "panel", catalogId: m.panel.id, name: m.panel.name, count: 1, unitPrice: m.panel.listPrice }];
   m.items.forEach((it, j) => counts[j] && parts.push({ kind: it.kind, catalogId: it.id, name: it.name, count: counts[j], unitPrice: it.price }));
   const cost = Math.round(parts.reduce((n, p) => n + p.count * p.unitPrice, 0) * 100) / 100;
-  return { found: true, layout, cost, parts, result, sharedInputs: inputs.filter((i) => i.scheme === "shared").length, candidatesTried: 0, proof: { optimal, gap, method: "exact-model", cheapestCost: cheapest } };
+  return { found: true, layout, cost, parts, result, sharedInputs: inputs.filter((i) => i.scheme === "shared").length, candidatesTried: 0, proof: { optimal, gap, method: "exact-model", cheapestCost: Math.min(cheapest, cost) } };
 }

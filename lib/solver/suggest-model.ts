@@ -23,10 +23,19 @@ export interface CatalogItem {
   supply: { outputMa: number; maxBatteryAh: number } | null;
 }
 
+/**
+ * Where detectors go: the panel's own inputs, a pool of identical boards of one kind all fed by one feed (their
+ * count is the integer `n`; which board of the pool holds which detector changes no rule), or one board with a
+ * supply of its own (a binary `y`, since each has its own rating and battery).
+ */
 export interface Host {
-  /** "panel" for the on-board inputs, else the variable y of one board bought. */
-  y: string | null;
+  kind: "onboard" | "pool" | "own";
+  /** The variable counting the boards: null for the panel. */
+  count: string | null;
   item: CatalogItem | null;
+  itemIndex: number;
+  /** For a pool: the feed ("aux" or a supply's y). */
+  feed: string | null;
   inputs: number;
   type: number;
 }
@@ -34,13 +43,11 @@ export interface Host {
 export interface PanelModel {
   panel: Panel;
   items: CatalogItem[];
-  /** Instances per item, in order; instance k of item j is `y_j_k`. */
+  /** Most boards of each item worth buying. */
   caps: number[];
   hosts: Host[];
-  /** Feeds: "aux" and each supply instance's y. */
+  /** Feeds: "aux" and each supply instance's y (`y_j_k`). */
   feeds: string[];
-  /** Powered boards without their own supply: a w variable per (board, feed). */
-  fedBoards: string[];
   pairs: [number, number][];
   lp: (phase: { minimise: "price" } | { maximise: "supervision"; maxPrice: number }) => string;
 }
@@ -85,24 +92,22 @@ export function buildPanelModel(catalog: Catalog, panel: Panel, units: UnitTable
   const { classes, pairOk } = units;
   const N = classes.reduce((n, c) => n + c.members.length, 0);
   const busLimit = busLimitOf(panel);
-  const maxAlarm = classes.reduce((m, c) => Math.max(m, c.alarmMa, c.restMa), 0);
   const totalAlarm = classes.reduce((n, c) => n + c.members.length * Math.max(c.alarmMa, c.restMa), 0);
   const caps = items.map((it) => {
     const cap = it.inputs > 0 ? Math.max(Math.ceil(N / it.inputs), it.kind === "keypad" ? minKeypads : 0) : it.kind === "keypad" ? minKeypads : it.supply ? Math.ceil((totalAlarm + items.reduce((n, x) => n + x.alarmMa, 0) * 4) / Math.max(1, it.supply.outputMa)) + 2 : 0;
     return it.takesBus ? Math.min(cap, busLimit) : cap;
   });
-  const hosts: Host[] = [{ y: null, item: null, inputs: panel.onboardInputs.count, type: catalog.inputTypes.findIndex((t) => t.id === panel.onboardInputs.inputType) }];
+  const hosts: Host[] = [{ kind: "onboard", count: null, item: null, itemIndex: -1, feed: null, inputs: panel.onboardInputs.count, type: catalog.inputTypes.findIndex((t) => t.id === panel.onboardInputs.inputType) }];
   const feeds = ["aux"];
-  const fedBoards: string[] = [];
-  const all: { y: string; it: CatalogItem }[] = [];
+  const supplies: { y: string; it: CatalogItem; j: number; k: number }[] = [];
   items.forEach((it, j) => {
-    for (let k = 0; k < caps[j]; k++) {
-      const y = `y_${j}_${k}`;
-      all.push({ y, it });
-      if (it.inputs > 0) hosts.push({ y, item: it, inputs: it.inputs, type: it.type });
-      if (it.supply) feeds.push(y);
-      else if (!it.ownSupply) fedBoards.push(y);
-    }
+    if (it.supply) for (let k = 0; k < caps[j]; k++) supplies.push({ y: `y_${j}_${k}`, it, j, k });
+  });
+  feeds.push(...supplies.map((s) => s.y));
+  items.forEach((it, j) => {
+    if (it.supply || caps[j] === 0) return;
+    if (it.ownSupply) for (let k = 0; k < caps[j]; k++) hosts.push({ kind: "own", count: `y_${j}_${k}`, item: it, itemIndex: j, feed: null, inputs: it.inputs, type: it.type });
+    else feeds.forEach((f, fi) => hosts.push({ kind: "pool", count: `n_${j}_${fi}`, item: it, itemIndex: j, feed: f, inputs: it.inputs, type: it.type }));
   });
   const pairs: [number, number][] = [];
   classes.forEach((_, a) => classes.forEach((__, b) => b >= a && pairOk[a][b].some(Boolean) && pairs.push([a, b])));
@@ -114,12 +119,6 @@ export function buildPanelModel(catalog: Catalog, panel: Panel, units: UnitTable
     pairs.forEach(([a, b], p) => qOk(p, h) && t.push([classes[a][key] + classes[b][key], `q_${p}_${h}`]));
     return t;
   };
-  const hostOf = new Map(hosts.map((h, i) => [h.y, i]));
-  const loadOf = (y: string, it: CatalogItem, key: "restMa" | "alarmMa"): [number, string][] => {
-    const h = hostOf.get(y);
-    return [[it[key], y], ...(h === undefined ? [] : hostLoad(h, key))];
-  };
-  const bigM = (it: CatalogItem) => Math.max(it.restMa, it.alarmMa) + it.inputs * 2 * maxAlarm + 1;
   const ah = ahPerMa(pw);
 
   const lp = (phase: Parameters<PanelModel["lp"]>[0]): string => {
@@ -127,13 +126,18 @@ export function buildPanelModel(catalog: Catalog, panel: Panel, units: UnitTable
     const binaries: string[] = [];
     const generals: string[] = [];
     const bounds: string[] = ["zero = 0"];
-    const priceTerms: [number, string][] = all.map(({ y, it }) => [it.price, y]);
+    const counted = hosts.filter((h) => h.count !== null);
+    const priceTerms: [number, string][] = [...counted.map((h): [number, string] => [h.item!.price, h.count!]), ...supplies.map((x): [number, string] => [x.it.price, x.y])];
     let supTerms: [number, string][] = [];
     // supervision first: one point of it outweighs every spare input there could be
-    const big = hosts.reduce((n, h) => n + h.inputs, 0) + 1;
+    const big = hosts.reduce((n, h) => n + h.inputs * (h.count === null ? 1 : h.item!.ownSupply ? 1 : caps[h.itemIndex]), 0) + 1;
     let r = 0;
     const row = (terms: [number, string][], op: string, rhs: number) => rows.push(` c${r++}: ${expr(terms)} ${op} ${num(rhs)}`);
-    binaries.push(...all.map((a) => a.y));
+    binaries.push(...supplies.map((x) => x.y), ...hosts.filter((h) => h.kind === "own").map((h) => h.count!));
+    for (const h of hosts) if (h.kind === "pool") {
+      generals.push(h.count!);
+      bounds.push(`${h.count} <= ${caps[h.itemIndex]}`);
+    }
     // every detector of a class placed, singly or in a pair
     classes.forEach((c, ci) => {
       const t: [number, string][] = [];
@@ -158,51 +162,51 @@ export function buildPanelModel(catalog: Catalog, panel: Panel, units: UnitTable
       // supervision per detector (its scheme's score, times the detectors on the input), plus one per spare input
       classes.forEach((c, ci) => xOk(ci, h) && supTerms.push([big * c.single[host.type]!.supervision - 1, `x_${ci}_${h}`]));
       pairs.forEach((_, p) => qOk(p, h) && supTerms.push([big * 2 - 1, `q_${p}_${h}`]));
-      if (host.y) supTerms.push([host.inputs, host.y]);
-      if (host.y) row([...t, [-host.inputs, host.y]], "<=", 0);
+      if (host.count) supTerms.push([host.inputs, host.count]);
+      if (host.count) row([...t, [-host.inputs, host.count]], "<=", 0);
       else row(t, "<=", host.inputs);
     });
     // keypads and bus devices
-    const keypads = all.filter((a) => a.it.kind === "keypad").map((a): [number, string] => [1, a.y]);
+    const keypads = counted.filter((h) => h.item!.kind === "keypad").map((h): [number, string] => [1, h.count!]);
     if (minKeypads > 0) row(keypads, ">=", minKeypads);
-    row(all.filter((a) => a.it.takesBus).map((a) => [1, a.y]), "<=", busLimit);
-    // identical boards are bought in order
-    items.forEach((_, j) => {
-      for (let k = 1; k < caps[j]; k++) row([[1, `y_${j}_${k}`], [-1, `y_${j}_${k - 1}`]], "<=", 0);
+    row([...counted.filter((h) => h.item!.takesBus).map((h): [number, string] => [1, h.count!]), ...supplies.filter((x) => x.it.takesBus).map((x): [number, string] => [1, x.y])], "<=", busLimit);
+    items.forEach((it, j) => {
+      // identical supplies and boards with their own supply are bought in order
+      for (let k = 1; k < caps[j]; k++) if (it.supply || it.ownSupply) row([[1, `y_${j}_${k}`], [-1, `y_${j}_${k - 1}`]], "<=", 0);
+      // no more boards of one kind than are worth buying, over all feeds
+      const pools = hosts.filter((h) => h.kind === "pool" && h.itemIndex === j);
+      if (pools.length > 1) row(pools.map((h) => [1, h.count!]), "<=", caps[j]);
     });
-    // feeding: each powered board on exactly one feed it has bought
-    const feedTerms = new Map<string, { rest: [number, string][]; alarm: [number, string][] }>(feeds.map((f) => [f, { rest: [], alarm: [] }]));
-    for (const y of fedBoards) {
-      const it = all.find((a) => a.y === y)!.it;
-      row([...feeds.map((f): [number, string] => [1, `w_${y}_${f}`]), [-1, y]], "=", 0);
-      for (const f of feeds) {
-        binaries.push(`w_${y}_${f}`);
-        if (f !== "aux") row([[1, `w_${y}_${f}`], [-1, f]], "<=", 0);
-        const M = bigM(it);
-        // r >= load - M (1 - w)
-        row([[1, `r_${y}_${f}`], ...loadOf(y, it, "restMa").map(([c, v]): [number, string] => [-c, v]), [-M, `w_${y}_${f}`]], ">=", -M);
-        row([[1, `s_${y}_${f}`], ...loadOf(y, it, "alarmMa").map(([c, v]): [number, string] => [-c, v]), [-M, `w_${y}_${f}`]], ">=", -M);
-        feedTerms.get(f)!.rest.push([1, `r_${y}_${f}`]);
-        feedTerms.get(f)!.alarm.push([1, `s_${y}_${f}`]);
-      }
-    }
-    // the panel's auxiliary output: its on-board inputs' detectors and the boards on it
-    const aux = feedTerms.get("aux")!;
-    const onRest = [...hostLoad(0, "restMa"), ...aux.rest];
-    const onAlarm = [...hostLoad(0, "alarmMa"), ...aux.alarm];
+    // a pool on a supply only when the supply is bought
+    for (const h of hosts) if (h.kind === "pool" && h.feed !== "aux") row([[1, h.count!], [-caps[h.itemIndex], h.feed!]], "<=", 0);
+    // each feed's load: the boards on it and their detectors
+    const load = (f: string, key: "restMa" | "alarmMa"): [number, string][] => [
+      ...(f === "aux" ? hostLoad(0, key) : []),
+      ...hosts.flatMap((h, hi) => (h.kind === "pool" && h.feed === f ? [[h.item![key], h.count!] as [number, string], ...hostLoad(hi, key)] : [])),
+    ];
+    const battery = (rest: [number, string][], alarm: [number, string][]): [number, string][] => [...rest.map(([c, v]): [number, string] => [c * ah.rest, v]), ...alarm.map(([c, v]): [number, string] => [c * ah.alarm, v])];
+    const onRest = load("aux", "restMa");
+    const onAlarm = load("aux", "alarmMa");
     row(onRest, "<=", panel.auxOutputMa);
     row(onAlarm, "<=", panel.auxOutputMa);
-    row([...onRest.map(([c, v]): [number, string] => [c * ah.rest, v]), ...onAlarm.map(([c, v]): [number, string] => [c * ah.alarm, v])], "<=", panel.maxBatteryAh - panel.ownStandbyMa * ah.rest - panel.ownAlarmMa * ah.alarm);
-    // supply boards: rating and battery, only when bought
-    for (const { y, it } of all) {
-      const s = it.supply ?? it.ownSupply;
-      if (!s) continue;
-      const own = !!it.ownSupply;
-      const rest: [number, string][] = own ? (hostOf.has(y) ? hostLoad(hostOf.get(y)!, "restMa") : []) : feedTerms.get(y)!.rest;
-      const alarm: [number, string][] = own ? (hostOf.has(y) ? hostLoad(hostOf.get(y)!, "alarmMa") : []) : feedTerms.get(y)!.alarm;
+    row(battery(onRest, onAlarm), "<=", panel.maxBatteryAh - panel.ownStandbyMa * ah.rest - panel.ownAlarmMa * ah.alarm);
+    // supply boards and boards with their own supply: rating and battery, only when bought
+    const own = hosts.map((h, hi) => ({ h, hi })).filter(({ h }) => h.kind === "own");
+    for (const { y, it, rest, alarm } of [
+      ...supplies.map((x) => ({ y: x.y, it: x.it, rest: load(x.y, "restMa"), alarm: load(x.y, "alarmMa") })),
+      ...own.map(({ h, hi }) => ({ y: h.count!, it: h.item!, rest: hostLoad(hi, "restMa"), alarm: hostLoad(hi, "alarmMa") })),
+    ]) {
+      const s = (it.supply ?? it.ownSupply)!;
+      // identical supplies: the earlier one carries at least the later one's rest load (breaks their symmetry)
+      const k = Number(y.split("_")[2]);
+      if (k > 0) {
+        const prev = `y_${y.split("_")[1]}_${k - 1}`;
+        const prevRest = it.supply ? load(prev, "restMa") : hostLoad(hosts.findIndex((h) => h.count === prev), "restMa");
+        row([...prevRest, ...rest.map(([c, v]): [number, string] => [-c, v])], ">=", 0);
+      }
       row([...rest, [-s.outputMa, y]], "<=", 0);
       row([...alarm, [-s.outputMa, y]], "<=", 0);
-      row([...rest.map(([c, v]): [number, string] => [c * ah.rest, v]), ...alarm.map(([c, v]): [number, string] => [c * ah.alarm, v]), [it.restMa * ah.rest + it.alarmMa * ah.alarm - s.maxBatteryAh, y]], "<=", 0);
+      row([...battery(rest, alarm), [it.restMa * ah.rest + it.alarmMa * ah.alarm - s.maxBatteryAh, y]], "<=", 0);
     }
     let objective: string;
     if ("minimise" in phase) objective = `Minimize\n obj: ${expr(priceTerms)}`;
@@ -211,7 +215,7 @@ export function buildPanelModel(catalog: Catalog, panel: Panel, units: UnitTable
       objective = `Maximize\n obj: ${expr(supTerms)}`;
     }
     supTerms = [];
-    return [objective, "Subject To", ...rows, "Bounds", ...bounds.map((b) => ` ${b}`), ...(generals.length ? ["Generals", ...generals.map((g) => ` ${g}`)] : []), "Binaries", ...binaries.map((b) => ` ${b}`), "End"].join("\n");
+    return [objective, "Subject To", ...rows, "Bounds", ...bounds.map((b) => ` ${b}`), ...(generals.length ? ["Generals", ...generals.map((g) => ` ${g}`)] : []), ...(binaries.length ? ["Binaries", ...binaries.map((b) => ` ${b}`)] : []), "End"].join("\n");
   };
-  return { panel, items, caps, hosts, feeds, fedBoards, pairs, lp };
+  return { panel, items, caps, hosts, feeds, pairs, lp };
 }

@@ -52,30 +52,61 @@ export function unitTables(placed: PlacedDetector[], catalog: Catalog, allowShar
     if (input.pathway === "class-a" && a.classA?.everyDeviceReported !== true) return false;
     return !a.findings.some((f) => f.severity === "error");
   };
-  // The loop depends on the detector type, its cable and the scheme asked for, not on its name or room.
-  const loopKey = (d: PlacedDetector) => `${d.cat.id}|${d.sched.cableM}|${JSON.stringify(d.sched.gauge)}|${d.sched.supervision}`;
+  // The loop depends on each detector's contact, tamper loop and life-safety rating and on the longest cable
+  // (lib/solver/loop-rules.ts), never on names or rooms. A longer cable only adds series resistance, which moves
+  // every reading up; so, for one kind of loop, the lengths that read without an error are those up to a limit, and
+  // a binary search over the schedule's lengths finds it in a few analyses instead of one per detector
+  // (assumed, not proven; every suggested layout is checked by the full solver before it is returned).
+  const sig = (d: PlacedDetector) => `${d.cat.contact}|${d.cat.tamper}|${isLifeSafety(d.cat)}`;
+  const gaugeOf = (d: PlacedDetector) => JSON.stringify(d.sched.gauge);
+  const lengthsByGauge = new Map<string, number[]>();
+  for (const d of placed) lengthsByGauge.set(gaugeOf(d), [...(lengthsByGauge.get(gaugeOf(d)) ?? []), d.sched.cableM]);
+  for (const [g, ls] of lengthsByGauge) lengthsByGauge.set(g, [...new Set(ls)].sort((a, b) => a - b));
+  const limits = new Map<string, number>();
+  /** Whether `dets` (the last one carrying the longest cable) read without an error on `type` with `scheme`. */
+  const cleanUpTo = (dets: PlacedDetector[], type: InputType, scheme: WiringScheme): boolean => {
+    const longest = dets.reduce((a, b) => (b.sched.cableM > a.sched.cableM ? b : a));
+    const g = gaugeOf(longest);
+    const key = `${dets.map(sig).join("+")}|${type.id}|${scheme}|${g}`;
+    let limit = limits.get(key);
+    if (limit === undefined) {
+      const ls = lengthsByGauge.get(g)!;
+      const at = (len: number) => clean(dets.map((d) => ({ ...d, sched: { ...d.sched, cableM: d === longest ? len : 0, gauge: longest.sched.gauge } })), type, scheme);
+      let lo = -1;
+      let hi = ls.length;
+      while (hi - lo > 1) {
+        const mid = (lo + hi) >> 1;
+        if (at(ls[mid])) lo = mid;
+        else hi = mid;
+      }
+      limit = lo < 0 ? -Infinity : ls[lo];
+      limits.set(key, limit);
+    }
+    return longest.sched.cableM <= limit;
+  };
   const singleMemo = new Map<string, SingleRow>();
   const singleRow = (d: PlacedDetector): SingleRow => {
-    const k = loopKey(d);
+    const k = `${sig(d)}|${d.sched.cableM}|${gaugeOf(d)}|${d.sched.supervision}`;
     let row = singleMemo.get(k);
     if (!row) {
       row = types.map((t) => {
-        const s = pickScheme(ORDER.filter((sc) => clean([d], t, sc)), d.sched.supervision);
+        const s = pickScheme(ORDER.filter((sc) => cleanUpTo([d], t, sc)), d.sched.supervision);
         return s ? { scheme: s, supervision: SCHEME_SUPERVISION[s] } : null;
       });
       singleMemo.set(k, row);
     }
     return row;
   };
+  const loopKey = (d: PlacedDetector) => `${sig(d)}|${d.sched.cableM}|${gaugeOf(d)}`;
   const shareable = (d: PlacedDetector) => allowShared && !isLifeSafety(d.cat) && d.sched.supervision === "shared-ok";
   const sharedTypes = types.map((t, i) => (t.schemes.includes("shared") && !t.lifeSafety ? i : -1)).filter((i) => i >= 0);
-  // 0: no, 1: in schedule order, 2: swapped
+  // 0: no, 1: in this order, 2: swapped
   const pairMemo = new Map<string, number[]>();
   const pairRow = (a: PlacedDetector, b: PlacedDetector): number[] => {
     const k = `${loopKey(a)}#${loopKey(b)}`;
     let row = pairMemo.get(k);
     if (!row) {
-      row = types.map((t, i) => (!sharedTypes.includes(i) ? 0 : clean([a, b], t, "shared") ? 1 : clean([b, a], t, "shared") ? 2 : 0));
+      row = types.map((t, i) => (!sharedTypes.includes(i) ? 0 : cleanUpTo([a, b], t, "shared") ? 1 : cleanUpTo([b, a], t, "shared") ? 2 : 0));
       pairMemo.set(k, row);
     }
     return row;
