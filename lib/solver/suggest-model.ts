@@ -1,6 +1,7 @@
 import type { Catalog, Panel } from "@/lib/catalog/schema";
 import type { BoardKind } from "@/lib/layout/schema";
 import type { UnitTables } from "@/lib/solver/suggest-units";
+import { panelLevelKey, supplyLevelKey } from "@/lib/solver/suggest-voltage";
 
 // The mixed-integer program for one panel, written in the LP text format HiGHS reads.
 // Variables: y (a board bought), x (singles of a class on a host), q (pairs of two classes on one shared input),
@@ -111,8 +112,11 @@ export function buildPanelModel(catalog: Catalog, panel: Panel, units: UnitTable
   });
   const pairs: [number, number][] = [];
   classes.forEach((_, a) => classes.forEach((__, b) => b >= a && pairOk[a][b].some(Boolean) && pairs.push([a, b])));
-  const xOk = (c: number, h: number) => hosts[h].type >= 0 && classes[c].single[hosts[h].type] !== null;
-  const qOk = (p: number, h: number) => hosts[h].type >= 0 && pairOk[pairs[p][0]][pairs[p][1]][hosts[h].type];
+  // the supply level a host's detectors draw from: the panel's, unless its pool hangs on a supply board
+  const levelOf = (h: Host) => (h.kind === "pool" && h.feed !== "aux" ? supplyLevelKey(items[Number(h.feed!.split("_")[1])].id, panel.id) : panelLevelKey(panel.id));
+  const powered = (c: number, h: number) => classes[c].voltOk.get(levelOf(hosts[h])) !== false;
+  const xOk = (c: number, h: number) => hosts[h].type >= 0 && classes[c].single[hosts[h].type] !== null && powered(c, h);
+  const qOk = (p: number, h: number) => hosts[h].type >= 0 && pairOk[pairs[p][0]][pairs[p][1]][hosts[h].type] && powered(pairs[p][0], h) && powered(pairs[p][1], h);
   const hostLoad = (h: number, key: "restMa" | "alarmMa"): [number, string][] => {
     const t: [number, string][] = [];
     classes.forEach((c, ci) => xOk(ci, h) && t.push([c[key], `x_${ci}_${h}`]));

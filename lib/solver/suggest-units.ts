@@ -4,6 +4,7 @@ import { PANEL_KEY, type LayoutInput } from "@/lib/layout/schema";
 import type { SupervisionPreference } from "@/lib/schedule/schema";
 import { loopSpecFor } from "@/lib/solver/loop-rules";
 import { isLifeSafety, type PlacedDetector } from "@/lib/solver/resolve";
+import { supplyLevels, voltageOk } from "@/lib/solver/suggest-voltage";
 
 // What the loop engine allows, computed once per schedule for the exact model: for every detector and input type
 // the wiring schemes that read without an error, and for every two shareable detectors whether a shared input of
@@ -21,6 +22,8 @@ export interface DetectorClass {
   restMa: number;
   alarmMa: number;
   shareable: boolean;
+  /** Per supply level key (suggest-voltage.ts): whether every member keeps its working voltage on that feed. */
+  voltOk: Map<string, boolean>;
 }
 
 export interface UnitTables {
@@ -114,14 +117,16 @@ export function unitTables(placed: PlacedDetector[], catalog: Catalog, allowShar
 
   const homeless = placed.filter((d) => !singleRow(d).some(Boolean));
   const keys = [...new Map(placed.filter(shareable).map((d) => [loopKey(d), d])).values()];
+  const levels = [...supplyLevels(catalog)];
   const classByKey = new Map<string, DetectorClass>();
   for (const d of placed) {
     const p = d.cat.power;
     const share = shareable(d);
     const compat = share ? keys.map((o) => pairRow(d, o).map((v) => (v ? 1 : 0)).join("")).join(",") : "-";
-    const key = `${JSON.stringify(singleRow(d))}|${p?.standbyMa ?? 0}|${p?.alarmMa ?? 0}|${compat}`;
+    const volt = levels.map(([, l]) => (voltageOk(d, l) ? 1 : 0)).join("");
+    const key = `${JSON.stringify(singleRow(d))}|${p?.standbyMa ?? 0}|${p?.alarmMa ?? 0}|${compat}|${volt}`;
     let c = classByKey.get(key);
-    if (!c) classByKey.set(key, (c = { members: [], single: singleRow(d), restMa: p?.standbyMa ?? 0, alarmMa: p?.alarmMa ?? 0, shareable: share }));
+    if (!c) classByKey.set(key, (c = { members: [], single: singleRow(d), restMa: p?.standbyMa ?? 0, alarmMa: p?.alarmMa ?? 0, shareable: share, voltOk: new Map(levels.map(([k, l]) => [k, voltageOk(d, l)])) }));
     c.members.push(d);
   }
   const classes = [...classByKey.values()];
