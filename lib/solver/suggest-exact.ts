@@ -18,7 +18,8 @@ import { unitTables } from "@/lib/solver/suggest-units";
 // one model per panel, solved twice: first the lowest list price, then, within the price allowed, the most
 // supervision and then the most spare inputs. Every layout is checked by the solver before it is returned.
 
-export type SuggestChoice = { kind: "cheapest" } | { kind: "most-supervised"; withinPct: number };
+export type { SuggestChoiceInput as SuggestChoice } from "@/lib/layout/suggest-choice-schema";
+import type { SuggestChoiceInput as SuggestChoice } from "@/lib/layout/suggest-choice-schema";
 
 export interface ExactOptions extends SuggestOptions {
   choice?: SuggestChoice;
