@@ -160,5 +160,11 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
   const parts: SuggestionPart[] = [{ kind: "panel", catalogId: m.panel.id, name: m.panel.name, count: 1, unitPrice: m.panel.listPrice }];
   m.items.forEach((it, j) => counts[j] && parts.push({ kind: it.kind, catalogId: it.id, name: it.name, count: counts[j], unitPrice: it.price }));
   const cost = Math.round(parts.reduce((n, p) => n + p.count * p.unitPrice, 0) * 100) / 100;
+  if (!optimal) {
+    // a time limit stopped the model: the older search (bounded) may still know a cheaper layout; never return a dearer one
+    const old = suggestHardware(schedule, catalog, { ...opts, maxCandidates: Math.min(opts.maxCandidates ?? 20_000, 20_000) });
+    if (old.found && old.cost < cost - 0.001)
+      return { ...old, proof: { optimal: false, gap, method: "search-fallback", fallbackReason: `the exact model stopped at its time limit with a dearer layout (${cost}) than the older search found`, cheapestCost: old.cost } };
+  }
   return { found: true, layout, cost, parts, result, sharedInputs: inputs.filter((i) => i.scheme === "shared").length, candidatesTried: 0, proof: { optimal, gap, method: "exact-model", cheapestCost: Math.min(cheapest, cost) } };
 }
