@@ -161,8 +161,8 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
   m.items.forEach((it, j) => counts[j] && parts.push({ kind: it.kind, catalogId: it.id, name: it.name, count: counts[j], unitPrice: it.price }));
   const cost = Math.round(parts.reduce((n, p) => n + p.count * p.unitPrice, 0) * 100) / 100;
   if (!optimal) {
-    // a time limit stopped the model: the older search (bounded) may still know a cheaper layout; never return a dearer one
-    const old = suggestHardware(schedule, catalog, { ...opts, maxCandidates: Math.min(opts.maxCandidates ?? 20_000, 20_000) });
+    // a time limit stopped the model: the older search may still know a cheaper layout; never return a dearer one
+    const old = suggestHardware(schedule, catalog, opts);
     if (old.found && old.cost < cost - 0.001)
       return { ...old, proof: { optimal: false, gap, method: "search-fallback", fallbackReason: `the exact model stopped at its time limit with a dearer layout (${cost}) than the older search found`, cheapestCost: old.cost } };
   }
