@@ -14,8 +14,8 @@ const securityHeaders = [
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // Sequelize loads dialect modules dynamically; bundling it breaks the build.
-  // pdfkit reads its font metrics from its own package folder at run time.
-  serverExternalPackages: ["sequelize", "mariadb", "pdfkit"],
+  // pdfkit reads its font metrics from its own package folder at run time; highs loads its .wasm from beside its script.
+  serverExternalPackages: ["sequelize", "mariadb", "pdfkit", "highs"],
   poweredByHeader: false,
   // Several checkouts' builds can coexist (e.g. parallel test runs): NEXT_DIST_DIR picks the folder.
   distDir: process.env.NEXT_DIST_DIR || ".next",

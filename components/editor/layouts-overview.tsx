@@ -40,7 +40,7 @@ function SuggestionCard({ s, busy, canWrite, onAccept }: { s: SuggestionView; bu
       ) : (
         <>
           <p className="mt-1 text-2xl font-semibold">{money(s.cost ?? 0)}</p>
-          <p className="text-xs text-slate-500">catalog list prices</p>
+          <p className="text-xs text-slate-500">catalog list prices · {proofWords(s)}</p>
           <ul className="mt-2 text-sm">
             {s.parts.map((p) => (
               <li key={`${p.kind}:${p.catalogId}`}>
@@ -69,6 +69,13 @@ function SuggestionCard({ s, busy, canWrite, onAccept }: { s: SuggestionView; bu
       )}
     </Card>
   );
+}
+
+/** How far the price is proven: by the exact model, within a gap a time limit left, or by the older search. */
+function proofWords(s: SuggestionView): string {
+  if (s.method === "search-fallback") return `found by the older search, not proven cheapest (${s.fallbackReason ?? "the optimiser gave no answer"})`;
+  if (s.optimal) return "proven the lowest price";
+  return s.gap === null ? "the lowest price found in the time allowed, not proven" : `within ${Math.ceil(s.gap * 1000) / 10} % of the lowest possible price`;
 }
 
 /** A site's layouts: open one, start a blank one on a panel, or take a hardware suggestion. */

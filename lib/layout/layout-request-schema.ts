@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { layoutDocumentSchema, layoutPowerSchema, pathwaySchema } from "@/lib/layout/schema";
+import { suggestChoiceSchema } from "@/lib/layout/suggest-choice-schema";
 
 // Request bodies of the layout API, shared by the route handlers, the forms and the OpenAPI document.
 
@@ -9,7 +10,7 @@ const noteSchema = z.string().trim().max(500);
 export const createLayoutSchema = z.union([
   z.strictObject({ name: nameSchema, note: noteSchema.optional(), document: layoutDocumentSchema }),
   z.strictObject({ name: nameSchema, note: noteSchema.optional(), panelId: z.string().min(1).max(63) }),
-  z.strictObject({ name: nameSchema, note: noteSchema.optional(), suggestion: z.strictObject({ allowShared: z.boolean(), busCableM: z.number().nonnegative().max(100000).optional(), pathway: pathwaySchema.optional() }) }),
+  z.strictObject({ name: nameSchema, note: noteSchema.optional(), suggestion: z.strictObject({ allowShared: z.boolean(), busCableM: z.number().nonnegative().max(100000).optional(), pathway: pathwaySchema.optional(), choice: suggestChoiceSchema.optional() }) }),
 ]);
 export type CreateLayoutInput = z.infer<typeof createLayoutSchema>;
 
@@ -30,6 +31,8 @@ export const suggestRequestSchema = z
     power: layoutPowerSchema.optional(),
     /** "class-a": wire each life-safety detector's input out and back to the panel (NFPA 72 Class A). */
     pathway: pathwaySchema.optional(),
+    /** "cheapest" (default) or the most supervised layout within a percentage of the cheapest price. */
+    choice: suggestChoiceSchema.optional(),
   })
   .optional();
 export type SuggestRequest = z.infer<typeof suggestRequestSchema>;

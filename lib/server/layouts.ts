@@ -16,7 +16,8 @@ import { layoutDocumentSchema, type LayoutDocument, type SecurityGrade } from "@
 import { standbyProfileForGrade } from "@/lib/solver/grade-rules";
 import type { CreateLayoutInput, SaveLayoutInput, SuggestRequest } from "@/lib/layout/layout-request-schema";
 import type { Schedule } from "@/lib/schedule/schema";
-import { solveLayout, type Suggestion } from "@/lib/solver";
+import { solveLayout } from "@/lib/solver";
+import type { ExactSuggestion } from "@/lib/solver/suggest-exact";
 import { suggestOffLoop } from "@/lib/server/workers/off-loop";
 import type { Severity } from "@/lib/findings";
 import { summarizeSolve, type LayoutSolveSummary } from "@/lib/layout/layout-summary";
@@ -200,7 +201,7 @@ export async function createLayout(actor: Actor, siteId: number, input: CreateLa
     document = blankDocument(input.panelId, schedule, catalog, grade);
     from = "blank";
   } else {
-    const s = await suggestOffLoop(schedule, catalog, { allowShared: input.suggestion.allowShared, busCableM: input.suggestion.busCableM, pathway: input.suggestion.pathway });
+    const s = await suggestOffLoop(schedule, catalog, { allowShared: input.suggestion.allowShared, busCableM: input.suggestion.busCableM, pathway: input.suggestion.pathway, choice: input.suggestion.choice });
     if (!s.found) throw new ApiError(422, `No suggestion: ${s.reason}`);
     document = grade ? { ...s.layout, grade } : s.layout;
     from = input.suggestion.allowShared ? "suggestion-shared" : "suggestion-single";
@@ -390,11 +391,20 @@ export interface SuggestionView {
   sharedInputs: number;
   counts: Record<Severity, number> | null;
   document: LayoutDocument | null;
+  /** How the answer was reached: the exact model (proven optimal, or the gap a time limit left) or, if the model failed, the older search. */
+  method: "exact-model" | "search-fallback";
+  optimal: boolean;
+  /** Relative gap to the proven bound when a time limit stopped the model; null when proven or unknown. */
+  gap: number | null;
+  /** In plain words, why the older search answered instead of the model. */
+  fallbackReason: string | null;
 }
 
-function suggestionView(allowShared: boolean, pathway: SuggestionView["pathway"], s: Suggestion): SuggestionView {
-  if (!s.found) return { allowShared, pathway, found: false, reason: s.reason, cost: null, parts: [], boards: 0, inputsUsed: 0, inputsTotal: 0, sharedInputs: 0, counts: null, document: null };
+function suggestionView(allowShared: boolean, pathway: SuggestionView["pathway"], s: ExactSuggestion): SuggestionView {
+  const proof = { method: s.proof.method, optimal: s.proof.optimal, gap: s.proof.optimal || !Number.isFinite(s.proof.gap) ? null : s.proof.gap, fallbackReason: s.proof.fallbackReason ?? null };
+  if (!s.found) return { allowShared, pathway, found: false, reason: s.reason, cost: null, parts: [], boards: 0, inputsUsed: 0, inputsTotal: 0, sharedInputs: 0, counts: null, document: null, ...proof };
   return {
+    ...proof,
     allowShared,
     pathway,
     found: true,
@@ -415,7 +425,7 @@ export async function suggestForSite(actor: Actor, siteId: number, opts: Suggest
   await findSite(actor, siteId);
   const [schedule, catalog] = await Promise.all([loadSchedule(siteId), catalogFor(actor.organisationId)]);
   if (schedule.length === 0) throw new ApiError(422, "The device schedule is empty: add detectors before asking for hardware.");
-  const base = { busCableM: opts?.busCableM, power: opts?.power, pathway: opts?.pathway };
+  const base = { busCableM: opts?.busCableM, power: opts?.power, pathway: opts?.pathway, choice: opts?.choice };
   const suggestions = await Promise.all([false, true].map(async (allowShared) => suggestionView(allowShared, opts?.pathway ?? "class-b", await suggestOffLoop(schedule, catalog, { ...base, allowShared }))));
   return { suggestions };
 }

@@ -3,7 +3,8 @@ import type { CommissioningProgressReport } from "@/lib/commissioning/progress";
 import type { LayoutDocument } from "@/lib/layout/schema";
 import type { Schedule } from "@/lib/schedule/schema";
 import { buildTerminalSheet } from "@/lib/sheet/build-sheet";
-import { suggestHardware, type SuggestOptions, type Suggestion } from "@/lib/solver";
+import { highsSolver } from "@/lib/solver/highs-loader";
+import { suggestExact, type ExactOptions, type ExactSuggestion } from "@/lib/solver/suggest-exact";
 import { commissioningReportPdf, type ReportMeta, type ReportPhoto } from "@/lib/server/pdf/commissioning-report-pdf";
 import type { PageSize } from "@/lib/server/pdf/pdf-kit";
 import { terminalSheetPdf, type SheetMeta } from "@/lib/server/pdf/terminal-sheet-pdf";
@@ -12,7 +13,8 @@ import { terminalSheetPdf, type SheetMeta } from "@/lib/server/pdf/terminal-shee
 // place where there is no worker (tests and scripts run the TypeScript sources, see off-loop.ts).
 
 export interface HeavyJobs {
-  suggest: { input: { schedule: Schedule; catalog: Catalog; opts: SuggestOptions }; output: Suggestion };
+  /** The exact model (HiGHS); the older search only as a fallback, said so in `proof`. */
+  suggest: { input: { schedule: Schedule; catalog: Catalog; opts: ExactOptions }; output: ExactSuggestion };
   /** The sheet is built here too: for a few dozen loops that is tens of milliseconds of loop analysis. */
   terminalSheetPdf: { input: { document: LayoutDocument; schedule: Schedule; catalog: Catalog; meta: SheetMeta; size: PageSize }; output: Uint8Array };
   commissioningReportPdf: { input: { report: CommissioningProgressReport; meta: ReportMeta; photos: ReportPhoto[]; size: PageSize }; output: Uint8Array };
@@ -21,7 +23,7 @@ export interface HeavyJobs {
 export type HeavyJobName = keyof HeavyJobs;
 
 const jobs: { [K in HeavyJobName]: (input: HeavyJobs[K]["input"]) => HeavyJobs[K]["output"] | Promise<HeavyJobs[K]["output"]> } = {
-  suggest: ({ schedule, catalog, opts }) => suggestHardware(schedule, catalog, opts),
+  suggest: async ({ schedule, catalog, opts }) => suggestExact(await highsSolver(), schedule, catalog, opts),
   terminalSheetPdf: ({ document, schedule, catalog, meta, size }) => terminalSheetPdf(buildTerminalSheet(document, schedule, catalog), meta, size),
   commissioningReportPdf: ({ report, meta, photos, size }) => commissioningReportPdf(report, meta, photos, size),
 };

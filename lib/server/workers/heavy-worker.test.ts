@@ -8,7 +8,8 @@ import { commissioningProgress } from "@/lib/commissioning/progress";
 import type { Schedule } from "@/lib/schedule/schema";
 import { buildTerminalSheet } from "@/lib/sheet/build-sheet";
 import { midLayout, midSchedule } from "@/lib/sheet/testing/sample-layouts";
-import { suggestHardware } from "@/lib/solver";
+import { highsSolver } from "@/lib/solver/highs-loader";
+import { suggestExact } from "@/lib/solver/suggest-exact";
 import { commissioningReportPdf } from "@/lib/server/pdf/commissioning-report-pdf";
 import { terminalSheetPdf } from "@/lib/server/pdf/terminal-sheet-pdf";
 import { pdfWithoutVolatile } from "@/lib/server/workers/testing/pdf-volatile";
@@ -58,9 +59,10 @@ beforeAll(async () => {
 afterAll(() => pool?.close());
 
 describe("heavy.worker.ts on a worker thread", { timeout: 120_000 }, () => {
-  it("suggests the same hardware as suggestHardware in this thread, both ways", async () => {
+  it("suggests the same hardware as the exact model in this thread, both ways (HiGHS loads inside the worker)", async () => {
     for (const allowShared of [false, true]) {
-      const here = suggestHardware(schedule, catalog, { allowShared });
+      const here = suggestExact(await highsSolver(), schedule, catalog, { allowShared });
+      expect(here.proof).toMatchObject({ method: "exact-model", optimal: true });
       expect(here.found).toBe(true);
       expect(await pool.run("suggest", { schedule, catalog, opts: { allowShared } })).toEqual(here);
     }
@@ -99,7 +101,7 @@ describe("heavy.worker.ts on a worker thread", { timeout: 120_000 }, () => {
 describe("off-loop jobs outside the Next server", { timeout: 120_000 }, () => {
   it("run in place with the same results, as a Buffer for PDFs", async () => {
     expect(process.env.NEXT_RUNTIME).toBeUndefined();
-    expect(await suggestOffLoop(schedule, catalog, { allowShared: true })).toEqual(suggestHardware(schedule, catalog, { allowShared: true }));
+    expect(await suggestOffLoop(schedule, catalog, { allowShared: true })).toEqual(suggestExact(await highsSolver(), schedule, catalog, { allowShared: true }));
     const pdf = await terminalSheetPdfOffLoop(midLayout, midSchedule, catalog, meta, "A4");
     expect(Buffer.isBuffer(pdf)).toBe(true);
     expect(pdfWithoutVolatile(pdf)).toBe(pdfWithoutVolatile(await terminalSheetPdf(sheet, meta, "A4")));

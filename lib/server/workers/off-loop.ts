@@ -5,7 +5,7 @@ import type { Catalog } from "@/lib/catalog/schema";
 import type { CommissioningProgressReport } from "@/lib/commissioning/progress";
 import type { LayoutDocument } from "@/lib/layout/schema";
 import type { Schedule } from "@/lib/schedule/schema";
-import type { SuggestOptions, Suggestion } from "@/lib/solver";
+import type { ExactOptions, ExactSuggestion } from "@/lib/solver/suggest-exact";
 import { ApiError } from "@/lib/server/errors";
 import type { ReportMeta, ReportPhoto } from "@/lib/server/pdf/commissioning-report-pdf";
 import type { PageSize } from "@/lib/server/pdf/pdf-kit";
@@ -62,8 +62,8 @@ async function offLoop<K extends HeavyJobName>(name: K, input: HeavyJobs[K]["inp
 /** A PDF's bytes from a worker arrive as a plain Uint8Array. */
 const asBuffer = (u: Uint8Array) => (Buffer.isBuffer(u) ? u : Buffer.from(u.buffer, u.byteOffset, u.byteLength));
 
-/** suggestHardware (lib/solver), off the request loop. */
-export function suggestOffLoop(schedule: Schedule, catalog: Catalog, opts: SuggestOptions): Promise<Suggestion> {
+/** suggestExact (lib/solver), off the request loop. */
+export function suggestOffLoop(schedule: Schedule, catalog: Catalog, opts: ExactOptions): Promise<ExactSuggestion> {
   return offLoop("suggest", { schedule, catalog, opts });
 }
 
