@@ -8,8 +8,9 @@ import { SheetPrintFindings } from "@/components/sheet/sheet-print-findings";
 // The screen's cards and loop drawings stay on screen; the PDF download carries both. Sizes and spacing are in
 // components/sheet/sheet-print-style.tsx, so that a full board fits one sheet of paper.
 
-/** Boards with more inputs than this print in the smaller type, so that a 32-input board still fits one page. */
+/** Boards with more inputs used than this print in the smaller type, so that a 32-input board still fits one page. */
 export const DENSE_PRINT_ROWS = 16;
+export const densePrint = (board: SheetBoard) => board.rows.filter((r) => !r.spare).length > DENSE_PRINT_ROWS;
 
 /** The printed columns of tests; a shared input's A/B/both readings sit together under one column. */
 export const PRINT_TEST_COLUMNS: { title: string; tests: { key: TestKey; tag: string }[] }[] = [
@@ -20,13 +21,18 @@ export const PRINT_TEST_COLUMNS: { title: string; tests: { key: TestKey; tag: st
   { title: "Cut at far end", tests: [{ key: "cut", tag: "" }] },
 ];
 
+/** The expected reading and what the panel reports, then a box to tick; the measured value is written beside it. */
 function Reading({ e, tag }: { e: ExpectedReading; tag: string }) {
+  // a shared input's tagged reading needs no word when the tag already says it ("A: … ☐", detector A active)
+  const word = tag && e.reports.length === 1 && e.reports[0] === e.expectedReport ? "" : e.reports.map((r) => REPORT_WORDS[r]).join(" or ");
   return (
     <span className="sheet-print-reading">
-      {tag ? `${tag}: ` : ""}
-      <strong className="whitespace-nowrap">{e.minOhms === Infinity ? "OL" : e.rangeText}</strong>{" "}
-      {tag && e.reports.length === 1 && e.reports[0] === e.expectedReport ? "" : e.reports.map((r) => REPORT_WORDS[r]).join(" or ")}
-      {e.uncertain ? " (band edge)" : ""} <span className="whitespace-nowrap text-slate-600">☐ ____</span>
+      <strong className="whitespace-nowrap">
+        {tag ? `${tag}: ` : ""}
+        {e.minOhms === Infinity ? "OL" : e.rangeText}
+      </strong>{" "}
+      {word}
+      {e.uncertain ? " (band edge)" : ""} <span className="whitespace-nowrap text-slate-600">☐</span>
     </span>
   );
 }
@@ -64,18 +70,19 @@ function InputRow({ row }: { row: SheetInput }) {
     <tr className="sheet-print-input">
       <td>
         <strong>{row.input}</strong>
-        <span className="block whitespace-nowrap">{row.terminals.replace(/ /g, "")}</span>
         <span className="block">zone {row.zones.join(", ")}</span>
       </td>
+      {/* one flowing paragraph, not a line per part: it wraps with no half-empty lines, so a row takes two or three lines */}
       <td className="break-words">
-        {row.detectors.map((d) => (
-          <span key={d.id} className="block">
+        {row.detectors.map((d, i) => (
+          <span key={d.id}>
+            {i > 0 ? " · " : ""}
             <strong>{d.label}</strong> · {d.area} / {d.room} · {d.deviceType}, {d.contact}
             {d.tamper ? " + tamper" : ""}, {d.gaugeText} {d.cableM} m{d.powered ? `, powered from ${d.poweredFrom ?? "a supply"}` : ""}
             {d.lifeSafety ? " · LIFE SAFETY" : ""}
           </span>
         ))}
-        <span className="block text-slate-700">{wiringText(row)}</span>
+        <span className="text-slate-700"> — {wiringText(row)}</span>
       </td>
       {row.expected.length === 0 ? (
         <td colSpan={PRINT_TEST_COLUMNS.length} className="font-medium">
@@ -99,7 +106,7 @@ export function SheetBoardPrint({ board }: { board: SheetBoard }) {
   const used = board.rows.filter((r): r is SheetInput => !r.spare);
   return (
     <>
-      <table className="sheet-print-table hidden w-full table-fixed border-collapse print:table" data-testid={`print-board-${board.boardKey}`} data-dense={used.length > DENSE_PRINT_ROWS ? "" : undefined}>
+      <table className="sheet-print-table hidden w-full table-fixed border-collapse print:table" data-testid={`print-board-${board.boardKey}`}>
         <colgroup>
           <col className="sheet-col-input" />
           <col className="sheet-col-detectors" />
@@ -118,7 +125,8 @@ export function SheetBoardPrint({ board }: { board: SheetBoard }) {
             </th>
           </tr>
           <tr>
-            <th>Input</th>
+            {/* terminals are always N+ / N− (lib/sheet/build-sheet.ts terminalsText); said once here to save a line a row */}
+            <th>Input (N+ / N−)</th>
             <th>Detectors, resistors, cores</th>
             {PRINT_TEST_COLUMNS.map((c) => (
               <th key={c.title}>{c.title}</th>

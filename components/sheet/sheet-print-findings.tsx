@@ -25,7 +25,7 @@ export function SheetPrintFindings({ board }: { board: SheetBoard }) {
       ))}
       {schemeNotes.map((n) => (
         <li key={n.scheme}>
-          <strong>{n.heading}:</strong> {n.groups.map((g) => g.title).join("; ")}. {n.remedy}
+          <strong>{n.heading}:</strong> {[...new Set(n.groups.map((g) => g.title))].join("; ")}. {n.remedy}
         </li>
       ))}
     </ul>

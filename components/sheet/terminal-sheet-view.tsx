@@ -7,7 +7,7 @@ import { boardSummary, spareGroups } from "@/components/sheet/sheet-words";
 import type { PaperSize } from "@/lib/sheet/sheet-request-schema";
 import { SheetInputBlock } from "@/components/sheet/sheet-input-block";
 import { SheetBoardIndex, boardAnchor } from "@/components/sheet/sheet-board-index";
-import { SheetBoardPrint } from "@/components/sheet/sheet-board-print";
+import { SheetBoardPrint, densePrint } from "@/components/sheet/sheet-board-print";
 import { SheetPrintStyle } from "@/components/sheet/sheet-print-style";
 import { SheetToolbar } from "@/components/sheet/sheet-toolbar";
 import { plural } from "@/lib/vocabulary/plural";
@@ -61,7 +61,10 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal, defau
             </p>
           </>
         ) : null}
-        <p className="mt-2 text-xs text-slate-700">{sheet.measuringNote}</p>
+        <p className="mt-2 text-xs text-slate-700">
+          {sheet.measuringNote}
+          <span className="hidden print:inline"> Write each measured reading beside the expected one and tick ☐ when the panel reports it as shown.</span>
+        </p>
         {sheet.problems.length ? (
           <ul className="mt-2 list-disc pl-5 text-sm text-fault">
             {sheet.problems.map((p, i) => (
@@ -82,7 +85,7 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal, defau
         const used = b.rows.filter((r): r is SheetInput => !r.spare);
         const spare = b.rows.filter((r): r is SpareInput => r.spare);
         return (
-          <section key={b.boardKey} id={boardAnchor(b.boardKey)} className="sheet-board mb-8 scroll-mt-4" data-testid={`sheet-board-${b.boardKey}`}>
+          <section key={b.boardKey} id={boardAnchor(b.boardKey)} className="sheet-board mb-8 scroll-mt-4" data-testid={`sheet-board-${b.boardKey}`} data-dense={densePrint(b) ? "" : undefined}>
             <div className="mb-2 border-b-2 border-ink pb-1 print:hidden">
               <h2 className="break-words text-lg font-semibold">
                 {b.name} — {b.deviceName}
