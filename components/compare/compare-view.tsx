@@ -1,5 +1,6 @@
 "use client";
 
+import { Caution } from "@/components/ui/caution";
 import type { ComparePage } from "@/lib/server/compare";
 import { Card } from "@/components/ui/card";
 import { ChooseForm } from "@/components/compare/choose-form";
@@ -42,10 +43,10 @@ export function CompareView({ site, layouts, selected, comparison, error, choice
           </div>
 
           {comparison.comparison.lifeSafety ? (
-            <p role="note" data-testid="life-safety-caution" className="rounded-md border border-warn bg-warn-soft px-3 py-2 text-sm">
-              <strong className="text-warn">Life safety.</strong> These layouts carry smoke, heat or other life-safety devices. Their design and standby battery sizing must follow the local
-              fire code and the authority having jurisdiction, and be installed and certified by licensed people. Loopwright&apos;s figures are an aid, not an approval.
-            </p>
+            <Caution testId="life-safety-caution" summary={<><strong className="text-warn">Life safety:</strong> an aid, not an approval; the local fire code and the authority having jurisdiction decide.</>}>
+              These layouts carry smoke, heat or other life-safety devices. Their design and standby battery sizing must follow the local fire code and the authority having
+              jurisdiction, and be installed and certified by licensed people. Loopwright&apos;s figures are an aid, not an approval.
+            </Caution>
           ) : null}
 
           <ChooseForm siteId={siteId} columns={cols} comparedIds={comparison.layouts.map((l) => l.id)} canChoose={canChoose} choices={choices} />

@@ -7,10 +7,11 @@ import { boardSummary, spareGroups } from "@/components/sheet/sheet-words";
 import type { PaperSize } from "@/lib/sheet/sheet-request-schema";
 import { SheetInputBlock } from "@/components/sheet/sheet-input-block";
 import { SheetBoardIndex, boardAnchor } from "@/components/sheet/sheet-board-index";
-import { SheetBoardPrint } from "@/components/sheet/sheet-board-print";
+import { SheetBoardPrint, densePrint } from "@/components/sheet/sheet-board-print";
 import { SheetPrintStyle } from "@/components/sheet/sheet-print-style";
 import { SheetToolbar } from "@/components/sheet/sheet-toolbar";
 import { plural } from "@/lib/vocabulary/plural";
+import { Caution } from "@/components/ui/caution";
 
 export interface TerminalSheetViewProps {
   view: SheetView;
@@ -50,11 +51,20 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal, defau
           </p>
         )}
         {sheet.caution ? (
-          <p role="note" data-testid="life-safety-caution" className="mt-2 rounded-md border border-warn bg-warn-soft px-3 py-2 text-sm">
-            <strong className="text-warn">Caution.</strong> {sheet.caution}
-          </p>
+          <>
+            <Caution testId="life-safety-caution" className="mt-2 print:hidden" summary={<><strong className="text-warn">Life safety:</strong> an aid, not an approval; the local fire code and the authority having jurisdiction decide.</>}>
+              {sheet.caution}
+            </Caution>
+            {/* on paper the caution is printed in full: a closed line cannot be opened there */}
+            <p className="mt-2 hidden rounded-md border border-warn px-3 py-2 print:block" data-testid="printed-caution">
+              <strong className="text-warn">Caution.</strong> {sheet.caution}
+            </p>
+          </>
         ) : null}
-        <p className="mt-2 text-xs text-slate-700">{sheet.measuringNote}</p>
+        <p className="mt-2 text-xs text-slate-700">
+          {sheet.measuringNote}
+          <span className="hidden print:inline"> Write each measured reading beside the expected one and tick ☐ when the panel reports it as shown.</span>
+        </p>
         {sheet.problems.length ? (
           <ul className="mt-2 list-disc pl-5 text-sm text-fault">
             {sheet.problems.map((p, i) => (
@@ -75,7 +85,7 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal, defau
         const used = b.rows.filter((r): r is SheetInput => !r.spare);
         const spare = b.rows.filter((r): r is SpareInput => r.spare);
         return (
-          <section key={b.boardKey} id={boardAnchor(b.boardKey)} className="sheet-board mb-8 scroll-mt-4" data-testid={`sheet-board-${b.boardKey}`}>
+          <section key={b.boardKey} id={boardAnchor(b.boardKey)} className="sheet-board mb-8 scroll-mt-4" data-testid={`sheet-board-${b.boardKey}`} data-dense={densePrint(b) ? "" : undefined}>
             <div className="mb-2 border-b-2 border-ink pb-1 print:hidden">
               <h2 className="break-words text-lg font-semibold">
                 {b.name} — {b.deviceName}
@@ -87,8 +97,8 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal, defau
             ))}
             <SheetBoardPrint board={b} />
             {spare.length ? (
-              <div className="sheet-print-input mb-4 mt-2 text-xs print:mb-1">
-                <h3 className="text-sm font-semibold print:inline print:text-xs">Spare inputs</h3>
+              <div className="sheet-print-input mb-4 mt-2 text-xs print:mb-0 print:mt-0.5 print:text-[6.5pt]">
+                <h3 className="text-sm font-semibold print:inline print:text-[6.5pt]">Spare inputs</h3>
                 <ul className="mt-1 space-y-0.5 print:inline print:space-y-0">
                   {spareGroups(spare).map((g) => (
                     <li key={g.inputs} className="print:inline">
@@ -99,7 +109,7 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal, defau
                 </ul>
               </div>
             ) : null}
-            <div className="sheet-print-input mt-4 grid grid-cols-1 gap-3 rounded-md border border-ink p-3 text-sm sm:grid-cols-3 print:mt-2 print:grid-cols-3 print:gap-1 print:p-2" data-testid="sign-off">
+            <div className="sheet-print-input mt-4 grid grid-cols-1 gap-3 rounded-md border border-ink p-3 text-sm sm:grid-cols-3 print:mt-1 print:grid-cols-3 print:gap-x-2 print:gap-y-0 print:p-1 print:text-[6.5pt]" data-testid="sign-off">
               <p className="font-semibold sm:col-span-3">Sign-off: {b.name}</p>
               {b.signOff.map((line, i) => (
                 <p key={i} className="whitespace-pre-wrap break-words">

@@ -121,7 +121,7 @@ export function buildTerminalSheet(layout: LayoutDocument, schedule: Schedule, c
       const powered = detectors.find((d) => d.powered);
       const findings = result.findings
         .filter((f) => f.severity !== "note" && f.target.kind === "input" && f.target.boardKey === bf.boardKey && f.target.input === n)
-        .map((f) => ({ severity: f.severity as "error" | "warning", message: f.message }));
+        .map((f) => ({ code: f.code, severity: f.severity as "error" | "warning", message: f.message, why: f.why }));
       rows.push({
         spare: false,
         boardKey: bf.boardKey,

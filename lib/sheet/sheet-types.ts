@@ -105,8 +105,8 @@ export interface SheetInput {
   expected: ExpectedReading[];
   /** Why there are no expected readings, when there are none. */
   noReadingsReason: string | null;
-  /** The solver's errors and warnings about this input. */
-  findings: { severity: "error" | "warning"; message: string }[];
+  /** The solver's errors and warnings about this input (code and reason kept so the printed sheet can group them per board). */
+  findings: { code: string; severity: "error" | "warning"; message: string; why: string }[];
 }
 
 export interface SpareInput {

@@ -1,5 +1,5 @@
 import { test, expect, type APIRequestContext, type Page } from "@playwright/test";
-import { readPdf, squash, type PdfPage } from "../support/pdf-text";
+import { paper, readPdf, squash, type PdfPage } from "../support/pdf-text";
 import { signedInAs } from "./support";
 import { demoSiteName } from "./support-api";
 
@@ -16,8 +16,8 @@ interface Target {
 }
 
 const PHONE = { width: 390, height: 844 };
-/** The printed footer sits in the bottom page margin (14 mm, components/sheet/sheet-print-style.tsx); 72 pt per inch, 25.4 mm per inch. */
-const FOOTER_BAND_PT = (14 / 25.4) * 72;
+/** The printed footer sits in the bottom page margin (12 mm, components/sheet/sheet-print-style.tsx); 72 pt per inch, 25.4 mm per inch. */
+const FOOTER_BAND_PT = (12 / 25.4) * 72;
 
 async function ok<T>(res: Awaited<ReturnType<APIRequestContext["get"]>>, what: string): Promise<T> {
   expect(res.status(), `${what}: ${await res.text()}`).toBe(200);
@@ -110,34 +110,39 @@ test("the board index jumps to each board", async ({ page }) => {
   expect(box && Math.abs(box.y)).toBeLessThan(40);
 });
 
-// Not checked: that every board fits one page. Measured, an 8-input board of double end-of-line loops with
-// powered detectors fits; one of four-core contacts with long labels runs to a second page (rows about 120 px).
-test("printed by Chromium, each board starts its own page, one board per page, no near-empty page and page N of M in the footer", async ({ page }) => {
-  test.setTimeout(180_000);
-  for (const t of targets) {
-    const { sheet } = await ok<SheetJson>(await page.request.get(`/api/layouts/${t.layoutId}/sheet`), "sheet");
-    const heading = (b: SheetJson["sheet"]["boards"][number]) => `${b.name} — ${b.deviceName}`;
-    await page.goto(`/sites/${t.siteId}/layouts/${t.layoutId}/sheet`);
-    await expect(page.getByTestId("terminal-sheet")).toHaveAttribute("data-paper", "A4");
-    const pdf = await readPdf(await page.pdf({ preferCSSPageSize: true, printBackground: true }));
-    // the board each page belongs to: the one whose heading it carries (the repeated table header names it)
-    const owner = pdf.pages.map((p, n) => {
-      const on = sheet.boards.filter((b) => p.text.includes(heading(b)));
-      expect(on.map((b) => b.name), `${t.what}: page ${n + 1} names exactly one board`).toHaveLength(1);
-      return sheet.boards.indexOf(on[0]);
-    });
-    // boards in order, each on at least one page, a new page at each change of board
-    expect(owner[0]).toBe(0);
-    owner.forEach((b, n) => n > 0 && expect(b - owner[n - 1], `${t.what}: page ${n + 1}`).toBeGreaterThanOrEqual(0));
-    expect(new Set(owner).size, `${t.what}: every board printed`).toBe(sheet.boards.length);
-    pdf.pages.forEach((p, n) => {
-      if (n > 0) {
-        const top = p.items.filter((i) => i.y < p.height - FOOTER_BAND_PT).sort((a, b) => a.y - b.y)[0];
-        expect(top.str.startsWith(sheet.boards[owner[n]].name), `${t.what}: page ${n + 1} starts with its board, not "${top.str}"`).toBe(true);
-      }
-      if (n < pdf.pageCount - 1) expect(usedShare(p), `${t.what}: page ${n + 1} used ${Math.round(usedShare(p) * 100)} %`).toBeGreaterThanOrEqual(0.2);
-      expect(squash(p.text), `${t.what}: page ${n + 1} footer`).toContain(`page ${n + 1} of ${pdf.pageCount}`);
-    });
-    expect(pdf.text).not.toContain("Boards on this sheet");
-  }
+/** Prints the sheet as Chromium does on the chosen paper and checks it page by page. */
+async function checkPrint(page: Page, t: Target, paperSize: "A4" | "LETTER") {
+  const { sheet } = await ok<SheetJson>(await page.request.get(`/api/layouts/${t.layoutId}/sheet`), "sheet");
+  const heading = (b: SheetJson["sheet"]["boards"][number]) => `${b.name} — ${b.deviceName}`;
+  await page.goto(`/sites/${t.siteId}/layouts/${t.layoutId}/sheet`);
+  // the organisation's default paper first (the demo organisation's is A4), then the other from the toolbar
+  if (paperSize !== "A4") await page.getByTestId("sheet-toolbar").locator("input[name=paper]").nth(1).check({ force: true });
+  await expect(page.getByTestId("terminal-sheet")).toHaveAttribute("data-paper", paperSize);
+  const pdf = await readPdf(await page.pdf({ preferCSSPageSize: true, printBackground: true }));
+  const what = `${t.what} on ${paperSize}`;
+  // the page size the print style asked for: ISO 216 A4 or US Letter, portrait
+  expect(Math.round(pdf.pages[0].width)).toBe(Math.round(paper[paperSize].width));
+  expect(Math.round(pdf.pages[0].height)).toBe(Math.round(paper[paperSize].height));
+  // one page per board: page n carries board n's heading (the table header names it) and no other board's
+  expect(pdf.pageCount, `${what}: ${pdf.pageCount} pages for ${sheet.boards.length} boards`).toBe(sheet.boards.length);
+  pdf.pages.forEach((p, n) => {
+    const on = sheet.boards.filter((b) => p.text.includes(heading(b)));
+    expect(on.map((b) => b.name), `${what}: page ${n + 1} names exactly its own board`).toEqual([sheet.boards[n].name]);
+    if (n > 0) {
+      const top = p.items.filter((i) => i.y < p.height - FOOTER_BAND_PT).sort((a, b) => a.y - b.y)[0];
+      expect(top.str.startsWith(sheet.boards[n].name), `${what}: page ${n + 1} starts with its board, not "${top.str}"`).toBe(true);
+    }
+    // every used input of the board is on its page (its row starts with the input number, at the left edge)
+    const used = sheet.boards[n].rows.filter((r) => !r.spare).length;
+    expect(p.text, `${what}: page ${n + 1} ends with its sign-off`).toContain(`Sign-off: ${sheet.boards[n].name}`);
+    if (used > 0) expect(p.items.filter((i) => /^\d+$/.test(i.str.trim()) && i.x < p.width * 0.1).length, `${what}: page ${n + 1} rows`).toBeGreaterThanOrEqual(used);
+    if (n < pdf.pageCount - 1) expect(usedShare(p), `${what}: page ${n + 1} used ${Math.round(usedShare(p) * 100)} %`).toBeGreaterThanOrEqual(0.2);
+    expect(squash(p.text), `${what}: page ${n + 1} footer`).toContain(`page ${n + 1} of ${pdf.pageCount}`);
+  });
+  expect(pdf.text).not.toContain("Boards on this sheet");
+}
+
+test("printed by Chromium on A4 and on US Letter, one page per board, each used to at least a fifth of its height, page N of M in the footer", async ({ page }) => {
+  test.setTimeout(300_000);
+  for (const t of targets) for (const size of ["A4", "LETTER"] as const) await checkPrint(page, t, size);
 });
