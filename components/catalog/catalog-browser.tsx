@@ -45,7 +45,7 @@ function KindTable({ kind, rows, state, onSort }: { kind: CatalogKind; rows: Cat
       <h2 id={`heading-${kind}`} className="mb-2 text-lg font-semibold">
         {kindHeading[kind]} <span className="text-sm font-normal text-slate-500">({shown.length})</span>
       </h2>
-      <Card className="overflow-x-auto p-0">
+      <Card className="relative overflow-x-auto p-0">
         <table className="w-full text-sm" data-testid={`catalog-table-${kind}`}>
           <thead className="bg-slate-50 text-left text-slate-500">
             <tr>

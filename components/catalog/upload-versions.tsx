@@ -7,7 +7,7 @@ const kib = (bytes: number) => `${(bytes / 1024).toFixed(1)} KiB`;
 export function UploadVersions({ uploads, inUseVersion, when }: { uploads: CatalogUpload[]; inUseVersion: number | null; when: (iso: string) => string }) {
   if (!uploads.length) return <p className="text-sm text-slate-600">Your organisation has uploaded no catalog file: the shipped catalog is in use.</p>;
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full text-sm" data-testid="upload-versions">
         <thead className="text-left text-slate-500">
           <tr>

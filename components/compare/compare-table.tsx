@@ -29,7 +29,7 @@ export function CompareTable({ siteId, comparison }: { siteId: number; compariso
   const best = comparison.comparison.best;
   const bestOn = (list: number[], i: number) => isBest(list, i, cols.length);
   return (
-    <Card className="overflow-x-auto">
+    <Card className="relative overflow-x-auto">
       <h2 className="text-lg font-semibold">Side by side</h2>
       <p className="mt-1 text-xs text-slate-600">Costs are the catalog&apos;s list prices (in its currency); resistors and batteries carry no price there and are counted apart.</p>
       <table className="mt-3 w-full min-w-[640px] border-collapse text-sm" data-testid="compare-table">

@@ -7,7 +7,7 @@ export function ComparisonChart({ columns }: { columns: readonly ChartInput[] })
   const m = chartModel(columns);
   const barH = 18;
   return (
-    <figure className="overflow-x-auto" tabIndex={0} aria-label="Comparison chart (scrolls sideways on a narrow screen)">
+    <figure className="relative overflow-x-auto" tabIndex={0} aria-label="Comparison chart (scrolls sideways on a narrow screen)">
       <svg viewBox={`0 0 ${m.width} ${m.height}`} role="img" aria-labelledby="cmp-chart-title" className="h-auto w-full min-w-[640px]" data-testid="comparison-chart" style={{ fontFamily: "inherit" }}>
         {/* one string: React renders a <title> with several children as empty on the server, and hydration then fails */}
         <title id="cmp-chart-title">{`Spare inputs and supervision coverage per layout: ${m.rows.map((r) => `${r.name}: ${r.spare.label} spare, coverage ${r.coverage.label}`).join("; ")}`}</title>

@@ -28,7 +28,7 @@ export function StatesTable({ rows, detectors, current, onSelect }: { rows: read
       <div className="mb-3">
         <Segmented legend="Show" name="table-filter" value={filter} options={FILTERS} onChange={setFilter} />
       </div>
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="w-full min-w-[720px] text-sm" data-testid="states-table">
           <caption className="sr-only">Every combination of detector states and faults with its reading and report</caption>
           <thead>

@@ -66,7 +66,7 @@ export function MemberAdmin({ initial, selfUserId }: { initial: MemberList; self
             The list could not be refreshed: {describeError(loadError)}
           </p>
         ) : null}
-        <div className="overflow-x-auto">
+        <div className="relative overflow-x-auto">
           <table className="w-full text-sm">
             <thead className="text-left text-slate-500">
               <tr>

@@ -124,7 +124,7 @@ export function SheetInputBlock({ row }: { row: SheetInput }) {
           </p>
         </div>
         {/* a wide drawing scrolls inside its box on a phone: focusable so it scrolls by keyboard too */}
-        <figure className="min-w-0 max-w-4xl overflow-x-auto focus-visible:outline-2 focus-visible:outline-signal print:mx-auto print:max-w-none" tabIndex={0} aria-label={`Schematic of input ${row.input}`}>
+        <figure className="min-w-0 max-w-4xl relative overflow-x-auto focus-visible:outline-2 focus-visible:outline-signal print:mx-auto print:max-w-none" tabIndex={0} aria-label={`Schematic of input ${row.input}`}>
           <LoopSchematic loop={sheetLoopSpec(row)} className="w-full" />
           <figcaption className="text-xs text-slate-600">The loop as wired, everything at rest: resistors drawn where they are fitted.</figcaption>
         </figure>

@@ -51,4 +51,13 @@ describe("house rules", () => {
     const offenders = screens.flatMap((f) => implicitPhoneGrids(readFileSync(f, "utf8")).map((c) => `${relative(root, f)}: ${c}`));
     expect(offenders).toEqual([]);
   });
+
+  // Visually hidden text (sr-only) is absolutely positioned: inside a scroll box that is not its containing block
+  // it escapes the box and stretches the page on a phone.
+  it("makes every sideways scroll box the containing block of what it holds", () => {
+    const loose = screens.flatMap((f) =>
+      (readFileSync(f, "utf8").match(/className="[^"]*overflow-x-auto[^"]*"/g) ?? []).filter((c) => !/["\s]relative["\s]/.test(c)).map((c) => `${relative(root, f)}: ${c}`),
+    );
+    expect(loose).toEqual([]);
+  });
 });

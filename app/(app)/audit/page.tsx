@@ -18,7 +18,7 @@ export default async function AuditPage() {
     <>
       <PageHeader title="Audit log" subtitle="Who changed what, and when (newest first)." />
       <Card>
-        <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Audit log entries">
+        <div className="relative overflow-x-auto" tabIndex={0} role="region" aria-label="Audit log entries">
           <table className="w-full text-sm">
             <thead className="text-left text-slate-600">
               <tr>

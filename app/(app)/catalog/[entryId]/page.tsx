@@ -72,7 +72,7 @@ export default async function CatalogEntryPage({ params }: { params: Promise<{ e
       ) : null}
       <details className="mt-4">
         <summary className="cursor-pointer text-sm font-medium">This entry as YAML (a start for your own upload)</summary>
-        <pre className="mt-2 overflow-x-auto rounded-md border border-line bg-white p-3 font-mono text-xs">{serializeCatalog({ [kind]: [entry] } as unknown as Catalog)}</pre>
+        <pre className="mt-2 relative overflow-x-auto rounded-md border border-line bg-white p-3 font-mono text-xs">{serializeCatalog({ [kind]: [entry] } as unknown as Catalog)}</pre>
       </details>
     </>
   );

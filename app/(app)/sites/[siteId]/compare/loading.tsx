@@ -28,7 +28,7 @@ export default function CompareLoading() {
           </div>
           <Bone className="mt-3 h-9 w-40" />
         </Card>
-        <Card className="overflow-x-auto">
+        <Card className="relative overflow-x-auto">
           <h2 className="text-lg font-semibold">Side by side</h2>
           <table className="mt-3 w-full min-w-[640px] border-collapse text-sm">
             <thead>

@@ -24,7 +24,7 @@ export default function ScheduleLoading() {
             <Bone className="h-9 w-24" />
           </div>
         </div>
-        <div className="overflow-x-auto rounded-lg border border-line bg-white">
+        <div className="relative overflow-x-auto rounded-lg border border-line bg-white">
           <TableSkeleton columns={COLUMNS} rows={12} />
         </div>
       </div>
