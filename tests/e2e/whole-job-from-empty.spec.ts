@@ -246,7 +246,13 @@ test("a new firm does a whole job from an empty database: sign-up, members, site
       await expect(d.getByRole("row", { name: /Shop front door/ })).toContainText("48 m");
 
       const after = await readApprovedSheet(d, siteId, layoutId);
-      expect(after.boards).toEqual(before.boards);
+      expect(after.boards.length).toBe(before.boards.length);
+      // line by line, so a difference names the line that changed
+      const beforeLines = before.boards.join("\n").split("\n");
+      const afterLines = after.boards.join("\n").split("\n");
+      const firstDiff = afterLines.findIndex((line, i) => line !== beforeLines[i]);
+      expect(firstDiff === -1 ? null : { line: firstDiff, before: beforeLines[firstDiff], after: afterLines[firstDiff] }).toBeNull();
+      expect(afterLines.length).toBe(beforeLines.length);
       expect(after.sheet).toBe(before.sheet);
       expect(after.pdf).toBe(before.pdf);
       expect(after.pdf).not.toContain("48 m");
