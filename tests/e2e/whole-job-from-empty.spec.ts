@@ -87,6 +87,7 @@ async function pdfText(bytes: Buffer): Promise<string> {
 async function readApprovedSheet(page: Page, siteId: number, layoutId: number) {
   await page.goto(`/sites/${siteId}/layouts/${layoutId}/sheet`);
   await expect(page.getByTestId("sheet-approval")).toContainText("Approved revision 1");
+  await page.waitForLoadState("networkidle"); // hydrated: the text read is the settled page, not one mid-render
   const boards = await page.locator("section.sheet-board").allInnerTexts();
   const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("download-pdf").click()]);
   const pdf = await pdfText(readFileSync((await download.path())!));
