@@ -17,6 +17,7 @@ import { standbyProfileForGrade } from "@/lib/solver/grade-rules";
 import type { CreateLayoutInput, SaveLayoutInput, SuggestRequest } from "@/lib/layout/layout-request-schema";
 import type { Schedule } from "@/lib/schedule/schema";
 import { solveLayout } from "@/lib/solver";
+import { solveLayoutKept } from "./solver-cache";
 import type { ExactSuggestion } from "@/lib/solver/suggest-exact";
 import { suggestOffLoop } from "@/lib/server/workers/off-loop";
 import type { Severity } from "@/lib/findings";
@@ -57,8 +58,8 @@ export interface RevisionMeta {
 }
 
 /** The server's solve of a document: the solver's findings plus the capacity rule the editor shows too. */
-export function solveForSave(doc: LayoutDocument, schedule: Schedule, catalog: Catalog): LayoutSolveSummary {
-  return summarizeSolve(doc, solveLayout(doc, schedule, catalog));
+export function solveForSave(doc: LayoutDocument, schedule: Schedule, catalog: Catalog, layoutId?: number): LayoutSolveSummary {
+  return summarizeSolve(doc, layoutId === undefined ? solveLayout(doc, schedule, catalog) : solveLayoutKept(layoutId, doc, schedule, catalog));
 }
 
 /** What in the document names things that are not in the catalog or the schedule (422 on save). */
@@ -222,7 +223,7 @@ export async function saveLayout(actor: Actor, layoutId: number, input: SaveLayo
   assertNotArchived(l);
   const [schedule, catalog] = await Promise.all([loadSchedule(l.siteId), catalogFor(actor.organisationId)]);
   checkReferences(input.document, schedule, catalog);
-  const summary = solveForSave(input.document, schedule, catalog);
+  const summary = solveForSave(input.document, schedule, catalog, l.id);
   return writeRevision(actor, l, { expectVersion: input.version, document: input.document, summary, note: input.note ?? "", name: input.name, action: "layout.save" });
 }
 
@@ -310,7 +311,7 @@ export async function restoreRevision(actor: Actor, layoutId: number, revision: 
   const [schedule, catalog] = await Promise.all([loadSchedule(l.siteId), catalogFor(actor.organisationId)]);
   const issues = referenceIssues(document, schedule, catalog);
   if (issues.length) throw new ApiError(422, `Revision ${revision} refers to hardware or detectors that no longer exist, so it cannot be restored as it is.`, issues);
-  const summary = solveForSave(document, schedule, catalog);
+  const summary = solveForSave(document, schedule, catalog, l.id);
   const { layout } = await writeRevision(actor, l, { expectVersion: expectVersion ?? l.version, document, summary, note: `Restored revision ${revision}`, action: "layout.restore", detail: { restoredFrom: revision } });
   return { layout, document };
 }
