@@ -52,8 +52,10 @@ export const NOT_APPROVED_MARKING = "NOT APPROVED — FOR REVIEW ONLY";
 export function createPdf(opts: { size: PageSize; title: string; subject?: string; marking?: string }): Pdf {
   const f = loadFonts();
   const margin = 42;
-  // `font` replaces pdfkit's default Helvetica, so none of its bundled AFM files are read.
-  const doc = new PDFDocument({ size: opts.size, margin, bufferPages: true, font: f.regular as unknown as string, info: { Title: opts.title, Subject: opts.subject ?? opts.title, Creator: "Loopwright", Producer: "Loopwright" } });
+  // An empty `font` loads no default font: pdfkit's Helvetica would read its bundled AFM files, and a default given
+  // as a buffer would be the same face as "regular" under another key, which pdfkit then re-opens and compares on
+  // every font("regular") call (fontkit parses the file each time: most of a large sheet's time went there).
+  const doc = new PDFDocument({ size: opts.size, margin, bufferPages: true, font: "", info: { Title: opts.title, Subject: opts.subject ?? opts.title, Creator: "Loopwright", Producer: "Loopwright" } });
   doc.registerFont("regular", f.regular);
   doc.registerFont("bold", f.bold);
   doc.registerFont("greek", f.greekRegular);
