@@ -53,6 +53,21 @@ function worstOf(rows: readonly Reading[], f: Reading["fault"], bad: (r: Reading
   return first!;
 }
 
+// Message writers for the findings whose rows are picked in loops: made here so that buildFindings' own
+// variables stay out of the closures (a captured variable lives on the heap, and the loops over rows slow).
+function readsText(r: Reading): () => string {
+  return () => reads(r);
+}
+function readsNotText(r: Reading, not: string): () => string {
+  return () => `${reads(r)}, not ${not}`;
+}
+function thinText(r: Reading): () => string {
+  return () => `${reads(r)}, only ${formatOhms(r.marginOhms)} from a band edge`;
+}
+function apartText(rows: readonly Reading[], groups: { words: string; count: number; i: number; j: number }[]): () => string {
+  return () => `The panel can't tell apart: ${groups.map((g) => `${g.words} (${g.count === 1 ? "" : `${g.count} cases, `}e.g. ${rows[g.i].label} and ${rows[g.j].label})`).join("; ")}`;
+}
+
 function isOnly(r: Reading, allowed: readonly Report[]): boolean {
   for (const x of r.reports) if (!allowed.includes(x)) return false;
   return true;
@@ -113,22 +128,22 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
     }
   }
   if (activeNormal)
-    push(out, target, "active-reads-normal", "error", () => reads(activeNormal), "A detector going into alarm must change what the panel reads; here the alarm is lost and nothing is reported.");
+    push(out, target, "active-reads-normal", "error", readsText(activeNormal), "A detector going into alarm must change what the panel reads; here the alarm is lost and nothing is reported.");
   const alarmAsFault = activeWrong !== null && activeWrong.reports.some((x) => x === "short" || x === "open" || x === "trouble");
   if (activeWrong)
     push(out, target, "active-misread",
       lifeSafety && alarmAsFault ? "error" : "warning",
-      () => `${reads(activeWrong)}, not ${REPORT_WORDS[activeWrong.expected]}`,
+      readsNotText(activeWrong, REPORT_WORDS[activeWrong.expected]),
       activeWrong.reports.includes("short")
         ? "The detector's alarm looks like a shorted cable to this input, so it may be reported as a fault instead of an alarm, and a real short looks like an alarm."
         : "The panel reports the detector's alarm as something else, so whoever responds is told the wrong thing.",
     );
   if (activeWrong && lifeSafety && alarmAsFault) out[out.length - 1].why += ` On a life-safety loop a fire alarm reported as a wiring fault delays the response to a fire. ${LIFE_SAFETY_CAUTION}`;
-  if (tamperNormal) push(out, target, "tamper-reads-normal", "error", () => reads(tamperNormal), "Opening the detector's cover must be reported; here it reads as normal, so the detector can be interfered with unseen.");
+  if (tamperNormal) push(out, target, "tamper-reads-normal", "error", readsText(tamperNormal), "Opening the detector's cover must be reported; here it reads as normal, so the detector can be interfered with unseen.");
   if (tamperWrong)
     push(out, target, "tamper-misread",
       "warning",
-      () => `${reads(tamperWrong)}, not open`,
+      readsNotText(tamperWrong, "open"),
       "Opening the detector's cover is reported as an alarm rather than a tamper: with the system unset it may go unreported, and the panel can't tell interference from an intruder.",
     );
 
@@ -191,14 +206,14 @@ export function buildFindings(ctx: FindingsInput, target: FindingTarget): Findin
       "Across the parts' tolerance and the cable's temperature range the panel could report either side of the edge; such a loop gives intermittent reports.",
     );
   if (thin)
-    push(out, target, "margin-thin", "note", () => `${reads(thin)}, only ${formatOhms(thin.marginOhms)} from a band edge`, "A small margin leaves little room for a contact that ages, a joint that corrodes or a hotter cable run.");
+    push(out, target, "margin-thin", "note", thinText(thin), "A small margin leaves little room for a contact that ages, a joint that corrodes or a hotter cable run.");
 
   // States the panel can't tell apart, grouped by the kinds of situation involved (an alarm and a cut, …).
   if (ctx.groups.pairs.length) {
     const groups = indistinguishableGroups(ctx.groups);
     push(out, target, "readings-indistinguishable",
       "note",
-      () => `The panel can't tell apart: ${groups.map((g) => `${g.words} (${g.count === 1 ? "" : `${g.count} cases, `}e.g. ${rows[g.i].label} and ${rows[g.j].label})`).join("; ")}`,
+      apartText(rows, groups),
       "These situations give the same report, so the panel — and whoever answers it — can't know which one happened.",
     );
   }
