@@ -344,10 +344,11 @@ function sharedMisreads(rows: readonly Reading[], masks: readonly number[]): Arr
   return out;
 }
 
+const normal = (x: Reading) => x.reports.includes("normal");
+const alarm = (x: Reading) => x.expected === "short" && x.states.includes("active") && normal(x);
+
 /** The short to quote in a defeat: one at the detector end while a detector is in alarm silences that alarm. */
 function silencingShort(rows: readonly Reading[], defeats: readonly Reading["fault"][]): Reading {
-  const normal = (x: Reading) => x.reports.includes("normal");
-  const alarm = (x: Reading) => x.expected === "short" && x.states.includes("active") && normal(x);
   const order: Reading["fault"][] = defeats.includes("short-detector") ? ["short-detector", ...defeats.filter((f) => f !== "short-detector")] : [...defeats];
   for (const f of order) {
     const hit = rows.find((x) => x.fault === f && alarm(x));
