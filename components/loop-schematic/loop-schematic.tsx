@@ -4,11 +4,13 @@
 import { useId } from "react";
 import type { InputType } from "@/lib/catalog/schema";
 import type { ConductorFault, DetectorState, Fault, LoopSpec } from "@/lib/loop";
-import { carriesTamperPair, CORE_COLOURS, coresOf, FAULT_WORDS, statesLabel } from "@/lib/loop";
+import { CABLE_CORES_WORDS, carriesTamperPair, CORE_COLOURS, coresOf, FAULT_WORDS, statesLabel, type CoreColour } from "@/lib/loop";
 import { CoreOverlay } from "./core-overlay";
 import { PLACEMENT_WORDS, SCHEME_WORDS } from "@/lib/vocabulary/words";
-import { schematicModel, type ContactEl, type ParallelEl, type ResistorEl, type Rung, type SeriesEl } from "./schematic-model";
-import { ContactH, ContactV, Dot, FAULT, INK, MUTED, ResistorH, ResistorV, WARN } from "./symbols";
+import { BRANCH_GAP, Horizontal, Line, Parallel, widthOf } from "./drawing-parts";
+import { schematicModel, type Rung } from "./schematic-model";
+import { ContactV, Dot, FAULT, INK, MUTED, ResistorH, ResistorV, WARN } from "./symbols";
+import { TamperPair } from "./tamper-pair";
 import { plural, pluralWord } from "@/lib/vocabulary/plural";
 
 export interface LoopSchematicProps {
@@ -25,64 +27,30 @@ export interface LoopSchematicProps {
   conductorFault?: ConductorFault | null;
 }
 
-const W_CONTACT = 90;
-const W_RESISTOR = 96;
-const BRANCH_GAP = 60;
 const RUNG_GAP = 92;
 const CABLE_W = 220;
 const CABLE_BG = "#eef3f6";
-
-const widthOf = (e: SeriesEl): number =>
-  e.kind === "contact" ? W_CONTACT : e.kind === "resistor" ? W_RESISTOR : Math.max(...e.branches.map((b) => b.reduce((s, x) => s + widthOf(x), 0))) + 32;
 
 function gaugeText(loop: LoopSpec): string {
   const g = loop.cable.gauge;
   return "awg" in g ? `${g.awg} AWG` : `${g.mm2} mm²`;
 }
 
-function Line({ x1, y1, x2, y2, colour = INK, width = 1.5 }: { x1: number; y1: number; x2: number; y2: number; colour?: string; width?: number }) {
-  return <line x1={x1} y1={y1} x2={x2} y2={y2} stroke={colour} strokeWidth={width} strokeLinecap="square" />;
-}
-
-function Horizontal({ e, x, y, tol }: { e: ContactEl | ResistorEl; x: number; y: number; tol: number }) {
-  return e.kind === "contact" ? <ContactH c={e} x={x} y={y} /> : <ResistorH r={e} x={x} y={y} tolerancePct={tol} />;
-}
-
-function Parallel({ p, x, yA, tol }: { p: ParallelEl; x: number; yA: number; tol: number }) {
-  const w = widthOf(p);
-  const x0 = x + 6;
-  const x1 = x + w - 6;
-  const yLast = yA + (p.branches.length - 1) * BRANCH_GAP;
-  return (
-    <g>
-      <Line x1={x0} y1={yA} x2={x0} y2={yLast} />
-      <Line x1={x1} y1={yA} x2={x1} y2={yLast} />
-      <Dot x={x0} y={yA} />
-      <Dot x={x1} y={yA} />
-      {p.branches.map((b, k) => {
-        const y = yA + k * BRANCH_GAP;
-        const bw = b.reduce((s, e) => s + widthOf(e), 0);
-        let cx = x + (w - bw) / 2;
-        return (
-          <g key={k}>
-            {k > 0 ? <Line x1={x0} y1={y} x2={x1} y2={y} /> : null}
-            {b.map((e) => {
-              const ew = widthOf(e);
-              const el = <Horizontal key={e.key} e={e as ContactEl | ResistorEl} x={cx + ew / 2} y={y} tol={tol} />;
-              cx += ew;
-              return el;
-            })}
-          </g>
-        );
-      })}
-    </g>
-  );
+/** The height a core is drawn at: the alarm pair on top, then the second pair, then the supply pair. */
+function coreY(colour: CoreColour, tamperPair: boolean, [yA, yB, yC, yD, yE, yF]: number[]): number {
+  if (colour === "yellow") return yA;
+  if (colour === "blue") return yB;
+  if (colour === "green") return tamperPair ? yC : yD;
+  if (colour === "white") return tamperPair ? yD : yC;
+  return colour === "black" ? yE : yF;
 }
 
 function describe(loop: LoopSpec, states: readonly DetectorState[], fault: Fault): string {
   const where = loop.scheme === "none" ? SCHEME_WORDS.none : PLACEMENT_WORDS[loop.placement];
   const f = fault === "none" ? "no fault" : FAULT_WORDS[fault];
-  return `${SCHEME_WORDS[loop.scheme]} loop, ${where}, ${plural(loop.detectors.length, "detector")} (${statesLabel(loop.detectors, states)}), ${f}; cable ${loop.cable.lengthM} m of ${gaugeText(loop)}.`;
+  const cores = coresOf(loop);
+  const pair = carriesTamperPair(cores) ? `, ${CABLE_CORES_WORDS[cores]}: the tamper contacts on their own pair` : "";
+  return `${SCHEME_WORDS[loop.scheme]} loop, ${where}, ${plural(loop.detectors.length, "detector")} (${statesLabel(loop.detectors, states)}), ${f}; cable ${loop.cable.lengthM} m of ${gaugeText(loop)}${pair}.`;
 }
 
 export function LoopSchematic({ loop, states: given, fault = "none", inputType, readingText, className, conductorFault }: LoopSchematicProps) {
@@ -94,13 +62,17 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
   const maxBranches = Math.max(1, ...m.far.series.map((e) => (e.kind === "parallel" ? e.branches.length : 1)));
   const yA = 90;
   const yB = yA + Math.max(150, (maxBranches - 1) * BRANCH_GAP + 80);
-  const loopBack = m.conductors === 4;
+  const loopBack = m.loopBack;
+  const pair = m.tamperPair;
   const yC = yB + 44;
-  const yD = yC + 96;
-  const bottom = (loopBack ? yD : yB) + 58;
+  const yD = yC + (pair ? 56 : 96);
+  const yE = yD + 44; // a six-core cable's supply pair: black, then red
+  const yF = yE + 36;
+  const lowest = m.supplyPair ? yF : loopBack || pair ? yD : yB;
+  const bottom = lowest + 58;
 
   const TERM_X = 104;
-  const hasPanelSide = !!(m.panel.series || m.panel.across || loopBack);
+  const hasPanelSide = !!(m.panel.series || m.panel.across || loopBack || pair);
   const PX = hasPanelSide ? 268 : 140; // cable starts here
   const CX = PX + CABLE_W; // cable ends here
   const FX = CX + 30; // far-end elements start here
@@ -115,7 +87,7 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
   const endX = rungX.length ? rungX[rungX.length - 1] : cursor + 14;
   const lastRung: Rung | undefined = m.far.rungs[m.far.rungs.length - 1];
   const rightEdge = endX + (loopBack ? 60 : lastRung?.kind === "items" ? 110 : 40);
-  const width = Math.max(rightEdge, FX + 220);
+  const width = Math.max(rightEdge, FX + 220, pair ? FX + pair.reduce((w, t) => w + widthOf(t), 0) + 60 : 0);
   const midY = (yA + yB) / 2;
   const lbX = 200; // loop-back resistor, at the panel
 
@@ -158,7 +130,7 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
           </text>
         </g>
       ) : null}
-      <rect x={FX - 16} y={yA - 60} width={width - FX + 8} height={(loopBack ? bottom - 10 : yB + 48) - (yA - 60)} rx={8} fill="none" stroke="#b9b4a6" strokeDasharray="5 4" />
+      <rect x={FX - 16} y={yA - 60} width={width - FX + 8} height={(lowest > yB ? bottom - 10 : yB + 48) - (yA - 60)} rx={8} fill="none" stroke="#b9b4a6" strokeDasharray="5 4" />
       <text x={FX - 8} y={yA - 42} fontSize={12.5} fontWeight={600} fill={MUTED}>
         at the {pluralWord(loop.detectors.length, "detector")}
       </text>
@@ -178,11 +150,11 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
         </text>
       ) : null}
 
-      <rect x={PX} y={yA - 12} width={CABLE_W} height={(loopBack ? yD : yB) - yA + 24} rx={10} fill={CABLE_BG} />
+      <rect x={PX} y={yA - 12} width={CABLE_W} height={lowest - yA + 24} rx={10} fill={CABLE_BG} />
 
       {/* the two input conductors, terminal to far end */}
       <Line x1={TERM_X} y1={yA} x2={endX} y2={yA} />
-      <Line x1={TERM_X} y1={yB} x2={endX} y2={yB} />
+      <Line x1={pair ? lbX : TERM_X} y1={yB} x2={endX} y2={yB} />
       <circle cx={TERM_X} cy={yA} r={4.5} fill="#fff" stroke={INK} strokeWidth={1.5} />
       <circle cx={TERM_X} cy={yB} r={4.5} fill="#fff" stroke={INK} strokeWidth={1.5} />
 
@@ -205,8 +177,8 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
         {gaugeText(loop)} · {m.conductors} conductors
       </text>
       {conductorFault === undefined
-        ? ["c1", "c2", "c3", "c4"].slice(0, m.conductors).map((c, i) => (
-            <text key={c} x={PX + 6} y={[yA, yB, yC, yD][i] - 4} fontSize={10} fill={MUTED}>
+        ? ["c1", "c2", "c3", "c4", "c5", "c6"].slice(0, m.conductors).map((c, i) => (
+            <text key={c} x={PX + 6} y={[yA, yB, yC, yD, yE, yF][i] - 4} fontSize={10} fill={MUTED}>
               {c}
             </text>
           ))
@@ -227,6 +199,8 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
           </text>
         </g>
       ) : null}
+
+      {pair ? <TamperPair tampers={pair} supply={m.supplyPair} termX={TERM_X} linkX={lbX} farX={FX} yB={yB} yC={yC} yD={yD} yE={yE} yF={yF} tol={tol} /> : null}
 
       {/* far end: series elements along c1, then the rungs across to c2 */}
       {m.far.series.map((e, i) =>
@@ -259,9 +233,10 @@ export function LoopSchematic({ loop, states: given, fault = "none", inputType, 
         );
       })}
 
-      {/* the cores by colour: yellow out, blue back; on a loop-back cable green returns to the resistor, white goes out to blue */}
-      {conductorFault !== undefined && !carriesTamperPair(coresOf(loop)) ? (
-        <CoreOverlay cores={CORE_COLOURS[coresOf(loop)].map((colour) => ({ colour, y: colour === "yellow" ? yA : colour === "blue" ? yB : colour === "white" ? yC : yD }))} x0={PX} x1={CX} lengthM={loop.cable.lengthM} fault={conductorFault} />
+      {/* the cores by colour: yellow out, blue back; on a loop-back cable green returns to the resistor, white goes out to
+          blue; on an alarm and tamper cable green goes out to the tampers, white back to the return */}
+      {conductorFault !== undefined ? (
+        <CoreOverlay cores={CORE_COLOURS[coresOf(loop)].map((colour) => ({ colour, y: coreY(colour, !!pair, [yA, yB, yC, yD, yE, yF]) }))} x0={PX} x1={CX} lengthM={loop.cable.lengthM} fault={conductorFault} />
       ) : null}
 
       {/* injected fault */}

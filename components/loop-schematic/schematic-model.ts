@@ -1,7 +1,7 @@
 // What the schematic draws, and where: each resistor where it physically sits, each contact open or closed
 // for the detector states. Pure; mirrors the circuits of lib/loop/README.md (T = tamper, G = alarm contacts).
 import type { DetectorState, LoopSpec } from "@/lib/loop";
-import { fittedValues } from "@/lib/loop";
+import { carriesTamperPair, coresOf, fittedValues } from "@/lib/loop";
 import type { InputType } from "@/lib/catalog/schema";
 
 export interface ContactEl {
@@ -43,8 +43,17 @@ export interface SchematicModel {
   panel: { series: ResistorEl | null; across: ResistorEl | null };
   /** At the detector(s): elements in series along the IN conductor, then the rungs across to the return. */
   far: { series: SeriesEl[]; rungs: Rung[] };
-  /** 2, or 4 when a loop-back resistor is reached through a second pair. */
-  conductors: 2 | 4;
+  /** Cores drawn: 2, 4 with a loop-back pair or a tamper pair, 6 with the detectors' supply pair as well. */
+  conductors: 2 | 4 | 6;
+  /** A loop-back resistor is reached through a second pair out and back. */
+  loopBack: boolean;
+  /**
+   * An alarm and tamper cable: the tamper contacts, in series on their own pair (green out from the link to the
+   * alarm pair's return at the panel, white back to the input's return), not on the alarm pair. Null otherwise.
+   */
+  tamperPair: ContactEl[] | null;
+  /** A six-core cable: the detectors' supply pair (red +, black 0 V joined to the input's return at the panel). */
+  supplyPair: boolean;
 }
 
 const RESISTOR_LABEL: Record<ResistorEl["role"], string> = { eol: "EOL", alarm: "alarm", "shared-a": "A", "shared-b": "B" };
@@ -142,7 +151,13 @@ export function schematicModel(loop: LoopSpec, states: readonly DetectorState[],
       rungs = [{ kind: "wire" }];
     }
   }
-  return { panel, far: { series, rungs }, conductors: loopBack ? 4 : 2 };
+  const cores = coresOf(loop);
+  if (carriesTamperPair(cores)) {
+    const six = cores === "six-core-alarm-tamper";
+    const onAlarmPair = series.filter((e) => !(e.kind === "contact" && e.role === "tamper"));
+    return { panel, far: { series: onAlarmPair, rungs }, conductors: six ? 6 : 4, loopBack: false, tamperPair: tampers, supplyPair: six };
+  }
+  return { panel, far: { series, rungs }, conductors: loopBack ? 4 : 2, loopBack, tamperPair: null, supplyPair: false };
 }
 
 /** Every resistor in the model with where it physically sits. */

@@ -27,16 +27,6 @@ export function indistinguishableGroups(masks: readonly number[], exp: ArrayLike
   } else shared.counts.fill(0);
   const { counts, firstI, firstJ } = shared;
   const pairs: Array<[number, number]> = [];
-  const add = (i: number, j: number) => {
-    pairs.push([i, j]);
-    const a = sit[i];
-    const b = sit[j];
-    const k = a < b ? a * n + b : b * n + a;
-    if (counts[k]++ === 0) {
-      firstI[k] = i;
-      firstJ[k] = j;
-    }
-  };
   const nRows = masks.length;
   const byBit: number[][] = [];
   const next: number[] = []; // single-band rows: where the rows after it start in its band's list
@@ -56,8 +46,20 @@ export function indistinguishableGroups(masks: readonly number[], exp: ArrayLike
     if (mi === 0) continue;
     if ((mi & (mi - 1)) === 0) {
       const list = byBit[31 - Math.clz32(mi)];
-      for (let k = next[i]; k < list.length; k++) if (ei !== exp[list[k]]) add(i, list[k]);
-    } else for (let j = i + 1; j < nRows; j++) if ((mi & masks[j]) !== 0 && ei !== exp[j]) add(i, j);
+      for (let k = next[i]; k < list.length; k++) if (ei !== exp[list[k]]) addPair(pairs, counts, firstI, firstJ, sit, n, i, list[k]);
+    } else for (let j = i + 1; j < nRows; j++) if ((mi & masks[j]) !== 0 && ei !== exp[j]) addPair(pairs, counts, firstI, firstJ, sit, n, i, j);
   }
   return { pairs, counts, firstI, firstJ };
+}
+
+/** Records pair (i, j) and counts it under its two situations (a ≤ b at a × n + b), keeping the first of each. */
+function addPair(pairs: Array<[number, number]>, counts: Int32Array, firstI: Int32Array, firstJ: Int32Array, sit: ArrayLike<number>, n: number, i: number, j: number): void {
+  pairs.push([i, j]);
+  const a = sit[i];
+  const b = sit[j];
+  const k = a < b ? a * n + b : b * n + a;
+  if (counts[k]++ === 0) {
+    firstI[k] = i;
+    firstJ[k] = j;
+  }
 }

@@ -148,9 +148,16 @@ test("a six-core cable: the supply cut reads as an alarm, and a short to the sup
   await page.getByTestId("conductor-kind").getByRole("radio", { name: "one core open", exact: true }).check();
   // six cores offered by colour, the supply pair among them
   await expect(page.getByTestId("conductor-cores").getByRole("button")).toHaveCount(6);
+  // the schematic draws all six cores, the tamper contact on its own pair and the supply pair beside it
+  const schematic = page.getByTestId("loop-schematic");
+  await expect(schematic.locator('[data-part="cores"] [data-core]')).toHaveCount(6);
+  await expect(schematic.locator('[data-part="tamper-pair"] [data-part="contact-t-0"]')).toHaveCount(1);
+  await expect(schematic.locator('[data-part="supply-pair"]')).toBeVisible();
   await page.getByTestId("core-red").click();
   await page.getByTestId("conductor-position").getByRole("radio", { name: "at the detector end", exact: true }).check();
   await expect(page.getByTestId("conductor-result")).toContainText(/the red core open at the detector end, cutting the detectors' supply/i);
+  await expect(schematic.locator('[data-part="conductor-fault"]')).toHaveAttribute("data-cores", "red");
+  await expect(schematic.locator('[data-part="conductor-fault"]')).toHaveAttribute("data-kind", "open");
   // the relay drops to its alarm position: the detector at rest reads as an alarm, not as a fault
   await expect(page.getByTestId("panel-report")).toHaveText(/^active/);
   await expect(page.getByTestId("conductor-verdict")).toHaveText("mistaken");
@@ -162,5 +169,8 @@ test("a six-core cable: the supply cut reads as an alarm, and a short to the sup
   await expect(page.getByTestId("conductor-result")).toContainText(/a short between the blue and black cores at the detector end/i);
   await expect(page.getByTestId("panel-report")).toHaveText("normal");
   await expect(page.getByTestId("conductor-verdict")).toHaveText("defeat");
+  // the short drawn between the two cores chosen, and the tamper contact drawn open on its pair
+  await expect(schematic.locator('[data-part="conductor-fault"]')).toHaveAttribute("data-cores", "blue black");
+  await expect(schematic.locator('[data-part="tamper-pair"] [data-part="contact-t-0"]')).toHaveAttribute("data-closed", "false");
   await shot(page, "six-core-blue-black");
 });
