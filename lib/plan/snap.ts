@@ -10,27 +10,27 @@ export type Snap = { kind: "vertex"; point: PlanPoint; route: number; index: num
  * their segments within it, else p unchanged. For a segment, `index` is that of its first vertex.
  */
 export function snapPoint(p: PlanPoint, routes: readonly (readonly PlanPoint[])[], tolerancePx: number): Snap {
-  let best: Snap = { kind: "none", point: p };
+  let vertex: Snap | null = null;
   let bestD = tolerancePx;
-  routes.forEach((route, r) =>
-    route.forEach((v, i) => {
+  for (let r = 0; r < routes.length; r++)
+    for (let i = 0; i < routes[r].length; i++) {
+      const v = routes[r][i];
       const d = distancePx(p, v);
       if (d <= bestD) {
         bestD = d;
-        best = { kind: "vertex", point: { x: v.x, y: v.y }, route: r, index: i };
+        vertex = { kind: "vertex", point: { x: v.x, y: v.y }, route: r, index: i };
       }
-    }),
-  );
-  if (best.kind === "vertex") return best;
-  routes.forEach((route, r) => {
-    for (let i = 1; i < route.length; i++) {
-      const q = nearestOnSegment(p, route[i - 1], route[i]);
+    }
+  if (vertex) return vertex;
+  let segment: Snap | null = null;
+  for (let r = 0; r < routes.length; r++)
+    for (let i = 1; i < routes[r].length; i++) {
+      const q = nearestOnSegment(p, routes[r][i - 1], routes[r][i]);
       const d = distancePx(p, q);
       if (d <= bestD) {
         bestD = d;
-        best = { kind: "segment", point: q, route: r, index: i - 1 };
+        segment = { kind: "segment", point: q, route: r, index: i - 1 };
       }
     }
-  });
-  return best;
+  return segment ?? { kind: "none", point: p };
 }
