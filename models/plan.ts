@@ -52,7 +52,7 @@ export class PlanRoute extends Model<InferAttributes<PlanRoute>, InferCreationAt
 const id = { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true } as const;
 const stamps = { createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE } as const;
 const int = (allowNull = false) => ({ type: DataTypes.INTEGER.UNSIGNED, allowNull });
-const metres = { type: DataTypes.DOUBLE, allowNull: false } as const;
+const metres = () => ({ type: DataTypes.DOUBLE, allowNull: false });
 
 export function initPlanModels(sequelize: Sequelize) {
   FloorPlan.init(
@@ -74,11 +74,11 @@ export function initPlanModels(sequelize: Sequelize) {
     { sequelize, modelName: "FloorPlan", tableName: "floor_plans" },
   );
   PlanItem.init(
-    { id, planId: int(), kind: { type: DataTypes.ENUM(...planItemKinds), allowNull: false }, detectorId: int(true), label: { type: DataTypes.STRING(200), allowNull: false, defaultValue: "" }, x: metres, y: metres, ...stamps },
+    { id, planId: int(), kind: { type: DataTypes.ENUM(...planItemKinds), allowNull: false }, detectorId: int(true), label: { type: DataTypes.STRING(200), allowNull: false, defaultValue: "" }, x: metres(), y: metres(), ...stamps },
     { sequelize, modelName: "PlanItem", tableName: "plan_items" },
   );
   PlanRoute.init(
-    { id, siteId: int(), fromItemId: int(), toItemId: int(), legs: { type: DataTypes.JSON, allowNull: false }, deviceSlackM: metres, boardSlackM: metres, riseM: metres, ...stamps },
+    { id, siteId: int(), fromItemId: int(), toItemId: int(), legs: { type: DataTypes.JSON, allowNull: false }, deviceSlackM: metres(), boardSlackM: metres(), riseM: metres(), ...stamps },
     { sequelize, modelName: "PlanRoute", tableName: "plan_routes" },
   );
   FloorPlan.hasMany(PlanItem, { foreignKey: "planId", as: "items" });
