@@ -19,6 +19,7 @@ const PURE_FOLDERS = [
   "lib/members",
   "lib/openapi",
   "lib/organisation",
+  "lib/plan",
   "lib/resistors",
   "lib/review",
   "lib/schedule",

@@ -11,6 +11,8 @@ export class ScheduleDetectorRecord extends Model<InferAttributes<ScheduleDetect
   declare area: string;
   declare room: string;
   declare cableM: number;
+  /** Where cableM came from: typed by the designer, or measured along a route on the floor plans. */
+  declare cableBasis: CreationOptional<"typed" | "measured-on-plan">;
   declare gaugeAwg: number | null;
   declare gaugeMm2: number | null;
   declare supervision: SupervisionPreference;
@@ -59,6 +61,7 @@ export function initDesignModels(sequelize: Sequelize) {
       area: { type: DataTypes.STRING(120), allowNull: false, defaultValue: "" },
       room: { type: DataTypes.STRING(120), allowNull: false, defaultValue: "" },
       cableM: { type: DataTypes.DOUBLE, allowNull: false },
+      cableBasis: { type: DataTypes.ENUM("typed", "measured-on-plan"), allowNull: false, defaultValue: "typed" },
       gaugeAwg: { type: DataTypes.TINYINT.UNSIGNED, allowNull: true },
       gaugeMm2: { type: DataTypes.DOUBLE, allowNull: true },
       supervision: { type: DataTypes.ENUM(...supervision), allowNull: false },

@@ -11,6 +11,8 @@ import { initReviewModels } from "./review";
 export { CommissioningPhoto, CommissioningReading, LayoutComment, LayoutDecision, LayoutReview, RevisionSnapshot } from "./review";
 import { initDesignModels } from "./design";
 import { initSiteStructureModels } from "./site-structure";
+import { initPlanModels } from "./plan";
+export { FloorPlan, PlanItem, PlanRoute } from "./plan";
 export { Floor, SiteInstaller } from "./site-structure";
 export { Layout, LayoutRevision, ScheduleDetectorRecord } from "./design";
 
@@ -232,4 +234,5 @@ export function initModels(sequelize: Sequelize) {
   initSiteStructureModels(sequelize);
   initDesignModels(sequelize);
   initReviewModels(sequelize);
+  initPlanModels(sequelize);
 }

@@ -5,6 +5,7 @@ import { catalogFileSchema, idSchema, inputTypeSchema, reportSchema } from "@/li
 import { analyzeRequestSchema, inputTypeRefSchema, loopSpecSchema } from "@/lib/loop";
 import { addRoomSchema, siteCopySchema, siteInputSchema, siteStructureSchema, siteUpdateSchema } from "@/lib/sites/site-schema";
 import { duplicateLayoutSchema } from "@/lib/layout/duplicate-schema";
+import { calibrateSchema, moveItemSchema, placeItemSchema, saveRouteSchema } from "@/lib/plan/plan-schema";
 import { acceptSchema, inviteSchema, joinSchema, roleChangeSchema } from "@/lib/members/member-schema";
 import { changePasswordSchema, confirmEmailSchema, emailOnlySchema, resetPasswordSchema, signUpSchema } from "@/lib/auth/sign-up-schema";
 import { organisationSettingsSchema } from "@/lib/organisation/settings-schema";
@@ -87,6 +88,10 @@ export const namedSchemas: Record<string, z.ZodType> = {
   SiteSummary: siteSummarySchema,
   SiteDetail: siteDetailSchema,
   SiteStructure: siteStructureSchema,
+  PlanCalibration: calibrateSchema,
+  PlanItemPlacement: placeItemSchema,
+  PlanItemMove: moveItemSchema,
+  PlanRoute: saveRouteSchema,
   RoomAdd: addRoomSchema,
   SiteCopy: siteCopySchema,
   LayoutDuplicate: duplicateLayoutSchema,

@@ -90,6 +90,9 @@ const rev = { name: "rev", description: "A revision number of the layout (1 is t
 const detectorId = { name: "detectorId", description: "A detector of the site's device schedule." };
 const uploadId = { name: "uploadId", description: "A stored version of the organisation's catalog file." };
 const entryId = { name: "entryId", description: "The id of a catalog entry (any kind).", schema: REF("Id") };
+const floorId = { name: "floorId", description: "A floor of the site." };
+const planId = { name: "planId", description: "A floor plan of the site." };
+const itemId = { name: "itemId", description: "A device placed on one of the site's plans." };
 const photoId = { name: "photoId", description: "A photo of the layout's commissioning record." };
 const object = (description: string) => ({ description, schema: { type: "object" } });
 const pdf = (description: string) => ({ description, schema: { type: "string", contentMediaType: "application/pdf" }, contentType: "application/pdf" });
@@ -138,6 +141,38 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
   "/api/sites/{siteId}": {
     get: ["getSite", { tag: "sites", summary: "One site with its floors, areas, rooms and installers", permission: "site:read", pathParams: [siteId], ok: { description: "The site.", schema: REF("SiteDetail") } }],
     patch: ["updateSite", { tag: "sites", summary: "Change the site's details or its assigned installers", description: "installerUserIds replaces the assignment; each must be a member with the installer role (422 otherwise).", permission: "site:write", pathParams: [siteId], body: "SiteUpdate", ok: { description: "The site as saved.", schema: REF("SiteDetail") } }],
+  },
+  "/api/sites/{siteId}/plans": {
+    get: ["listPlans", { tag: "plans", summary: "The site's floor plans with their scale and placed devices, and the cable routes with their runs", permission: "site:read", pathParams: [siteId], ok: object("{ plans, routes }.") }],
+  },
+  "/api/sites/{siteId}/floors/{floorId}/plan": {
+    put: [
+      "uploadPlan",
+      {
+        tag: "plans",
+        summary: "Upload or replace the floor's plan",
+        description: "PNG or JPEG by its bytes, at most 20 MiB and 100 million pixels; 201 when new, 200 when replaced. A replacement keeps the placed devices, and the scale only when the size in pixels is unchanged.",
+        permission: "schedule:write",
+        pathParams: [siteId, floorId],
+        bodyContent: { contentType: "multipart/form-data", schema: { type: "object", properties: { file: { type: "string", contentMediaType: "image/*" } }, required: ["file"] } },
+        ok: { status: 201, ...object("{ plan, replaced, scaleKept }.") },
+      },
+    ],
+  },
+  "/api/sites/{siteId}/plans/{planId}/image": {
+    get: ["getPlanImage", { tag: "plans", summary: "The plan's drawing, as stored", permission: "site:read", pathParams: [siteId, planId], ok: { description: "The image.", schema: { type: "string" }, contentType: "image/*" } }],
+  },
+  "/api/sites/{siteId}/plans/{planId}/calibration": {
+    put: ["calibratePlan", { tag: "plans", summary: "Set the plan's scale from two points and the real distance between them", description: "The distance is in the organisation's length unit (metres or feet). Routes crossing the plan are re-measured and their detectors' cable runs updated.", permission: "schedule:write", pathParams: [siteId, planId], body: "PlanCalibration", ok: object("{ plan, remeasured }.") }],
+  },
+  "/api/sites/{siteId}/plans/{planId}/items": {
+    post: ["placePlanItem", { tag: "plans", summary: "Place a scheduled detector or another device on the plan", description: "A detector is placed once per site (409 when it already is).", permission: "schedule:write", pathParams: [siteId, planId], body: "PlanItemPlacement", ok: { status: 201, ...object("The placed device.") }, errors: [409] }],
+  },
+  "/api/sites/{siteId}/plan-items/{itemId}": {
+    patch: ["movePlanItem", { tag: "plans", summary: "Move a placed device on its plan", permission: "schedule:write", pathParams: [siteId, itemId], body: "PlanItemMove", ok: object("The placed device.") }],
+  },
+  "/api/sites/{siteId}/plan-routes": {
+    put: ["savePlanRoute", { tag: "plans", summary: "Save a device's cable route to its board, one leg per floor", description: "Replaces the device's earlier route. The run (plan length × each floor's scale + slack at each end + rise) becomes the detector's cable length, marked as measured on plan.", permission: "schedule:write", pathParams: [siteId], body: "PlanRoute", ok: object("The route and its run.") }],
   },
   "/api/sites/{siteId}/structure": {
     put: [
@@ -435,6 +470,7 @@ export function openApiDocument(): OpenApiDocument {
       { name: "catalog", description: "The shipped catalog and the organisation's uploaded catalog file." },
       { name: "review", description: "Comments, review steps and decisions on layouts." },
       { name: "sheets", description: "Terminal sheets and exports for installers and monitoring centres." },
+      { name: "plans", description: "Floor plans, devices placed on them and cable routes measured on them." },
       { name: "commissioning", description: "Meter readings and photos proving each loop." },
       { name: "members", description: "Who works on the organisation's designs, and in which role." },
       { name: "session", description: "Signing in and out." },

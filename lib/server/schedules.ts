@@ -100,7 +100,9 @@ export async function updateDetector(actor: Actor, siteId: number, detectorId: n
     // edit that keeps the place (a cable length) is never refused for a place the structure lost meanwhile
     const [area, room] = [patch.area ?? r.area, patch.room ?? r.room];
     const place = area !== r.area || room !== r.room ? await placeInStructure(siteId, area, room, transaction) : {};
-    await r.update(rowColumns({ ...patch, ...place }), { transaction });
+    // a length typed over a measured one is the designer's own figure again
+    const typed = patch.cableM !== undefined && patch.cableM !== Number(r.cableM) ? { cableBasis: "typed" as const } : {};
+    await r.update({ ...rowColumns({ ...patch, ...place }), ...typed }, { transaction });
     await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "schedule.update", entityType: "schedule_detector", entityId: r.id, detail: { siteId, patch } }, transaction);
     return r;
   });
@@ -145,7 +147,7 @@ export async function bulkEditDetectors(actor: Actor, siteId: number, edit: Bulk
     const rows = await ScheduleDetectorRecord.findAll({ where: { id: { [Op.in]: ids }, siteId }, attributes: ["id", "label", "area", "room"], transaction });
     if (rows.length !== ids.length) throw new ApiError(404, `${ids.length - rows.length} of the selected detectors are not in this schedule; nothing was changed.`);
     const patch = edit.patch.area !== undefined || edit.patch.room !== undefined ? { ...edit.patch, ...(await bulkPlace(siteId, rows, edit.patch, transaction)) } : edit.patch;
-    await ScheduleDetectorRecord.update(rowColumns(patch), { where: { id: { [Op.in]: ids }, siteId }, transaction });
+    await ScheduleDetectorRecord.update({ ...rowColumns(patch), ...(patch.cableM !== undefined ? { cableBasis: "typed" as const } : {}) }, { where: { id: { [Op.in]: ids }, siteId }, transaction });
     await audit({ organisationId: actor.organisationId, userId: actor.userId, action: "schedule.bulk-update", entityType: "site", entityId: siteId, detail: { ids, patch: edit.patch } }, transaction);
     return { updated: ids.length };
   });

@@ -414,6 +414,90 @@ export const routes: RouteEntry[] = [
   },
   { method: "GET", path: "/api/loops/input-types", access: "loop:analyze", body: "none", success: 200, orgScoped: false, build: async () => ({ method: "GET", url: "/api/loops/input-types" }) },
 
+  // floor plans
+  { method: "GET", path: "/api/sites/[siteId]/plans", access: "site:read", body: "none", success: 200, orgScoped: true, build: async (ctx) => ({ method: "GET", url: `/api/sites/${ctx.demo.siteId}/plans` }) },
+  {
+    method: "PUT",
+    path: "/api/sites/[siteId]/floors/[floorId]/plan",
+    access: "schedule:write",
+    body: "multipart",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => {
+      const p = await ctx.fixtures.floorPlans();
+      return { method: "PUT", url: `/api/sites/${p.siteId}/floors/${p.floorId}/plan`, multipart: { file: ctx.fixtures.planFile() } };
+    },
+    note: "Replaces the fixture's plan (200); a first upload answers 201.",
+  },
+  {
+    method: "GET",
+    path: "/api/sites/[siteId]/plans/[planId]/image",
+    access: "site:read",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => {
+      const p = await ctx.fixtures.floorPlans();
+      return { method: "GET", url: `/api/sites/${p.siteId}/plans/${p.planIds[0]}/image` };
+    },
+  },
+  {
+    method: "PUT",
+    path: "/api/sites/[siteId]/plans/[planId]/calibration",
+    access: "schedule:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => {
+      const p = await ctx.fixtures.floorPlans();
+      return { method: "PUT", url: `/api/sites/${p.siteId}/plans/${p.planIds[0]}/calibration`, json: { a: { x: 10, y: 10 }, b: { x: 10, y: 410 }, distance: 8 } };
+    },
+    requiredKeys: ["a", "b", "distance"],
+  },
+  {
+    method: "POST",
+    path: "/api/sites/[siteId]/plans/[planId]/items",
+    access: "schedule:write",
+    body: "json",
+    success: 201,
+    orgScoped: true,
+    build: async (ctx) => {
+      const p = await ctx.fixtures.floorPlans();
+      return { method: "POST", url: `/api/sites/${p.siteId}/plans/${p.planIds[0]}/items`, json: { kind: "keypad", label: "Hall keypad", x: 300, y: 120 } };
+    },
+    requiredKeys: ["kind", "x", "y"],
+  },
+  {
+    method: "PATCH",
+    path: "/api/sites/[siteId]/plan-items/[itemId]",
+    access: "schedule:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => {
+      const p = await ctx.fixtures.floorPlans();
+      return { method: "PATCH", url: `/api/sites/${p.siteId}/plan-items/${p.detectorItemId}`, json: { x: 140, y: 90 } };
+    },
+    requiredKeys: ["x", "y"],
+  },
+  {
+    method: "PUT",
+    path: "/api/sites/[siteId]/plan-routes",
+    access: "schedule:write",
+    body: "json",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => {
+      const p = await ctx.fixtures.floorPlans();
+      const legs = [
+        { planId: p.planIds[0], points: [{ x: 100, y: 100 }, { x: 100, y: 600 }] },
+        { planId: p.planIds[1], points: [{ x: 100, y: 600 }, { x: 200, y: 200 }] },
+      ];
+      return { method: "PUT", url: `/api/sites/${p.siteId}/plan-routes`, json: { fromItemId: p.detectorItemId, toItemId: p.panelItemId, legs } };
+    },
+    requiredKeys: ["fromItemId", "toItemId", "legs"],
+  },
+
   // sites
   { method: "GET", path: "/api/sites", access: "site:read", body: "none", success: 200, orgScoped: false, build: async () => ({ method: "GET", url: "/api/sites" }) },
   {

@@ -76,6 +76,10 @@ export interface Fixtures {
   photo(): Promise<{ layoutId: number; photoId: number }>;
   /** A small JPEG photo of terminations. */
   photoFile(): FilePart;
+  /** A floor plan image (a PNG header naming 2000 × 1000 pixels). */
+  planFile(): FilePart;
+  /** A new site with two floors, a calibrated plan on each, a detector placed on the first and the panel on the second. */
+  floorPlans(): Promise<{ siteId: number; floorId: number; planIds: [number, number]; detectorId: string; detectorItemId: number; panelItemId: number }>;
   /** A catalog file the shipped catalog accepts. */
   goodCatalogFile(): FilePart;
   /** A unique e-mail address under .example. */

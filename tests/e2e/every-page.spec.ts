@@ -26,6 +26,7 @@ const signedInRoutes = [
   "/audit",
   "/sites/:site",
   "/sites/:site/schedule",
+  "/sites/:site/plans",
   "/sites/:site/layouts",
   "/sites/:site/compare?ids=:first,:second",
   ...layoutPages(":first"),

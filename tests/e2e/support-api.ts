@@ -7,6 +7,7 @@ import bcrypt from "bcryptjs";
 import { roles, type Role } from "@/lib/auth/permissions";
 import { RIVAL_PASSWORD, rivalOrganisationName, rivalSiteName, rivalUsers } from "@/scripts/demo/seed-rival";
 import { scheduleCsv } from "@/tests/api-registry/routes";
+import { pngHeader } from "@/lib/plan/test-images";
 import type { Caller, DemoObjects, FilePart, Fixtures, RequestSpec } from "@/tests/api-registry/types";
 import { DEMO_PASSWORD, authFile, baseURL, demo, port, signedOut, type SavedState } from "./support";
 
@@ -221,6 +222,7 @@ export function makeFixtures(admin: APIRequestContext, conn: mariadb.Connection,
   const goodCatalogFile = (): FilePart => ({ name: "good-upload.yaml", mimeType: "application/yaml", buffer: readFileSync("tests/fixtures/catalog/good-upload.yaml") });
   const uniqueEmail = (prefix: string) => `${prefix}.${Date.now().toString(36)}.${++unique}@matrix.example`;
   const photoFile = (): FilePart => ({ name: "terminations.jpg", mimeType: "image/jpeg", buffer: readFileSync("tests/fixtures/photos/terminations.jpg") });
+  const planFile = (): FilePart => ({ name: "plan.png", mimeType: "image/png", buffer: Buffer.from(pngHeader(2000, 1000)) });
   // Review and commissioning steps are the engineer's (the admin may not approve or record readings): a session of its own.
   let engineerApi: Promise<APIRequestContext> | undefined;
   const engineer = () => (engineerApi ??= savedApi({ request } as Playwright, "engineer"));
@@ -309,6 +311,25 @@ export function makeFixtures(admin: APIRequestContext, conn: mariadb.Connection,
     goodCatalogFile,
     uniqueEmail,
     photoFile,
+    planFile,
+    async floorPlans() {
+      const site = await ok(
+        await admin.post("/api/sites", { data: { name: `${scratchPrefix}plans ${++unique}`, floors: [{ name: "Ground floor", areas: [{ name: "Front", rooms: [{ name: "Hall" }] }] }, { name: "First floor", areas: [{ name: "Back", rooms: [{ name: "Office" }] }] }] } }),
+        "plan site",
+      );
+      const siteId = site.id as number;
+      const floorIds = (site.floors as { id: number }[]).map((f) => f.id);
+      const planIds = [] as number[];
+      for (const floorId of floorIds) {
+        const up = await ok(await admin.put(`/api/sites/${siteId}/floors/${floorId}/plan`, { multipart: { file: planFile() } }), "plan upload");
+        planIds.push(up.plan.id);
+        await ok(await admin.put(`/api/sites/${siteId}/plans/${up.plan.id}/calibration`, { data: { a: { x: 0, y: 0 }, b: { x: 500, y: 0 }, distance: 10 } }), "calibration");
+      }
+      const d = await ok(await admin.post(`/api/sites/${siteId}/schedule`, { data: { label: "Plan door", catalogId: "contact-door-surface", area: "Front", room: "Hall", cableM: 10, gauge: { awg: 22 }, supervision: "single-eol" } }), "plan detector");
+      const det = await ok(await admin.post(`/api/sites/${siteId}/plans/${planIds[0]}/items`, { data: { kind: "detector", detectorId: d.id, x: 100, y: 100 } }), "place detector");
+      const panel = await ok(await admin.post(`/api/sites/${siteId}/plans/${planIds[1]}/items`, { data: { kind: "panel", label: "Panel", x: 200, y: 200 } }), "place panel");
+      return { siteId, floorId: floorIds[0], planIds: [planIds[0], planIds[1]] as [number, number], detectorId: d.id as string, detectorItemId: det.id as number, panelItemId: panel.id as number };
+    },
     approvedLayout,
     async passedLayout() {
       const { layoutId, loops } = await approvedLayout();

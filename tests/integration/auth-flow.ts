@@ -38,11 +38,12 @@ export class Browser {
     readonly extraHeaders: Record<string, string> = {},
   ) {}
 
-  async call(handler: Handler, method: string, path: string, options: { form?: Record<string, string>; json?: unknown; params?: Record<string, string | string[]> } = {}): Promise<Response> {
+  async call(handler: Handler, method: string, path: string, options: { form?: Record<string, string>; json?: unknown; multipart?: FormData; params?: Record<string, string | string[]> } = {}): Promise<Response> {
     const headers = new Headers(this.extraHeaders);
     if (this.jar.size) headers.set("cookie", [...this.jar].map(([k, v]) => `${k}=${encodeURIComponent(v)}`).join("; "));
-    let body: string | undefined;
-    if (options.form) {
+    let body: string | FormData | undefined;
+    if (options.multipart) body = options.multipart; // the request sets the multipart boundary itself
+    else if (options.form) {
       headers.set("content-type", "application/x-www-form-urlencoded");
       body = new URLSearchParams(options.form).toString();
     } else if (options.json !== undefined) {

@@ -30,6 +30,9 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
             <Link href={`/sites/${site.id}/schedule`} className="rounded-md border border-line bg-white px-3 py-2 text-sm font-medium hover:bg-slate-50">
               Device schedule
             </Link>
+            <Link href={`/sites/${site.id}/plans`} className="rounded-md border border-line bg-white px-3 py-2 text-sm font-medium hover:bg-slate-50">
+              Floor plans
+            </Link>
             <Link href={`/sites/${site.id}/compare`} className="rounded-md border border-line bg-white px-3 py-2 text-sm font-medium hover:bg-slate-50">
               Compare layouts
             </Link>
