@@ -11,6 +11,7 @@ import { coreMap, usesLoopBack } from "@/lib/sheet/core-map";
 import { sheetResistors } from "@/lib/sheet/sheet-resistors";
 import type { SheetBoard, SheetDetector, SheetInput, SpareInput, TerminalSheet } from "@/lib/sheet/sheet-types";
 import { expectedReadings, zoneReports } from "@/lib/sheet/test-readings";
+import { buildZoneList } from "@/lib/sheet/zone-list";
 import { PLACEMENT_WORDS, SCHEME_WORDS } from "@/lib/vocabulary/words";
 
 // The terminal sheet of a layout: per board, every input with its zones, detectors, resistors, cores and the
@@ -167,5 +168,6 @@ export function buildTerminalSheet(layout: LayoutDocument, schedule: Schedule, c
     unplaced,
     problems,
     supplies: result.supplies,
+    zoneList: buildZoneList(result.zones, boards, panel?.zoneLabelLength),
   };
 }
