@@ -26,6 +26,9 @@ async function demoIds(request: APIRequestContext): Promise<Ids> {
   return { siteId: site.id, layouts, schedule: detectors };
 }
 
+/** Text with no white space: pdf.js gives a line break where a table cell wraps, even inside a word ("glass- break"). */
+const tight = (s: string) => s.replace(/\s+/g, "");
+
 /** The label as a keypad of `length` characters shows it, counted by code point. */
 const shown = (label: string, length: number) => [...label].slice(0, length).join("");
 
@@ -69,9 +72,9 @@ test("the zone list shows every zone with its keypad label, in the page, the PDF
     // the PDF carries every zone's keypad label
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("zone-list-pdf").click()]);
     expect(download.suggestedFilename()).toMatch(/^zone-list-.*\.pdf$/);
-    const text = squash((await readPdf(readFileSync((await download.path())!))).text);
-    expect(text).toContain("Zone list for programming");
-    for (const [i, keypad] of keypadLabels.entries()) expect(text, `zone ${i + 1}`).toContain(squash(cutOffs[i] ? `${keypad} [cut off: ${cutOffs[i]}]` : keypad));
+    const text = (await readPdf(readFileSync((await download.path())!))).text;
+    expect(squash(text)).toContain("Zone list for programming");
+    for (const [i, keypad] of keypadLabels.entries()) expect(tight(text), `zone ${i + 1}`).toContain(tight(cutOffs[i] ? `${keypad} [cut off: ${cutOffs[i]}]` : keypad));
 
     // the CSV has one record per zone, keypad label and cut-off part apart
     const csv = await page.request.get((await page.getByTestId("zone-list-csv").getAttribute("href"))!);
@@ -92,8 +95,9 @@ test("the terminal sheet PDF carries the zone list as a section", async ({ page 
   const layout = layouts.find((l) => l.name === "Large panel with shared inputs")!;
   const res = await page.request.get(`/api/layouts/${layout.id}/sheet/pdf?size=A4`);
   expect(res.status()).toBe(200);
-  const text = squash((await readPdf(await res.body())).text);
-  expect(text).toContain("Zone list for programming");
+  const text = (await readPdf(await res.body())).text;
+  expect(squash(text)).toContain("Zone list for programming");
   const csv = readCsv(await (await page.request.get(`/api/layouts/${layout.id}/zones/csv`)).text());
-  for (const r of csv.records.slice(1)) expect(text).toContain(squash(r[2] ? `${r[1]} [cut off: ${r[2]}]` : r[1]));
+  expect(csv.records.length).toBeGreaterThan(40);
+  for (const r of csv.records.slice(1)) expect(tight(text)).toContain(tight(r[2] ? `${r[1]} [cut off: ${r[2]}]` : r[1]));
 });
