@@ -50,6 +50,8 @@ export const SOLVER_FINDING_CODES = [
   "detector-type-unknown",
   "detectors-unplaced",
   "inputs-short",
+  "zones-short",
+  "receivers-short",
   "input-too-many-detectors",
   "shared-needs-two",
   "scheme-not-supported",

@@ -4,7 +4,7 @@ import Link from "next/link";
 import { useSelectedLayoutSegment } from "next/navigation";
 import { LAYOUT_TABS, tabOfSegment } from "@/components/layout-frame/layout-tabs-list";
 
-/** The layout's four pages as tabs; the current one follows the address, so the frame can stay put between them. */
+/** The layout's pages as tabs; the current one follows the address, so the frame can stay put between them. */
 export function LayoutTabNav({ base }: { base: string }) {
   const current = tabOfSegment(useSelectedLayoutSegment());
   return (

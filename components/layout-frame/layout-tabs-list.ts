@@ -1,11 +1,12 @@
 // The pages of one layout, in the order the frame shows them.
 
-export type LayoutTab = "editor" | "review" | "sheet" | "commissioning";
+export type LayoutTab = "editor" | "review" | "sheet" | "zones" | "commissioning";
 
 export const LAYOUT_TABS: { tab: LayoutTab; label: string; path: string }[] = [
   { tab: "editor", label: "Editor", path: "" },
   { tab: "review", label: "Review", path: "/review" },
   { tab: "sheet", label: "Terminal sheet", path: "/sheet" },
+  { tab: "zones", label: "Zone list", path: "/zones" },
   { tab: "commissioning", label: "Commissioning", path: "/commissioning" },
 ];
 

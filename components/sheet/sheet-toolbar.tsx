@@ -61,8 +61,11 @@ export function SheetToolbar({ approved, layoutId, siteId, revision, size, onSiz
       <a className="rounded-md bg-signal px-3 py-2 font-medium text-white hover:bg-[#0c5a5a]" href={`/api/layouts/${layoutId}/sheet/pdf?size=${size}&${rev}`} data-testid="download-pdf">
         Download PDF ({size === "A4" ? "A4" : "Letter"})
       </a>
+      <a className="text-signal underline" href={`/sites/${siteId}/layouts/${layoutId}/zones?${rev}`} data-testid="zone-list-link">
+        Zone list for programming
+      </a>
       <a className="text-signal underline" href={`/api/sites/${siteId}/exports/zones.csv?layoutId=${layoutId}&${rev}`} data-testid="zones-csv">
-        Zone list (CSV)
+        Zone list for the monitoring centre (CSV)
       </a>
       <a className="text-signal underline" href={`/api/sites/${siteId}/exports/bom.csv?layoutId=${layoutId}&${rev}`} data-testid="bom-csv">
         Bill of materials (CSV)

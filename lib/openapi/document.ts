@@ -376,6 +376,12 @@ const PATHS: Record<string, Partial<Record<Method, [string, OperationSpec]>>> = 
   "/api/layouts/{layoutId}/sheet/pdf": {
     get: ["getSheetPdf", { tag: "sheets", summary: "The terminal sheet as a PDF", permission: "sheet:read", pathParams: [layoutId], query: [sizeQuery, revisionQuery], ok: pdf("The terminal sheet.") }],
   },
+  "/api/layouts/{layoutId}/zones/pdf": {
+    get: ["getZoneListPdf", { tag: "sheets", summary: "The zone list for programming as a PDF: every zone with its keypad label, type, area, part-set, options, input and resistors", permission: "sheet:read", pathParams: [layoutId], query: [sizeQuery, revisionQuery], ok: pdf("The zone list.") }],
+  },
+  "/api/layouts/{layoutId}/zones/csv": {
+    get: ["getZoneListCsv", { tag: "sheets", summary: "The zone list for programming as RFC 4180 CSV", permission: "sheet:read", pathParams: [layoutId], query: [revisionQuery], ok: csv("Zone, keypad label, the part cut off, full label, zone type, area, part-set, options, wireless, input, resistors.") }],
+  },
   "/api/layouts/{layoutId}/sheet/send": {
     post: ["sendSheet", { tag: "sheets", summary: "E-mail the terminal sheet PDF to the site's assigned installer", description: "409 when the site has no installer, or when the revision is not approved and `confirmUnapproved` is not true (the e-mail and every PDF page then say NOT APPROVED — FOR REVIEW ONLY).", permission: "sheet:send", pathParams: [layoutId], body: "SheetSend", ok: object("{ sent }."), errors: [409] }],
   },

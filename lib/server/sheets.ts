@@ -18,6 +18,10 @@ import type { TerminalSheet } from "@/lib/sheet/sheet-types";
 import type { SheetMeta } from "@/lib/server/pdf/terminal-sheet-pdf";
 import { terminalSheetPdfOffLoop } from "@/lib/server/workers/off-loop";
 import type { PageSize } from "@/lib/server/pdf/pdf-kit";
+import { zoneListPdf } from "@/lib/server/pdf/zone-list-pdf";
+import type { ZoneList } from "@/lib/sheet/zone-list";
+import { zoneProgrammingCsv } from "@/lib/sheet/zone-list-csv";
+import { paperOf } from "@/lib/sheet/sheet-request-schema";
 
 // Terminal sheets, zone lists and bills of materials of a layout revision: by default the approved revision
 // (the one to wire), else the current one.
@@ -148,4 +152,38 @@ export async function bomCsvFor(actor: Actor, layoutId: number, opts: SheetOptio
   const ctx = await loadSheetContext(actor, layoutId, opts);
   const fmt = makeFormat(actor.settings);
   return { csv: bomCsv(billOfMaterials(ctx.document, ctx.schedule, ctx.catalog), { currency: fmt.settings.currency, plain: fmt.moneyPlain }), fileName: `${fileStem("bom", ctx.site.name, ctx.layout.name, `rev-${ctx.revision}`)}.csv` };
+}
+
+export interface ZoneListView {
+  layoutId: number;
+  siteId: number;
+  meta: SheetMeta;
+  approved: boolean;
+  frozen: RevisionContext["frozen"];
+  panelName: string | null;
+  list: ZoneList;
+  /** Life-safety devices are among the zones: the page and PDF carry the caution. */
+  caution: string | null;
+}
+
+function zoneListViewOf(ctx: RevisionContext, settings: FormatSettings): ZoneListView {
+  const sheet = buildTerminalSheet(ctx.document, ctx.schedule, ctx.catalog);
+  return { layoutId: ctx.layout.id, siteId: ctx.site.id, meta: sheetMetaOf(ctx, settings), approved: ctx.review.approvedRevision === ctx.revision, frozen: ctx.frozen, panelName: sheet.panel?.name ?? null, list: sheet.zoneList, caution: sheet.caution };
+}
+
+/** The zone list for programming: the approved revision (with its frozen schedule and catalog) unless another is asked for. */
+export async function getZoneList(actor: Actor, layoutId: number, opts: SheetOptions = {}): Promise<ZoneListView> {
+  return zoneListViewOf(await loadSheetContext(actor, layoutId, opts), actor.settings);
+}
+
+export async function zoneListPdfFor(actor: Actor, layoutId: number, opts: SheetOptions & { size?: PageSize } = {}): Promise<{ pdf: Buffer; fileName: string }> {
+  const ctx = await loadSheetContext(actor, layoutId, opts);
+  const view = zoneListViewOf(ctx, actor.settings);
+  const pdf = await zoneListPdf(view.list, { ...view.meta, panelName: view.panelName, caution: view.caution }, opts.size ?? paperOf(actor.settings));
+  return { pdf, fileName: `${fileStem("zone-list", ctx.site.name, ctx.layout.name, `rev-${ctx.revision}`)}.pdf` };
+}
+
+export async function zoneProgrammingCsvFor(actor: Actor, layoutId: number, opts: SheetOptions = {}): Promise<{ csv: string; fileName: string }> {
+  const ctx = await loadSheetContext(actor, layoutId, opts);
+  return { csv: zoneProgrammingCsv(zoneListViewOf(ctx, actor.settings).list), fileName: `${fileStem("zone-list", ctx.site.name, ctx.layout.name, `rev-${ctx.revision}`)}.csv` };
 }

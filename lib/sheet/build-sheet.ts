@@ -5,11 +5,13 @@ import { formatOhms } from "@/lib/resistors/format-ohms";
 import { formatGauge, type Schedule, type ScheduleDetector } from "@/lib/schedule/schema";
 import { createSolver } from "@/lib/solver";
 import { isLifeSafety } from "@/lib/solver/resolve";
+import { PANEL_AUX_NAME } from "@/lib/solver/power-rules";
 import { SHEET_LIFE_SAFETY_CAUTION } from "@/lib/sheet/caution";
 import { coreMap, usesLoopBack } from "@/lib/sheet/core-map";
 import { sheetResistors } from "@/lib/sheet/sheet-resistors";
 import type { SheetBoard, SheetDetector, SheetInput, SpareInput, TerminalSheet } from "@/lib/sheet/sheet-types";
 import { expectedReadings, zoneReports } from "@/lib/sheet/test-readings";
+import { buildZoneList } from "@/lib/sheet/zone-list";
 import { PLACEMENT_WORDS, SCHEME_WORDS } from "@/lib/vocabulary/words";
 
 // The terminal sheet of a layout: per board, every input with its zones, detectors, resistors, cores and the
@@ -58,7 +60,8 @@ export function buildTerminalSheet(layout: LayoutDocument, schedule: Schedule, c
   const byId = new Map<string, ScheduleDetector>(schedule.map((d) => [d.id, d]));
   const layoutInputs = new Map<string, LayoutInput>();
   for (const inp of layout.inputs) if (!layoutInputs.has(`${inp.boardKey}#${inp.input}`)) layoutInputs.set(`${inp.boardKey}#${inp.input}`, inp);
-  const supplyName = new Map(result.supplies.map((s) => [s.supplyKey, s.name]));
+  // a detector is wired to the panel's auxiliary output, whatever else the panel's battery figures carry
+  const supplyName = new Map(result.supplies.map((s) => [s.supplyKey, s.supplyKey === PANEL_KEY ? PANEL_AUX_NAME : s.name]));
   const feedOf = new Map(result.detectors.map((d) => [d.detectorId, supplyName.get(d.supplyKey) ?? d.supplyKey]));
   const panel = ix.panels.get(layout.panelId) ?? null;
   const problems = result.findings.filter((f) => f.severity === "error" && f.target.kind === "layout").map((f) => f.message);
@@ -165,5 +168,6 @@ export function buildTerminalSheet(layout: LayoutDocument, schedule: Schedule, c
     unplaced,
     problems,
     supplies: result.supplies,
+    zoneList: buildZoneList(result.zones, boards, panel?.zoneLabelLength),
   };
 }

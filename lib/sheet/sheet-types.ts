@@ -3,6 +3,7 @@ import type { ContactType, DetectorCategory, Report, WiringScheme } from "@/lib/
 import type { BoardKind } from "@/lib/layout/schema";
 import type { DetectorState, Fault, Placement, ResistorUse } from "@/lib/loop/types";
 import type { ScheduleCableGauge } from "@/lib/schedule/schema";
+import type { ZoneList } from "@/lib/sheet/zone-list";
 
 // The terminal sheet: the installer's per-board wiring sheet, as data. The PDF and the page render this.
 // Open readings are `Infinity`, as in the loop engine (use loopJsonReplacer for JSON).
@@ -143,4 +144,6 @@ export interface TerminalSheet {
   problems: string[];
   /** Each supply's figures from the same solve as the screens: loads, where the current goes, the battery to fit. */
   supplies: SupplyFigures[];
+  /** Every zone as it is keyed into the panel, wireless detectors included. */
+  zoneList: ZoneList;
 }

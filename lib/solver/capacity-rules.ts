@@ -82,6 +82,6 @@ export function capacityFigures(r: Resolved, schedule: ScheduleDetector[], out: 
   if (un) out.push(un);
   return {
     boards,
-    totals: { inputsTotal, inputsUsed, inputsFree: Math.max(0, inputsTotal - inputsUsed), zonesUsed, maxZones: r.panel.maxZones, detectorsPlaced: zonesUsed, unplacedIds: unplaced.map((d) => d.id) },
+    totals: { inputsTotal, inputsUsed, inputsFree: Math.max(0, inputsTotal - inputsUsed), zonesUsed, maxZones: r.panel.maxZones, detectorsPlaced: zonesUsed, unplacedIds: unplaced.map((d) => d.id), unplacedWirelessIds: unplaced.filter((d) => r.ix.wirelessDetectors.has(d.catalogId)).map((d) => d.id) },
   };
 }

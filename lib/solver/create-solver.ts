@@ -43,7 +43,7 @@ export function createSolverWith(analyze: AnalyzeLoop, schedule: Schedule, catal
         findings: out,
         counts: { error: 0, warning: 0, note: 0 },
         boards: [],
-        totals: { inputsTotal: 0, inputsUsed: 0, inputsFree: 0, zonesUsed: 0, maxZones: 0, detectorsPlaced: 0, unplacedIds: schedule.map((d) => d.id) },
+        totals: { inputsTotal: 0, inputsUsed: 0, inputsFree: 0, zonesUsed: 0, maxZones: 0, detectorsPlaced: 0, unplacedIds: schedule.map((d) => d.id), unplacedWirelessIds: schedule.filter((d) => ix.wirelessDetectors.has(d.catalogId)).map((d) => d.id) },
         bus: null,
         supplies: [],
         detectors: [],

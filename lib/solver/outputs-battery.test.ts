@@ -4,6 +4,7 @@ import { conductorOhms } from "@/lib/loop";
 import type { LayoutDocument, OutputDevice } from "@/lib/layout/schema";
 import { solveLayout } from "@/lib/solver";
 import { deviceDraw } from "@/lib/solver/output-rules";
+import { PANEL_AUX_NAME, panelSupplyName } from "@/lib/solver/power-rules";
 import { zonedCatalog } from "@/lib/solver/testing/fixture-catalog";
 import { board, emptyLayout } from "@/lib/solver/testing/fixture-schedule";
 
@@ -113,5 +114,32 @@ describe("the voltage at a sounder", () => {
     expect(v.ok).toBe(true);
     expect(v.okOnBattery).toBe(false);
     expect(r.findings.map((f) => f.code)).toContain("output-device-voltage-low-on-battery");
+  });
+});
+
+describe("the panel supply's name says what its figures carry", () => {
+  it("names the siren and programmable outputs beside the auxiliary output once sounders are on them", () => {
+    expect(panelSupply(emptyLayout("fx-panel-small")).name).toBe("Control panel auxiliary output");
+    const siren = withOutputs([{ boardKey: "panel", output: 1, deviceIds: ["front"] }], [dev("front", "fx-sounder-out")]);
+    expect(panelSupply(siren).name).toBe("Control panel auxiliary output and siren outputs");
+    const both = withOutputs(
+      [
+        { boardKey: "panel", output: 1, deviceIds: ["front"] },
+        { boardKey: "panel", output: 3, deviceIds: ["gate"] }, // a transistor programmable output (fixture)
+      ],
+      [dev("front", "fx-sounder-out"), dev("gate", "fx-strobe")],
+    );
+    const s = panelSupply(both);
+    expect(s.name).toBe("Control panel auxiliary output and siren and programmable outputs");
+    // the battery note names the same heading; a sounder on an output module leaves the panel's name alone
+    const note = solveLayout(both, [], zonedCatalog).findings.find((f) => f.code === "battery-needed" && f.target.kind === "supply" && f.target.supplyKey === "panel");
+    expect(note?.message.startsWith(`${s.name}: standby battery`)).toBe(true);
+    const onModule = withOutputs([{ boardKey: "m1", output: 1, deviceIds: ["front"] }], [dev("front", "fx-sounder-out")], { boards: [board("m1", "outputs", "fx-relays-4", 1)] });
+    expect(panelSupply(onModule).name).toBe("Control panel auxiliary output");
+  });
+
+  it("keeps the auxiliary output's own name where its rating is meant", () => {
+    expect(panelSupplyName(new Set())).toBe(PANEL_AUX_NAME);
+    expect(panelSupplyName(new Set(["programmable"]))).toBe("Control panel auxiliary output and programmable outputs");
   });
 });

@@ -11,11 +11,24 @@ import type { PlacedDetector, Resolved, ResolvedBoard } from "@/lib/solver/resol
 import { CHECK_EDITION, resolveStandby } from "@/lib/solver/standby-profiles";
 import type { DetectorVoltage, OutputDeviceVoltage, SolveResult, SupplyFigures } from "@/lib/solver/types";
 import { outputDeviceVoltage, type OutputLoad } from "@/lib/solver/output-rules";
+import { outputSlots, panelOutputBlocks } from "@/lib/layout/outputs";
 
 // Current from each supply against its rating, standby battery, and the voltage left at each powered detector.
 
 /** Conductor temperature for the voltage-drop figure: the hot end of the default range (common practice, no published source). */
 export const VOLTAGE_DROP_TEMP_C = 40;
+
+/** The panel's supply as its auxiliary output: what powered detectors and boards are wired to, and what its rating is for. */
+export const PANEL_AUX_NAME = "Control panel auxiliary output";
+
+/**
+ * The panel's battery figures carry its own outputs' sounders and strobes beside the auxiliary output, so their heading
+ * names both, e.g. "Control panel auxiliary output and siren outputs"; without output loads it is the auxiliary output alone.
+ */
+export function panelSupplyName(purposes: ReadonlySet<"siren" | "programmable">): string {
+  const used = (["siren", "programmable"] as const).filter((p) => purposes.has(p));
+  return used.length ? `${PANEL_AUX_NAME} and ${used.join(" and ")} outputs` : PANEL_AUX_NAME;
+}
 
 /** Volts to the centivolt: a drop of a few hundredths matters near the limit. */
 const volts = (v: number) => String(Number(v.toFixed(2)));
@@ -104,7 +117,7 @@ export function checkPower(
     supplies.push(s);
     bySupply.set(s.supplyKey, s);
   };
-  add({ supplyKey: PANEL_KEY, name: "Control panel auxiliary output", kind: "panel", volts: panel.supplyVolts, endVolts: panel.endOfDischargeVolts ?? defaultEndOfDischargeVolts(panel.supplyVolts), ratingMa: panel.auxOutputMa, loadRestMa: 0, loadAlarmMa: 0, outputRestMa: 0, outputAlarmMa: 0, ownRestMa: panel.ownStandbyMa, ownAlarmMa: panel.ownAlarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: panel.maxBatteryAh, powers: [] });
+  add({ supplyKey: PANEL_KEY, name: PANEL_AUX_NAME, kind: "panel", volts: panel.supplyVolts, endVolts: panel.endOfDischargeVolts ?? defaultEndOfDischargeVolts(panel.supplyVolts), ratingMa: panel.auxOutputMa, loadRestMa: 0, loadAlarmMa: 0, outputRestMa: 0, outputAlarmMa: 0, ownRestMa: panel.ownStandbyMa, ownAlarmMa: panel.ownAlarmMa, batteryRestMa: 0, batteryAlarmMa: 0, breakdown: [], batteryNeededAh: 0, batteryPick: null, maxBatteryAh: panel.maxBatteryAh, powers: [] });
   for (const b of r.boards) {
     if (!b.entry || !b.board) continue;
     if (b.entry.kind === "supply")
@@ -155,9 +168,13 @@ export function checkPower(
 
   // Sounders and strobes: on the panel's own outputs they draw from its battery beside the auxiliary output; on a
   // board's outputs they draw through the supply that feeds the board, counting against its rating.
+  const panelPurposes = new Set<"siren" | "programmable">();
+  const panelSlots = outputSlots(panelOutputBlocks(panel), PANEL_KEY);
   for (const l of loads) {
     const feed = l.boardKey === PANEL_KEY ? panelAux : (feedOf.get(l.boardKey) ?? panelAux);
     if (l.boardKey === PANEL_KEY) {
+      const purpose = panelSlots.find((x) => x.output === l.output)?.purpose;
+      if (purpose) panelPurposes.add(purpose);
       feed.outputRestMa += l.restMa;
       feed.outputAlarmMa += l.alarmMa;
     } else {
@@ -165,6 +182,8 @@ export function checkPower(
       feed.loadAlarmMa += l.alarmMa;
     }
   }
+
+  panelAux.name = panelSupplyName(panelPurposes);
 
   // Standby battery.
   const { profile, standbyH, alarmMin } = resolveStandby(power);
@@ -177,7 +196,7 @@ export function checkPower(
       out.push({
         code: "supply-overloaded",
         severity: "error",
-        message: `${s.name} supplies ${fmt(s.loadRestMa)} mA at rest and ${fmt(s.loadAlarmMa)} mA in alarm; it is rated ${fmt(s.ratingMa)} mA`,
+        message: `${s.supplyKey === PANEL_KEY ? PANEL_AUX_NAME : s.name} supplies ${fmt(s.loadRestMa)} mA at rest and ${fmt(s.loadAlarmMa)} mA in alarm; it is rated ${fmt(s.ratingMa)} mA`,
         why: "Past its rating the output's protection trips or its voltage sags, and everything on it can drop out. Move boards to a power supply or choose a larger one.",
         target,
       });

@@ -13,6 +13,7 @@ import { buildFromSolution } from "@/lib/solver/suggest-build";
 import { buildPanelModel, type PanelModel } from "@/lib/solver/suggest-model";
 import { noFitReason } from "@/lib/solver/suggest-reasons";
 import { unitTables } from "@/lib/solver/suggest-units";
+import { splitWireless, withReceivers } from "@/lib/solver/suggest-wireless";
 
 // The cheapest hardware that carries a schedule, proven by a mixed-integer program (HiGHS) rather than searched:
 // one model per panel, solved twice: first the lowest list price, then, within the price allowed, the most
@@ -90,6 +91,8 @@ function solveLp(highs: Highs, lp: string, timeLimitS: number, start?: Solved): 
 }
 
 export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog, opts: ExactOptions): ExactSuggestion {
+  const { wired, wireless } = splitWireless(schedule, catalog);
+  if (wireless.length) return withReceivers(suggestExact(highs, wired, catalog, opts), schedule, wireless, catalog);
   const fallback = (why: string, cheapestCost?: number): ExactSuggestion => {
     const s = suggestHardware(schedule, catalog, opts);
     return { ...s, proof: { optimal: false, gap: Infinity, method: "search-fallback", fallbackReason: why, cheapestCost } };

@@ -1,3 +1,4 @@
+import { splitWireless, withReceivers } from "@/lib/solver/suggest-wireless";
 import type { Catalog, InputType, Panel } from "@/lib/catalog/schema";
 import { analyzeLoop } from "@/lib/loop";
 import { indexCatalog, type CatalogIndex } from "@/lib/layout/catalog-index";
@@ -132,6 +133,8 @@ function itemsFor(ix: CatalogIndex, panel: Panel): Item[] {
 }
 
 export function suggestHardware(schedule: Schedule, catalog: Catalog, opts: SuggestOptions): Suggestion {
+  const { wired, wireless } = splitWireless(schedule, catalog);
+  if (wireless.length) return withReceivers(suggestHardware(wired, catalog, opts), schedule, wireless, catalog);
   const ix = indexCatalog(catalog);
   const placed: PlacedDetector[] = [];
   for (const sched of schedule) {

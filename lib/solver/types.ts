@@ -26,6 +26,8 @@ export interface CapacityTotals {
   maxZones: number;
   detectorsPlaced: number;
   unplacedIds: string[];
+  /** The wireless ones among them: each waits for a zone and a place on a receiver, not for an input. */
+  unplacedWirelessIds: string[];
 }
 
 export interface BusFigures {

@@ -56,11 +56,14 @@ const rows: Row[] = [
   ["Office door", "contact-door-recessed", F, "Office", 39, "shared-ok"],
   ["Office motion", "motion-wall", F, "Office", 40, "shared-ok"],
   ["Store door", "contact-door-recessed", F, "Store", 44, "double-eol"],
+  // wireless: learnt by a receiver, no loop; the schedule still asks for a cable run, so 1 m stands for none
+  ["Store wireless motion", "wireless-motion", F, "Store", 1, "double-eol"],
+  ["Study rooms wireless door", "wireless-door", F, "Study rooms", 1, "double-eol"],
 ];
 
 export const demoScheduleRows: ScheduleRow[] = rows.map(([label, catalogId, area, room, cableM, supervision]) => ({ label, catalogId, area, room, cableM, gauge: { awg: 22 }, supervision }));
 
-/** The demo schedule, and two layouts suggested from it: one detector per input, and with shared inputs. */
+/** The demo schedule, and two layouts suggested from it: one detector per input, and with shared inputs; both learn the two wireless detectors on a receiver. */
 export async function seedDemoDesign(transaction: Transaction, ids: { organisationId: number; siteId: number; userId: number }, catalog: Catalog): Promise<void> {
   const recs = await ScheduleDetectorRecord.bulkCreate(
     demoScheduleRows.map((r, position) => ({ siteId: ids.siteId, position, label: r.label, catalogId: r.catalogId, area: r.area, room: r.room, cableM: r.cableM, gaugeAwg: 22, gaugeMm2: null, supervision: r.supervision })),
@@ -84,11 +87,11 @@ const BACK_OF_HOUSE = new Set([B, "Staff kitchen", "Office", "Store"]);
 /**
  * The shared-input demo layout with the rest of a panel's programming filled in, so a newcomer sees it at once:
  * two areas set from the keypads, zone types (hold-up buttons, fire detectors, the entrance as entry/exit with its
- * lobby on the entry route), and two outdoor sounders (one with its own battery), an indoor sounder and a strobe on
+ * lobby on the entry route, the wireless detectors learnt by a receiver), and two outdoor sounders (one with its own battery), an indoor sounder and a strobe on
  * the panel's outputs.
  */
 export function withZonesAndSounders(doc: LayoutDocument, schedule: Schedule): LayoutDocument {
-  const placed = new Set(doc.inputs.flatMap((i) => i.detectorIds));
+  const placed = new Set([...doc.inputs.flatMap((i) => i.detectorIds), ...(doc.wireless ?? []).flatMap((w) => w.detectorIds)]);
   const keypads = doc.boards.filter((b) => b.kind === "keypad").map((b) => b.key);
   const zones = schedule
     .filter((d) => placed.has(d.id))

@@ -331,6 +331,16 @@ export const routes: RouteEntry[] = [
     note: "a small approved layout: the demo layout's 41 loops take pdfkit over a second to lay out",
   },
   {
+    method: "GET",
+    path: "/api/layouts/[layoutId]/zones/pdf",
+    access: "sheet:read",
+    body: "none",
+    success: 200,
+    orgScoped: true,
+    build: async (ctx) => ({ method: "GET", url: `/api/layouts/${ctx.demo.layoutId}/zones/pdf?size=A4` }),
+  },
+  { method: "GET", path: "/api/layouts/[layoutId]/zones/csv", access: "sheet:read", body: "none", success: 200, orgScoped: true, build: async (ctx) => ({ method: "GET", url: `/api/layouts/${ctx.demo.layoutId}/zones/csv` }) },
+  {
     method: "POST",
     path: "/api/layouts/[layoutId]/sheet/send",
     access: "sheet:send",

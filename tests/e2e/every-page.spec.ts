@@ -14,7 +14,7 @@ const viewports = [
 ] as const;
 
 /** Every app/**\/page.tsx, with placeholders for the demo ids; the development outbox is a 404 in a build and is left out. */
-const layoutPages = (id: string) => [`/sites/:site/layouts/${id}`, `/sites/:site/layouts/${id}/review`, `/sites/:site/layouts/${id}/sheet`, `/sites/:site/layouts/${id}/commissioning`];
+const layoutPages = (id: string) => [`/sites/:site/layouts/${id}`, `/sites/:site/layouts/${id}/review`, `/sites/:site/layouts/${id}/sheet`, `/sites/:site/layouts/${id}/zones`, `/sites/:site/layouts/${id}/commissioning`];
 const signedInRoutes = [
   "/",
   "/catalog",

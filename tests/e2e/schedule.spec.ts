@@ -102,7 +102,7 @@ test.describe(() => {
     await openHome(page);
     await page.getByTestId("site-list").getByText("Marrowbank Community Library").click();
     await page.getByRole("link", { name: "Device schedule" }).click();
-    await expect(rows(page)).toHaveCount(41);
+    await expect(rows(page)).toHaveCount(43); // the demo schedule: 41 wired and 2 wireless detectors (scripts/demo/seed-demo-design.ts)
     await expect(page.getByTestId("fire-caution")).toBeVisible();
     await expect(page.getByRole("button", { name: "Add detector" })).toHaveCount(0);
     await expect(page.getByRole("button", { name: "Import CSV" })).toHaveCount(0);

@@ -8,7 +8,7 @@ import { createLayout, deleteLayout, getLayout, listLayouts, redraftFromSchedule
 import { compareSiteLayouts, getReview, reviewAction } from "@/lib/server/review";
 import { approvedScheduleDrift } from "@/lib/server/schedule-drift";
 import { createDetector, deleteDetectors, listSchedule, updateDetector } from "@/lib/server/schedules";
-import { getTerminalSheet, terminalSheetPdfFor } from "@/lib/server/sheets";
+import { getTerminalSheet, getZoneList, terminalSheetPdfFor, zoneProgrammingCsvFor } from "@/lib/server/sheets";
 import { loopJsonReplacer } from "@/lib/loop/loop-json";
 import type { SheetInput } from "@/lib/sheet/sheet-types";
 import { AuditEntry, Layout, LayoutDecision, LayoutRevision, Organisation } from "@/models";
@@ -77,7 +77,7 @@ describe("a second pair of eyes", () => {
 });
 
 describe("the approved design is frozen", () => {
-  it("keeps the sheet, its PDF, commissioning and comparison of approved revisions byte-identical after schedule edits", async () => {
+  it("keeps the sheet, its PDF, the zone list, commissioning and comparison of approved revisions byte-identical after schedule edits", async () => {
     const f = await submittedByDesigner("Frozen");
     await reviewAction(f.actors.engineer, f.layout.id, { action: "approve" });
     const { layout: second } = await createLayout(f.actors.designer, f.site.id, { name: "Option B", document: documentFor(f.schedule, 2) });
@@ -92,6 +92,8 @@ describe("the approved design is frozen", () => {
       pdf: (await readPdf((await terminalSheetPdfFor(f.actors.installer, f.layout.id)).pdf)).pages.map((p) => p.text),
       commissioning: json(await getCommissioning(f.actors.installer, f.layout.id)),
       comparison: json(await compareSiteLayouts(f.actors.engineer, f.site.id, [f.layout.id, second.id])),
+      zones: json(await getZoneList(f.actors.installer, f.layout.id)),
+      zonesCsv: (await zoneProgrammingCsvFor(f.actors.installer, f.layout.id)).csv,
     });
     const before = await snapshot();
 
@@ -111,6 +113,9 @@ describe("the approved design is frozen", () => {
     expect(after.pdf).toEqual(before.pdf);
     expect(after.commissioning).toBe(before.commissioning);
     expect(after.comparison).toBe(before.comparison);
+    expect(after.zones).toBe(before.zones);
+    expect(after.zonesCsv).toBe(before.zonesCsv);
+    expect(before.zonesCsv).toContain("Hall motion"); // deleted from the schedule since, still a zone of the approved revision
     expect(before.sheet).toContain('"cableM":12');
 
     // the layout says what changed, and a new draft takes it in

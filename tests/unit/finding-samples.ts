@@ -32,6 +32,8 @@ const samples: Sample[] = [
     doc: emptyLayout("fx-panel-small", { boards: [board("b1", "expansion", "fx-exp-8-shared", 1)], inputs: [inp("panel", 1, ["d1", "d2"], { scheme: "double-eol" }), inp("b1", 1, ["d3"], { scheme: "shared" }), inp("panel", 2, ["d4", "d5"], { scheme: "shared" })] }),
     schedule: doors(5),
   },
+  // wireless detectors wait for zones and a receiver, not for inputs
+  { doc: emptyLayout("fx-panel-small"), schedule: [...doors(2), ...pirs(3, "fx-w-pir")], catalog: catalogWithPanel("fx-panel-small", { maxZones: 4 }) },
   // loops: sharing, supervision below what the schedule asks, life safety
   { doc: emptyLayout("fx-panel-large", { inputs: [inp("panel", 1, ["a", "b"]), inp("panel", 2, ["c"], { scheme: "single-eol" })] }), schedule: [det("a", "fx-door", { supervision: "shared-ok" }), det("b", "fx-door", { supervision: "double-eol" }), det("c", "fx-door", { supervision: "double-eol" })] },
   { doc: emptyLayout("fx-panel-large", { inputs: [inp("panel", 1, ["s", "a"]), inp("panel", 2, ["h"], { scheme: "single-eol" })] }), schedule: [det("s", "fx-smoke", { label: "Landing smoke" }), det("a", "fx-door", { supervision: "shared-ok" }), det("h", "fx-heat", { label: "Kitchen heat" })] },

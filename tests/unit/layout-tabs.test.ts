@@ -6,6 +6,7 @@ describe("tabOfSegment", () => {
     expect(tabOfSegment(null)).toBe("editor");
     expect(tabOfSegment("review")).toBe("review");
     expect(tabOfSegment("sheet")).toBe("sheet");
+    expect(tabOfSegment("zones")).toBe("zones");
     expect(tabOfSegment("commissioning")).toBe("commissioning");
   });
   it("every tab's path leads back to the tab", () => {

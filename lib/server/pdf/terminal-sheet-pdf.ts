@@ -2,6 +2,7 @@ import "server-only";
 import { REPORT_WORDS } from "@/lib/loop/row-labels";
 import type { SheetBoard, SheetInput, SpareInput, TerminalSheet } from "@/lib/sheet/sheet-types";
 import { powerSection } from "@/lib/server/pdf/power-section";
+import { zoneListSection } from "@/lib/server/pdf/zone-list-section";
 import { createPdf, heading, noticeBox, NOT_APPROVED_MARKING, paragraph, table, type PageSize, type Pdf } from "@/lib/server/pdf/pdf-kit";
 import { plural } from "@/lib/vocabulary/plural";
 
@@ -110,6 +111,7 @@ export async function terminalSheetPdf(sheet: TerminalSheet, meta: SheetMeta, si
     sheet.boards.flatMap((b) => b.rows.filter((r): r is SheetInput => !r.spare).flatMap((r) => r.detectors.map((d) => [String(d.zone), d.label, [d.area, d.room].filter(Boolean).join(", "), `${b.name}, input ${r.input}`, d.deviceType]))),
   );
   powerSection(pdf, sheet.supplies);
+  zoneListSection(pdf, sheet.zoneList);
   for (const b of sheet.boards) boardSection(pdf, b, sheet.caution);
   return pdf.toBuffer();
 }
