@@ -1,7 +1,7 @@
 import type { Highs } from "highs";
 import type { Catalog } from "@/lib/catalog/schema";
 import { indexCatalog } from "@/lib/layout/catalog-index";
-import type { LayoutDocument, LayoutPower } from "@/lib/layout/schema";
+import type { LayoutDocument, LayoutPower, OutputDevice } from "@/lib/layout/schema";
 import type { Schedule } from "@/lib/schedule/schema";
 import { analyzeLoop } from "@/lib/loop";
 import { createSolverWith } from "@/lib/solver/create-solver";
@@ -11,6 +11,8 @@ import { resolveStandby } from "@/lib/solver/standby-profiles";
 import { suggestHardware, type SuggestOptions, type Suggestion, type SuggestionPart } from "@/lib/solver/suggest";
 import { buildFromSolution } from "@/lib/solver/suggest-build";
 import { buildPanelModel, type PanelModel } from "@/lib/solver/suggest-model";
+import { areaPlan } from "@/lib/solver/suggest-areas";
+import { deviceClasses } from "@/lib/solver/suggest-outputs";
 import { noFitReason } from "@/lib/solver/suggest-reasons";
 import { unitTables } from "@/lib/solver/suggest-units";
 
@@ -23,8 +25,12 @@ import type { SuggestChoiceInput as SuggestChoice } from "@/lib/layout/suggest-c
 
 export interface ExactOptions extends SuggestOptions {
   choice?: SuggestChoice;
-  /** Seconds per solve before the best layout so far is taken (default 5). */
+  /** Seconds per solve before the best layout so far is taken (default 2). */
   timeLimitS?: number;
+  /** Sounders and strobes the system drives: each goes on an output rated for its draw, output modules bought where needed. */
+  outputDevices?: OutputDevice[];
+  /** "from-schedule" (default): one area per area the schedule names, against each panel's maximum; "none": a single area. */
+  areas?: "from-schedule" | "none";
 }
 
 export interface ExactProof {
@@ -82,7 +88,7 @@ function solveLp(highs: Highs, lp: string, timeLimitS: number, start?: Solved): 
       return v;
     };
     // read every value now: the model is disposed when this returns
-    const names = lp.match(/\b[xqyn]_[A-Za-z0-9_]+/g) ?? [];
+    const names = lp.match(/\b[xqynz]_[A-Za-z0-9_]+/g) ?? [];
     for (const n of new Set(names)) value(n);
     const hasSolution = status === "optimal" || (status === "time-limit" && sol.colValue.length > 0 && Number.isFinite(m.getObjectiveValue()));
     return { values, status: hasSolution ? status : status === "time-limit" ? "other" : status, objective: m.getObjectiveValue(), gap: status === "optimal" ? 0 : Number(m.info.get("mip_gap") ?? Infinity), value: (n: string) => values.get(n) ?? 0 };
@@ -90,13 +96,19 @@ function solveLp(highs: Highs, lp: string, timeLimitS: number, start?: Solved): 
 }
 
 export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog, opts: ExactOptions): ExactSuggestion {
+  const ix = indexCatalog(catalog);
+  const devices = opts.outputDevices ?? [];
+  const wirelessSched = schedule.filter((d) => ix.wirelessDetectors.has(d.catalogId));
   const fallback = (why: string, cheapestCost?: number): ExactSuggestion => {
+    // the older search knows nothing of sounders, wireless detectors or areas: no fallback to it when any is asked for
+    if (devices.length || wirelessSched.length || ((opts.areas ?? "from-schedule") === "from-schedule" && areaPlan(schedule, catalog)))
+      return { found: false, reason: `No layout could be proven: ${why}`, candidatesTried: 0, proof: { optimal: false, gap: Infinity, method: "exact-model", fallbackReason: why, cheapestCost } };
     const s = suggestHardware(schedule, catalog, opts);
     return { ...s, proof: { optimal: false, gap: Infinity, method: "search-fallback", fallbackReason: why, cheapestCost } };
   };
-  const ix = indexCatalog(catalog);
   const placed: PlacedDetector[] = [];
   for (const sched of schedule) {
+    if (ix.wirelessDetectors.has(sched.catalogId)) continue;
     const cat = ix.detectors.get(sched.catalogId);
     if (!cat) return { found: false, reason: `${sched.label}: its detector type is not in the catalog`, candidatesTried: 0, proof: { optimal: true, gap: 0, method: "exact-model" } };
     placed.push({ sched, cat });
@@ -109,15 +121,19 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
   const units = unitTables(placed, catalog, opts.allowShared, classA);
   const { standbyH, alarmMin } = resolveStandby(power);
   const pw = { standbyH, alarmMin, safetyFactor: power.safetyFactor };
+  const plan = (opts.areas ?? "from-schedule") === "from-schedule" ? areaPlan(schedule, catalog) : null;
+  const dc = deviceClasses(devices, catalog);
+  if (dc.unknown.length) return { found: false, reason: `${dc.unknown[0].label}: its sounder or strobe type is not in the catalog`, candidatesTried: 0, proof: { optimal: true, gap: 0, method: "exact-model" } };
+  const extras = { devices: dc.classes, wireless: wirelessSched.length };
 
   // Panels the schedule can never fit are ruled out with their reason; the rest get a model.
   const models: { m: PanelModel; minKeypads: number }[] = [];
   const reasons: string[] = [];
   for (const panel of catalog.panels) {
     const minKeypads = opts.minKeypads ?? (catalog.keypads.some((k) => k.families.includes(panel.family)) ? 1 : 0);
-    const why = noFitReason(catalog, panel, units, placed, minKeypads, busCableM);
+    const why = noFitReason(catalog, panel, units, placed, minKeypads, busCableM, { wireless: extras.wireless, plan });
     if (why) reasons.push(why);
-    else models.push({ m: buildPanelModel(catalog, panel, units, minKeypads, pw), minKeypads });
+    else models.push({ m: buildPanelModel(catalog, panel, units, minKeypads, pw, extras), minKeypads });
   }
 
   let optimal = true;
@@ -125,10 +141,10 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
   const priced: { m: PanelModel; cost: number; r: Solved }[] = [];
   for (const { m } of models) {
     const r = solveLp(highs, m.lp({ minimise: "price" }), timeLimitS);
-    if (r.status === "infeasible") reasons.push(`${m.panel.name}: no set of its family's boards and supplies powers this schedule within their ratings and battery limits`);
+    if (r.status === "infeasible") reasons.push(`${m.panel.name}: no set of its family's boards, outputs and supplies carries and powers this schedule within their ratings, its data bus and the battery limits`);
     else if (r.status === "other") return fallback(`the optimiser gave no answer for ${m.panel.name}`);
     else {
-      if (r.status !== "optimal") {
+      if (r.status !== "optimal" || !m.patternsComplete) {
         optimal = false;
         gap = Math.max(gap, r.gap);
       }
@@ -151,8 +167,17 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
   if (!best) return fallback("the optimiser found no layout in its second pass", cheapest);
 
   const { m, r } = best;
-  const { boards, inputs, counts } = buildFromSolution(m, units, r.value, classA);
-  const layout: LayoutDocument = { panelId: m.panel.id, boards, inputs, power, busCableM };
+  const { boards, inputs, counts, outputs, wireless } = buildFromSolution(m, units, r.value, classA, { devices: dc.classes, wireless: wirelessSched });
+  const layout: LayoutDocument = {
+    panelId: m.panel.id,
+    boards,
+    inputs,
+    power,
+    busCableM,
+    ...(plan ? { areas: plan.areas, zones: plan.zones } : {}),
+    ...(devices.length ? { outputDevices: devices, outputs } : {}),
+    ...(wireless.length ? { wireless } : {}),
+  };
   // as solveLayout does (lib/solver/index.ts re-exports this module, so it is composed here)
   const result = withCapacityCheck(createSolverWith(analyzeLoop, schedule, catalog).solve(layout));
   if (result.counts.error > 0 || result.totals.unplacedIds.length > 0)
@@ -160,7 +185,7 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
   const parts: SuggestionPart[] = [{ kind: "panel", catalogId: m.panel.id, name: m.panel.name, count: 1, unitPrice: m.panel.listPrice }];
   m.items.forEach((it, j) => counts[j] && parts.push({ kind: it.kind, catalogId: it.id, name: it.name, count: counts[j], unitPrice: it.price }));
   const cost = Math.round(parts.reduce((n, p) => n + p.count * p.unitPrice, 0) * 100) / 100;
-  if (!optimal) {
+  if (!optimal && !devices.length && !wirelessSched.length && !plan) {
     // a time limit stopped the model: the older search may still know a cheaper layout; never return a dearer one
     const old = suggestHardware(schedule, catalog, opts);
     if (old.found && old.cost < cost - 0.001)
