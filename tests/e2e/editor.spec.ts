@@ -241,6 +241,37 @@ test("a designer takes a hardware suggestion as a new layout, changes it, and re
   await expect(page.getByText("· revision 3 ·")).toBeVisible();
 });
 
+test("the suggestion takes the most supervised layout within a margin of the cheapest, and a margin out of range is refused", async ({ page }) => {
+  test.setTimeout(120_000);
+  const siteId = await newSite(page, `Supervised shop ${Date.now()}`);
+  const csv = (await import("node:fs")).readFileSync(fixture("corner-shop.csv"), "utf8");
+  expect((await page.request.post(`/api/sites/${siteId}/schedule/import`, { data: { mode: "confirm", csv, addUnknownPlaces: true } })).status()).toBe(200);
+
+  // the API checks the margin with the same schema as the form: 0 to 200 %
+  const tooWide = await page.request.post(`/api/sites/${siteId}/suggestions`, { data: { choice: { kind: "most-supervised", withinPct: 250 } } });
+  expect(tooWide.status()).toBe(422);
+  expect(JSON.stringify(await tooWide.json())).toContain("the margin is at most 200 %");
+  const noNumber = await page.request.post(`/api/sites/${siteId}/suggestions`, { data: { choice: { kind: "most-supervised", withinPct: "ten" } } });
+  expect(noNumber.status()).toBe(422);
+
+  await page.goto(`/sites/${siteId}/layouts`);
+  await page.getByRole("radio", { name: /most supervised within/ }).check();
+  const margin = page.getByLabel("Margin over the cheapest price, percent");
+  await margin.fill("-5");
+  await page.getByRole("button", { name: "Suggest hardware" }).click();
+  await expect(page.getByRole("alert")).toHaveText("Margin over the cheapest price: the margin cannot be negative");
+  await expect(page.getByTestId("suggestion-single")).toHaveCount(0);
+
+  await margin.fill("25");
+  const sent = page.waitForRequest((r) => r.url().endsWith(`/api/sites/${siteId}/suggestions`) && r.method() === "POST");
+  await page.getByRole("button", { name: "Suggest hardware" }).click();
+  expect((await sent).postDataJSON()).toEqual({ choice: { kind: "most-supervised", withinPct: 25 } });
+  const single = page.getByTestId("suggestion-single");
+  await expect(single).toContainText("0 errors");
+  await expect(single).toContainText("proven the lowest price");
+  await expect(page.getByRole("alert")).toHaveCount(0);
+});
+
 test("with the server out of reach the editor says so and retries, and a reload meanwhile loses nothing", async ({ page }) => {
   test.setTimeout(120_000);
   const siteId = await newSite(page, `Offline shop ${Date.now()}`);
