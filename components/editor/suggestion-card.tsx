@@ -66,6 +66,6 @@ export function SuggestionCard({ s, busy, canWrite, onAccept }: { s: SuggestionV
 /** How far the price is proven: by the exact model, within a gap a time limit left, or by the older search. */
 function proofWords(s: SuggestionView): string {
   if (s.method === "search-fallback") return `found by the older search, not proven cheapest (${s.fallbackReason ?? "the optimiser gave no answer"})`;
-  if (s.optimal) return "proven the lowest price";
+  if (s.optimal) return s.cheapestCost !== null && s.cost !== null && s.cost > s.cheapestCost + 0.005 ? "proven the most supervised within the margin" : "proven the lowest price";
   return s.gap === null ? "the lowest price found in the time allowed, not proven" : `within ${Math.ceil(s.gap * 1000) / 10} % of the lowest possible price`;
 }

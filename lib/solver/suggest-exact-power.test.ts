@@ -41,7 +41,8 @@ describe("exact power placement", () => {
     // (EN 50131-6 grade 2: 12 h standby; 15 min alarm and the 1.2 factor as the profile states)
     expect(overloaded.findings.map((f) => f.code)).toContain("battery-too-large");
 
-    const s = suggestExact(highs, schedule, catalog, { allowShared: false, power, areas: "none" });
+    // a generous time limit: the proof must not depend on how busy the machine is
+    const s = suggestExact(highs, schedule, catalog, { allowShared: false, power, areas: "none", timeLimitS: 60 });
     expect(s.found).toBe(true);
     if (!s.found) return;
     expect(s.proof.optimal).toBe(true);

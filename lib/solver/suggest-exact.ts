@@ -31,6 +31,16 @@ export interface ExactOptions extends SuggestOptions {
   outputDevices?: OutputDevice[];
   /** "from-schedule" (default): one area per area the schedule names, against each panel's maximum; "none": a single area. */
   areas?: "from-schedule" | "none";
+  /** Filled with where the time went, for the bench. */
+  profile?: ExactProfile;
+}
+
+/** Milliseconds per step: the loop tables, writing the models, HiGHS, and building and checking the layout. */
+export interface ExactProfile {
+  tablesMs: number;
+  modelMs: number;
+  solveMs: number;
+  checkMs: number;
 }
 
 export interface ExactProof {
@@ -118,6 +128,13 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
   const busCableM = opts.busCableM ?? 0;
   const classA = opts.pathway === "class-a";
   const timeLimitS = opts.timeLimitS ?? 2;
+  const prof = opts.profile;
+  let t0 = performance.now();
+  const lap = (k: keyof ExactProfile) => {
+    const t = performance.now();
+    if (prof) prof[k] += t - t0;
+    t0 = t;
+  };
   const units = unitTables(placed, catalog, opts.allowShared, classA);
   const { standbyH, alarmMin } = resolveStandby(power);
   const pw = { standbyH, alarmMin, safetyFactor: power.safetyFactor };
@@ -126,6 +143,7 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
   if (dc.unknown.length) return { found: false, reason: `${dc.unknown[0].label}: its sounder or strobe type is not in the catalog`, candidatesTried: 0, proof: { optimal: true, gap: 0, method: "exact-model" } };
   const extras = { devices: dc.classes, wireless: wirelessSched.length };
 
+  lap("tablesMs");
   // Panels the schedule can never fit are ruled out with their reason; the rest get a model.
   const models: { m: PanelModel; minKeypads: number }[] = [];
   const reasons: string[] = [];
@@ -135,12 +153,26 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
     if (why) reasons.push(why);
     else models.push({ m: buildPanelModel(catalog, panel, units, minKeypads, pw, extras), minKeypads });
   }
+  lap("modelMs");
 
+  const lpOf = (m: PanelModel, phase: Parameters<PanelModel["lp"]>[0]) => {
+    lap("solveMs");
+    const text = m.lp(phase);
+    lap("modelMs");
+    return text;
+  };
   let optimal = true;
   let gap = 0;
   const priced: { m: PanelModel; cost: number; r: Solved }[] = [];
+  const choice = opts.choice ?? { kind: "cheapest" };
+  const margin = 1 + (choice.kind === "cheapest" ? 0 : choice.withinPct / 100);
+  // cheapest panels first: a panel dearer on its own than the margin above a layout already priced cannot be chosen,
+  // so its models are never solved
+  models.sort((a, b) => a.m.panel.listPrice - b.m.panel.listPrice);
+  let lowest = Infinity;
   for (const { m } of models) {
-    const r = solveLp(highs, m.lp({ minimise: "price" }), timeLimitS);
+    if (m.panel.listPrice > lowest * margin + 0.005) continue;
+    const r = solveLp(highs, lpOf(m, { minimise: "price" }), timeLimitS);
     if (r.status === "infeasible") reasons.push(`${m.panel.name}: no set of its family's boards, outputs and supplies carries and powers this schedule within their ratings, its data bus and the battery limits`);
     else if (r.status === "other") return fallback(`the optimiser gave no answer for ${m.panel.name}`);
     else {
@@ -149,23 +181,24 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
         gap = Math.max(gap, r.gap);
       }
       priced.push({ m, cost: m.panel.listPrice + r.objective, r });
+      lowest = Math.min(lowest, m.panel.listPrice + r.objective);
     }
   }
   if (!priced.length) return { found: false, reason: `No hardware in the catalog carries this schedule. ${reasons.join("; ")}`, candidatesTried: 0, proof: { optimal: true, gap: 0, method: "exact-model" } };
 
   const cheapest = Math.min(...priced.map((p) => p.cost));
-  const choice = opts.choice ?? { kind: "cheapest" };
   // a cent above the bound absorbs the solver's rounding; prices are whole or in cents
-  const bound = (choice.kind === "cheapest" ? cheapest : cheapest * (1 + choice.withinPct / 100)) + 0.005;
+  const bound = cheapest * margin + 0.005;
   let best: { m: PanelModel; score: number; r: Solved } | null = null;
   for (const p of priced.sort((a, b) => a.cost - b.cost)) {
     if (p.cost > bound) continue;
-    const r = solveLp(highs, p.m.lp({ maximise: "supervision", maxPrice: bound }), timeLimitS, p.r);
+    const r = solveLp(highs, lpOf(p.m, { maximise: "supervision", maxPrice: bound }), timeLimitS, p.r);
     if (r.status !== "optimal" && r.status !== "time-limit") continue;
     if (!best || r.objective > best.score + 1e-6) best = { m: p.m, score: r.objective, r };
   }
   if (!best) return fallback("the optimiser found no layout in its second pass", cheapest);
 
+  lap("solveMs");
   const { m, r } = best;
   const { boards, inputs, counts, outputs, wireless } = buildFromSolution(m, units, r.value, classA, { devices: dc.classes, wireless: wirelessSched });
   const layout: LayoutDocument = {
@@ -182,6 +215,7 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
   const result = withCapacityCheck(createSolverWith(analyzeLoop, schedule, catalog).solve(layout));
   if (result.counts.error > 0 || result.totals.unplacedIds.length > 0)
     return fallback(`the optimiser's layout did not pass the solver's check (${result.findings.find((f) => f.severity === "error")?.message ?? "detectors left unplaced"})`, cheapest);
+  lap("checkMs");
   const parts: SuggestionPart[] = [{ kind: "panel", catalogId: m.panel.id, name: m.panel.name, count: 1, unitPrice: m.panel.listPrice }];
   m.items.forEach((it, j) => counts[j] && parts.push({ kind: it.kind, catalogId: it.id, name: it.name, count: counts[j], unitPrice: it.price }));
   const cost = Math.round(parts.reduce((n, p) => n + p.count * p.unitPrice, 0) * 100) / 100;
