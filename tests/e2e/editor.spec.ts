@@ -216,7 +216,8 @@ test("a designer takes a hardware suggestion as a new layout, changes it, and re
   await page.goto(`/sites/${siteId}/layouts`);
   await page.getByRole("button", { name: "Suggest hardware" }).click();
   const single = page.getByTestId("suggestion-single");
-  await expect(single).toContainText("One detector per input");
+  // the exact model runs in a worker: on a busy machine it can take longer than the usual wait
+  await expect(single).toContainText("One detector per input", { timeout: 30_000 });
   await expect(single).toContainText("Inputs used10 of");
   await expect(single).toContainText("0 errors");
   await expect(page.getByTestId("suggestion-shared")).toContainText("Shared inputs allowed");
@@ -259,7 +260,8 @@ test("the suggestion takes the most supervised layout within a margin of the che
   const margin = page.getByLabel("Margin over the cheapest price, percent");
   await margin.fill("-5");
   await page.getByRole("button", { name: "Suggest hardware" }).click();
-  await expect(page.getByRole("alert")).toHaveText("Margin over the cheapest price: the margin cannot be negative");
+  const refusal = page.getByRole("alert").filter({ hasText: "Margin over the cheapest price" });
+  await expect(refusal).toHaveText("Margin over the cheapest price: the margin cannot be negative");
   await expect(page.getByTestId("suggestion-single")).toHaveCount(0);
 
   await margin.fill("25");
@@ -267,9 +269,9 @@ test("the suggestion takes the most supervised layout within a margin of the che
   await page.getByRole("button", { name: "Suggest hardware" }).click();
   expect((await sent).postDataJSON()).toEqual({ choice: { kind: "most-supervised", withinPct: 25 } });
   const single = page.getByTestId("suggestion-single");
-  await expect(single).toContainText("0 errors");
+  await expect(single).toContainText("0 errors", { timeout: 30_000 });
   await expect(single).toContainText(/proven the (lowest price|most supervised within the margin)/);
-  await expect(page.getByRole("alert")).toHaveCount(0);
+  await expect(refusal).toHaveCount(0);
 });
 
 test("with the server out of reach the editor says so and retries, and a reload meanwhile loses nothing", async ({ page }) => {
