@@ -64,9 +64,13 @@ interface Solved {
   values: Map<string, number>;
 }
 
-function solveLp(highs: Highs, lp: string, timeLimitS: number, start?: Solved): Solved {
+/**
+ * `absGap`: a gap that proves the optimum because every objective value is a multiple of a step just above it (a
+ * cent of price, one point of supervision); the solver stops there instead of closing the gap to 1e-9 of the value.
+ */
+function solveLp(highs: Highs, lp: string, timeLimitS: number, absGap: number, start?: Solved): Solved {
   return highs.withModel<Solved>({ format: "lp", data: lp }, (m) => {
-    m.options.set({ output_flag: false, time_limit: timeLimitS, mip_rel_gap: 1e-9 });
+    m.options.set({ output_flag: false, time_limit: timeLimitS, mip_rel_gap: 1e-9, mip_abs_gap: absGap });
     if (start) {
       // the first pass's answer is feasible in the second: a start, so a time limit still leaves a layout
       const colValue = new Float64Array(m.getLp().numCols);
@@ -103,6 +107,12 @@ function solveLp(highs: Highs, lp: string, timeLimitS: number, start?: Solved): 
     const hasSolution = status === "optimal" || (status === "time-limit" && sol.colValue.length > 0 && Number.isFinite(m.getObjectiveValue()));
     return { values, status: hasSolution ? status : status === "time-limit" ? "other" : status, objective: m.getObjectiveValue(), gap: status === "optimal" ? 0 : Number(m.info.get("mip_gap") ?? Infinity), value: (n: string) => values.get(n) ?? 0 };
   });
+}
+
+/** Just under a cent when every price is in whole cents, so a gap below it is proof; else the solver's usual 1e-6. */
+function priceStep(m: PanelModel): number {
+  const cents = m.items.every((it) => Math.abs(it.price * 100 - Math.round(it.price * 100)) < 1e-6);
+  return cents ? 0.0099 : 1e-6;
 }
 
 export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog, opts: ExactOptions): ExactSuggestion {
@@ -172,7 +182,7 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
   let lowest = Infinity;
   for (const { m } of models) {
     if (m.panel.listPrice > lowest * margin + 0.005) continue;
-    const r = solveLp(highs, lpOf(m, { minimise: "price" }), timeLimitS);
+    const r = solveLp(highs, lpOf(m, { minimise: "price" }), timeLimitS, priceStep(m));
     if (r.status === "infeasible") reasons.push(`${m.panel.name}: no set of its family's boards, outputs and supplies carries and powers this schedule within their ratings, its data bus and the battery limits`);
     else if (r.status === "other") return fallback(`the optimiser gave no answer for ${m.panel.name}`);
     else {
@@ -192,7 +202,8 @@ export function suggestExact(highs: Highs, schedule: Schedule, catalog: Catalog,
   let best: { m: PanelModel; score: number; r: Solved } | null = null;
   for (const p of priced.sort((a, b) => a.cost - b.cost)) {
     if (p.cost > bound) continue;
-    const r = solveLp(highs, lpOf(p.m, { maximise: "supervision", maxPrice: bound }), timeLimitS, p.r);
+    // every term of the supervision objective has a whole coefficient (suggest-model.ts)
+    const r = solveLp(highs, lpOf(p.m, { maximise: "supervision", maxPrice: bound }), timeLimitS, 0.99, p.r);
     if (r.status !== "optimal" && r.status !== "time-limit") continue;
     if (!best || r.objective > best.score + 1e-6) best = { m: p.m, score: r.objective, r };
   }

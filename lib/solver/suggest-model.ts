@@ -205,6 +205,9 @@ export function buildPanelModel(catalog: Catalog, panel: Panel, units: UnitTable
         if (!qOk(p, h)) return;
         t.push([1, `q_${p}_${h}`]);
         generals.push(`q_${p}_${h}`);
+        // never more pairs than either class has members (half of them when both are of one class)
+        const [a, b] = pairs[p];
+        bounds.push(`q_${p}_${h} <= ${a === b ? Math.floor(classes[a].members.length / 2) : Math.min(classes[a].members.length, classes[b].members.length)}`);
       });
       // supervision per detector (its scheme's score, times the detectors on the input), plus one per spare input
       classes.forEach((c, ci) => xOk(ci, h) && supTerms.push([big * c.single[host.type]!.supervision - 1, `x_${ci}_${h}`]));
