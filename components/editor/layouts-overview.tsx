@@ -9,6 +9,8 @@ import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { Field } from "@/components/ui/field";
 import { LayoutCard } from "@/components/editor/layout-card";
+import { SuggestionCard } from "@/components/editor/suggestion-card";
+import { SuggestChoiceControl, type ChoiceDraft, choiceFromDraft } from "@/components/editor/suggest-choice-control";
 import { useFormat } from "@/components/format/format-provider";
 import { plural } from "@/lib/vocabulary/plural";
 
@@ -21,63 +23,6 @@ interface PanelChoice {
 }
 
 
-function Counts({ c }: { c: { error: number; warning: number; note: number } }) {
-  return (
-    <span>
-      <span className={c.error ? "font-semibold text-fault" : ""}>{plural(c.error, "error")}</span> · <span className={c.warning ? "text-warn" : ""}>{plural(c.warning, "warning")}</span> · {plural(c.note, "note")}
-    </span>
-  );
-}
-
-function SuggestionCard({ s, busy, canWrite, onAccept }: { s: SuggestionView; busy: boolean; canWrite: boolean; onAccept: () => void }) {
-  const { money } = useFormat();
-  const title = s.allowShared ? "Shared inputs allowed" : "One detector per input";
-  return (
-    <Card className="flex flex-col" data-testid={`suggestion-${s.allowShared ? "shared" : "single"}`}>
-      <h3 className="font-semibold">{title}</h3>
-      {!s.found ? (
-        <p className="mt-2 text-sm text-fault">{s.reason}</p>
-      ) : (
-        <>
-          <p className="mt-1 text-2xl font-semibold">{money(s.cost ?? 0)}</p>
-          <p className="text-xs text-slate-500">catalog list prices · {proofWords(s)}</p>
-          <ul className="mt-2 text-sm">
-            {s.parts.map((p) => (
-              <li key={`${p.kind}:${p.catalogId}`}>
-                {p.count} × {p.name} <span className="text-slate-500">({money(p.unitPrice)} each)</span>
-              </li>
-            ))}
-          </ul>
-          <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 text-sm">
-            <dt className="text-slate-600">Boards</dt>
-            <dd>{s.boards}</dd>
-            <dt className="text-slate-600">Inputs used</dt>
-            <dd>
-              {s.inputsUsed} of {s.inputsTotal}
-            </dd>
-            <dt className="text-slate-600">Shared inputs</dt>
-            <dd>{s.sharedInputs}</dd>
-            <dt className="text-slate-600">Findings</dt>
-            <dd>{s.counts ? <Counts c={s.counts} /> : null}</dd>
-          </dl>
-          {canWrite ? (
-            <Button className="mt-3" disabled={busy} onClick={onAccept}>
-              Accept as a new layout
-            </Button>
-          ) : null}
-        </>
-      )}
-    </Card>
-  );
-}
-
-/** How far the price is proven: by the exact model, within a gap a time limit left, or by the older search. */
-function proofWords(s: SuggestionView): string {
-  if (s.method === "search-fallback") return `found by the older search, not proven cheapest (${s.fallbackReason ?? "the optimiser gave no answer"})`;
-  if (s.optimal) return "proven the lowest price";
-  return s.gap === null ? "the lowest price found in the time allowed, not proven" : `within ${Math.ceil(s.gap * 1000) / 10} % of the lowest possible price`;
-}
-
 /** A site's layouts: open one, start a blank one on a panel, or take a hardware suggestion. */
 export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWrite }: { siteId: number; initial: LayoutMeta[]; panels: PanelChoice[]; detectorCount: number; canWrite: boolean }) {
   const { money } = useFormat();
@@ -87,6 +32,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
   const [busy, setBusy] = useState(false);
   const [suggestions, setSuggestions] = useState<SuggestionView[] | null>(null);
   const [classA, setClassA] = useState(false);
+  const [choice, setChoice] = useState<ChoiceDraft>({ kind: "cheapest", withinPct: "10" });
 
   async function create(body: unknown) {
     setBusy(true);
@@ -101,10 +47,12 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
   }
 
   async function suggest() {
+    const picked = choiceFromDraft(choice);
+    if (!picked.ok) return setMessage({ kind: "error", text: picked.message });
     setBusy(true);
     setMessage(null);
     try {
-      const r = await sendJson<{ suggestions: SuggestionView[] }>(`/api/sites/${siteId}/suggestions`, "POST", classA ? { pathway: "class-a" } : {});
+      const r = await sendJson<{ suggestions: SuggestionView[] }>(`/api/sites/${siteId}/suggestions`, "POST", { ...(classA ? { pathway: "class-a" } : {}), choice: picked.choice });
       setSuggestions(r.suggestions);
     } catch (e) {
       setMessage({ kind: "error", text: describeError(e) });
@@ -190,6 +138,7 @@ export function LayoutsOverview({ siteId, initial, panels, detectorCount, canWri
               <input type="checkbox" checked={classA} onChange={(e) => setClassA(e.target.checked)} />
               Return each fire detector&apos;s loop to the panel (Class A)
             </label>
+            <SuggestChoiceControl value={choice} onChange={setChoice} />
             <Button className="mt-3" variant="secondary" disabled={busy || detectorCount === 0} onClick={suggest}>
               {busy && !suggestions ? "Working…" : "Suggest hardware"}
             </Button>

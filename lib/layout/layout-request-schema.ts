@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { layoutDocumentSchema, layoutPowerSchema, pathwaySchema } from "@/lib/layout/schema";
+import { layoutDocumentSchema, layoutPowerSchema, outputDeviceSchema, pathwaySchema } from "@/lib/layout/schema";
 import { suggestChoiceSchema } from "@/lib/layout/suggest-choice-schema";
 
 // Request bodies of the layout API, shared by the route handlers, the forms and the OpenAPI document.
@@ -33,6 +33,8 @@ export const suggestRequestSchema = z
     pathway: pathwaySchema.optional(),
     /** "cheapest" (default) or the most supervised layout within a percentage of the cheapest price. */
     choice: suggestChoiceSchema.optional(),
+    /** Sounders and strobes the system drives: the suggestion puts each on an output rated for it. */
+    outputDevices: z.array(outputDeviceSchema).max(500).optional(),
   })
   .optional();
 export type SuggestRequest = z.infer<typeof suggestRequestSchema>;

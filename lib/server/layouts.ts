@@ -399,10 +399,12 @@ export interface SuggestionView {
   gap: number | null;
   /** In plain words, why the older search answered instead of the model. */
   fallbackReason: string | null;
+  /** The lowest price of any layout that carries the schedule; above it only when more supervision was asked for within a margin. */
+  cheapestCost: number | null;
 }
 
 function suggestionView(allowShared: boolean, pathway: SuggestionView["pathway"], s: ExactSuggestion): SuggestionView {
-  const proof = { method: s.proof.method, optimal: s.proof.optimal, gap: s.proof.optimal || !Number.isFinite(s.proof.gap) ? null : s.proof.gap, fallbackReason: s.proof.fallbackReason ?? null };
+  const proof = { method: s.proof.method, optimal: s.proof.optimal, gap: s.proof.optimal || !Number.isFinite(s.proof.gap) ? null : s.proof.gap, fallbackReason: s.proof.fallbackReason ?? null, cheapestCost: s.proof.cheapestCost ?? null };
   if (!s.found) return { allowShared, pathway, found: false, reason: s.reason, cost: null, parts: [], boards: 0, inputsUsed: 0, inputsTotal: 0, sharedInputs: 0, counts: null, document: null, ...proof };
   return {
     ...proof,
@@ -426,7 +428,7 @@ export async function suggestForSite(actor: Actor, siteId: number, opts: Suggest
   await findSite(actor, siteId);
   const [schedule, catalog] = await Promise.all([loadSchedule(siteId), catalogFor(actor.organisationId)]);
   if (schedule.length === 0) throw new ApiError(422, "The device schedule is empty: add detectors before asking for hardware.");
-  const base = { busCableM: opts?.busCableM, power: opts?.power, pathway: opts?.pathway, choice: opts?.choice };
+  const base = { busCableM: opts?.busCableM, power: opts?.power, pathway: opts?.pathway, choice: opts?.choice, outputDevices: opts?.outputDevices };
   const suggestions = await Promise.all([false, true].map(async (allowShared) => suggestionView(allowShared, opts?.pathway ?? "class-b", await suggestOffLoop(schedule, catalog, { ...base, allowShared }))));
   return { suggestions };
 }

@@ -13,7 +13,7 @@ import type { OutputDeviceVoltage, OutputFigures, SupplyFigures } from "@/lib/so
 // supply behind the output, and the voltage left at each after the drop on its cable.
 
 /** Conductor temperature for the drop: the same hot end as for powered detectors (common practice, no published source). */
-const DROP_TEMP_C = 40;
+export const DROP_TEMP_C = 40;
 
 export function boardOutputBlocks(r: Resolved, b: ResolvedBoard): OutputBlock[] {
   if (b.key === PANEL_KEY) return panelOutputBlocks(r.panel);

@@ -1,18 +1,33 @@
-import { PANEL_KEY, type LayoutBoard, type LayoutInput } from "@/lib/layout/schema";
+import { PANEL_KEY, type LayoutBoard, type LayoutInput, type LayoutOutput, type OutputDevice, type WirelessLink } from "@/lib/layout/schema";
+import type { ScheduleDetector } from "@/lib/schedule/schema";
 import { isLifeSafety, type PlacedDetector } from "@/lib/solver/resolve";
 import type { PanelModel } from "@/lib/solver/suggest-model";
+import type { DeviceClass } from "@/lib/solver/suggest-outputs";
 import type { UnitTables } from "@/lib/solver/suggest-units";
 
 // The concrete layout from a solution of the model: boards bought in catalog order with bus addresses in turn,
 // each pool's boards powered by the feed the model chose, and the detectors of each host handed out in area and
 // room order, filling one board before the next, so an area's detectors land on as few boards as the counts allow.
+// Sounders and strobes go on each host's outputs pattern by pattern, board after board; wireless detectors fill the
+// receivers in schedule order.
 
 interface Unit {
   dets: PlacedDetector[];
   scheme: LayoutInput["scheme"];
 }
 
-export function buildFromSolution(m: PanelModel, units: UnitTables, value: (name: string) => number, classA: boolean): { boards: LayoutBoard[]; inputs: LayoutInput[]; counts: number[] } {
+export interface BuildExtras {
+  devices: DeviceClass[];
+  wireless: ScheduleDetector[];
+}
+
+export function buildFromSolution(
+  m: PanelModel,
+  units: UnitTables,
+  value: (name: string) => number,
+  classA: boolean,
+  extras: BuildExtras = { devices: [], wireless: [] },
+): { boards: LayoutBoard[]; inputs: LayoutInput[]; counts: number[]; outputs: LayoutOutput[]; wireless: WirelessLink[] } {
   const count = (v: string | null) => (v === null ? 1 : Math.round(value(v)));
   const boards: LayoutBoard[] = [];
   const counts = m.items.map(() => 0);
@@ -34,10 +49,26 @@ export function buildFromSolution(m: PanelModel, units: UnitTables, value: (name
   const pools = units.classes.map((c) => [...c.members].sort(byPlace));
   const pathway = (dets: PlacedDetector[]): Pick<LayoutInput, "pathway"> => (classA && dets.some((d) => isLifeSafety(d.cat)) ? { pathway: "class-a" } : {});
   const inputs: LayoutInput[] = [];
+  const outputs: LayoutOutput[] = [];
+  const wireless: WirelessLink[] = [];
+  const devicePools: OutputDevice[][] = extras.devices.map((c) => [...c.members]);
+  const unheard = [...extras.wireless];
   m.hosts.forEach((h, hi) => {
     const n = count(h.count);
     if (n < 1) return;
     const keys = h.kind === "onboard" ? [PANEL_KEY] : Array.from({ length: n }, () => add(h.itemIndex, h.feed && h.feed !== "aux" ? supplyKey.get(h.feed) : undefined));
+    let first = 0; // the number of this block's first output on its board: siren outputs first, as outputSlots numbers them
+    h.outputs.forEach((block, b) => {
+      let slot = 0;
+      m.outputPatterns[hi][b].forEach((p, pi) => {
+        for (let k = Math.round(value(`z_${hi}_${b}_${pi}`)); k > 0; k--, slot++) {
+          const deviceIds = p.counts.flatMap((c, ci) => devicePools[ci].splice(0, c).map((d) => d.id));
+          outputs.push({ boardKey: keys[Math.floor(slot / block.count)], output: first + (slot % block.count) + 1, deviceIds });
+        }
+      });
+      first += block.count;
+    });
+    if (h.item?.learns) for (const key of keys) wireless.push({ boardKey: key, detectorIds: unheard.splice(0, h.item.learns).map((d) => d.id) });
     const mine: Unit[] = [];
     units.classes.forEach((c, ci) => {
       for (let k = Math.round(value(`x_${ci}_${hi}`)); k > 0; k--) mine.push({ dets: [pools[ci].shift()!], scheme: c.single[h.type]!.scheme });
@@ -55,5 +86,5 @@ export function buildFromSolution(m: PanelModel, units: UnitTables, value: (name
       inputs.push({ boardKey: key, input: (i % h.inputs) + 1, detectorIds: u.dets.map((d) => d.sched.id), scheme: u.scheme, placement: "at-detector", ...pathway(u.dets) });
     });
   });
-  return { boards, inputs, counts };
+  return { boards, inputs, counts, outputs, wireless };
 }

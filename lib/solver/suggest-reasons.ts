@@ -2,15 +2,30 @@ import type { Catalog, Panel } from "@/lib/catalog/schema";
 import { fmt } from "@/lib/solver/format";
 import type { PlacedDetector } from "@/lib/solver/resolve";
 import { busLimitOf, itemsFor } from "@/lib/solver/suggest-model";
+import { areaMisfit, type AreaPlan } from "@/lib/solver/suggest-areas";
 import type { UnitTables } from "@/lib/solver/suggest-units";
 import { plural } from "@/lib/vocabulary/plural";
 
 // The limit that rules a panel out before any model is solved, in plain words; null when none does.
 // Each input type's reach is what the panel holds with its data bus full of the boards with most inputs of that type.
 
-export function noFitReason(catalog: Catalog, panel: Panel, units: UnitTables, placed: PlacedDetector[], minKeypads: number, busCableM: number): string | null {
+/** Besides wired detectors: the schedule's wireless detectors and the areas it names. */
+export interface FitExtras {
+  wireless: number;
+  plan: AreaPlan | null;
+}
+
+export function noFitReason(catalog: Catalog, panel: Panel, units: UnitTables, placed: PlacedDetector[], minKeypads: number, busCableM: number, extras: FitExtras = { wireless: 0, plan: null }): string | null {
   const N = placed.length;
-  if (N > panel.maxZones) return `${panel.name}: ${plural(N, "zone")} needed; it reports at most ${panel.maxZones}`;
+  if (N + extras.wireless > panel.maxZones) return `${panel.name}: ${plural(N + extras.wireless, "zone")} needed; it reports at most ${panel.maxZones}`;
+  const areas = areaMisfit(panel, extras.plan);
+  if (areas) return areas;
+  if (extras.wireless > 0) {
+    const receivers = catalog.wirelessReceivers.filter((w) => w.families.includes(panel.family));
+    const most = Math.max(0, ...receivers.map((w) => w.maxDevices)) * busLimitOf(panel);
+    if (!receivers.length) return `${panel.name}: ${plural(extras.wireless, "wireless detector")} in the schedule; its family has no wireless receiver`;
+    if (extras.wireless > most) return `${panel.name}: ${plural(extras.wireless, "wireless detector")} in the schedule; its receivers learn at most ${most} with its data bus full`;
+  }
   if (busCableM > panel.bus.maxCableM) return `${panel.name}: ${fmt(busCableM)} m of data bus asked for; it drives at most ${fmt(panel.bus.maxCableM)} m`;
   const items = itemsFor(catalog, panel);
   const busLimit = busLimitOf(panel);

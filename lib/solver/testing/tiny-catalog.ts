@@ -27,3 +27,26 @@ export const tinyCatalog: Catalog = catalogFileSchema.parse({
   ],
   powerSupplies: [{ ...fixtureCatalogInput.powerSupplies[0], id: "tiny-psu", name: "Tiny supply", listPrice: 25, outputMa: 400, maxBatteryAh: 7, families: ["fx-alpha", "fx-beta"] }],
 });
+
+/**
+ * The tiny catalog's alpha family with sounders, strobes, an output module, a wireless receiver and wireless detectors:
+ * small enough for brute force with a few of each. Panel A offers two areas and one 200 mA siren output, panel B one
+ * area and a 500 mA siren output; the output module's relays carry what the panels' outputs cannot.
+ */
+export const tinyOutputsCatalog: Catalog = catalogFileSchema.parse({
+  inputTypes: fixtureCatalogInput.inputTypes,
+  detectors: fixtureCatalogInput.detectors,
+  // working voltages lowered to 9 V so a cable of some metres still leaves enough at the battery's end of discharge
+  sounders: fixtureCatalogInput.sounders.map((x) => ({ ...x, minVolts: 9 })),
+  strobes: fixtureCatalogInput.strobes,
+  wirelessDetectors: fixtureCatalogInput.wirelessDetectors,
+  panels: [
+    { ...tinyCatalog.panels[0], outputs: [{ purpose: "siren", count: 1, switching: "relay", ratingMa: 200 }], maxAreas: 2 },
+    { ...tinyCatalog.panels[1], outputs: [{ purpose: "siren", count: 1, switching: "relay", ratingMa: 500 }], maxAreas: 1 },
+  ],
+  expansionBoards: [tinyCatalog.expansionBoards[0]],
+  keypads: [tinyCatalog.keypads[0]],
+  powerSupplies: tinyCatalog.powerSupplies,
+  outputModules: [{ ...fixtureCatalogInput.outputModules[0], id: "tiny-relays-2", name: "Tiny relay module", listPrice: 20, outputs: [{ purpose: "programmable", count: 2, switching: "relay", ratingMa: 400 }], standbyMa: 10, alarmMa: 30 }],
+  wirelessReceivers: [{ ...fixtureCatalogInput.wirelessReceivers[0], id: "tiny-receiver", name: "Tiny receiver", listPrice: 35, maxDevices: 2, standbyMa: 30, alarmMa: 35 }],
+});
