@@ -130,8 +130,9 @@ export function ZoneProgramDetails({ detectorId }: { detectorId: string }) {
   const name = detectorsById.get(detectorId)?.label ?? detectorId;
   return (
     <details className="mt-1 text-[11px]">
-      <summary className="cursor-pointer text-signal" aria-label={`Zone programming of ${name}`}>
+      <summary className="cursor-pointer text-signal">
         Zone{figures ? ` ${figures.number}: ${ZONE_TYPE_WORDS[figures.type]}${figures.areaName ? `, ${figures.areaName}` : ""}` : ""}
+        <span className="sr-only"> programming of {name}</span>
       </summary>
       <ZoneProgramForm detectorId={detectorId} />
     </details>
