@@ -41,7 +41,7 @@ export function OutputDeviceList() {
   const devices = documentParts(doc).outputDevices;
   const free = devices.filter((d) => !outputOf(doc, d.id));
   return (
-    <section aria-labelledby="output-devices-heading" className="mt-4 flex shrink-0 flex-col lg:max-h-[45vh] lg:overflow-y-auto">
+    <section aria-labelledby="output-devices-heading" className="mt-4 shrink-0 lg:max-h-[50vh] lg:overflow-y-auto lg:pr-1">
       <h2 id="output-devices-heading" className="mb-2 text-sm font-semibold">
         Sounders and strobes <span className="font-normal text-slate-500">({free.length} of {devices.length} on no output)</span>
       </h2>

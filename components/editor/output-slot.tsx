@@ -27,7 +27,7 @@ function OutputSlot({ slot, slots }: { slot: Slot; slots: Slot[] }) {
       className={`flex min-h-20 flex-col rounded-md border-2 p-1.5 text-xs ${over ? "border-fault" : ids.length ? "border-line" : "border-dashed border-line"} ${isOver ? "bg-signal-soft" : ids.length ? "bg-white" : "bg-slate-50"}`}
     >
       <div className="mb-1 flex flex-wrap items-baseline gap-x-1">
-        <span className="font-semibold capitalize">{words}</span>
+        <span className="font-semibold">{words.charAt(0).toUpperCase() + words.slice(1)}</span>
         <span className="text-slate-500">
           {slot.switching}, rated {mA(slot.ratingMa)}
         </span>

@@ -25,6 +25,8 @@ const milliamps = async (l: Locator) => Number((await l.textContent())!.replace(
 
 async function mouseDrag(page: Page, from: Locator, to: Locator) {
   await to.scrollIntoViewIfNeeded();
+  // the list of sounders and strobes scrolls on its own beside the boards
+  await from.scrollIntoViewIfNeeded();
   const a = (await from.boundingBox())!;
   const b = (await to.boundingBox())!;
   await page.mouse.move(a.x + a.width / 2, a.y + a.height / 2);
