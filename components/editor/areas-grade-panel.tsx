@@ -3,7 +3,8 @@
 import { useState } from "react";
 import { useEditor } from "@/components/editor/editor-context";
 import { documentParts, securityGradeSchema, type SecurityGrade } from "@/lib/layout/schema";
-import { addArea, removeArea, setGrade } from "@/lib/layout/zone-output-operations";
+import { boardName } from "@/lib/layout/names";
+import { addArea, removeArea, setAreaKeypads, setGrade } from "@/lib/layout/zone-output-operations";
 import { CHECK_EDITION } from "@/lib/solver/standby-profiles";
 import { plural } from "@/lib/vocabulary/plural";
 
@@ -14,6 +15,7 @@ export function AreasGradePanel() {
   const { doc, ctx, ix, canWrite, apply, result } = useEditor();
   const [name, setName] = useState("");
   const areas = documentParts(doc).areas;
+  const keypads = doc.boards.filter((b) => b.kind === "keypad");
   const maxAreas = ix.panels.get(doc.panelId)?.maxAreas ?? 1;
   const zonesIn = (key: string) => result.areas.find((a) => a.key === key)?.zones ?? 0;
   const add = () => {
@@ -61,14 +63,31 @@ export function AreasGradePanel() {
       <p className="text-slate-600">Each area is set and unset on its own. A zone with no area chosen is in the first one. Choose a zone&apos;s area under Zone on its input.</p>
       <ul className="mt-1 flex flex-col gap-1" aria-label="Areas of this layout">
         {areas.map((a) => (
-          <li key={a.key} className="flex items-center justify-between gap-2" data-testid={`area-${a.key}`}>
-            <span>
-              {a.name} <span className="text-slate-500">({plural(zonesIn(a.key), "zone")})</span>
+          <li key={a.key} data-testid={`area-${a.key}`}>
+            <span className="flex items-center justify-between gap-2">
+              <span>
+                {a.name} <span className="text-slate-500">({plural(zonesIn(a.key), "zone")})</span>
+              </span>
+              {canWrite ? (
+                <button type="button" className="rounded px-1 text-fault hover:bg-fault-soft" aria-label={`Remove area ${a.name}`} onClick={() => apply(removeArea(doc, ctx, a.key))}>
+                  ×
+                </button>
+              ) : null}
             </span>
-            {canWrite ? (
-              <button type="button" className="rounded px-1 text-fault hover:bg-fault-soft" aria-label={`Remove area ${a.name}`} onClick={() => apply(removeArea(doc, ctx, a.key))}>
-                ×
-              </button>
+            {keypads.length ? (
+              <span className="ml-2 flex flex-wrap gap-x-2 text-slate-600">
+                Set from:
+                {keypads.map((k) => {
+                  const on = a.keypadKeys?.includes(k.key) ?? false;
+                  const next = on ? (a.keypadKeys ?? []).filter((x) => x !== k.key) : [...(a.keypadKeys ?? []), k.key];
+                  return (
+                    <label key={k.key} className="flex items-center gap-1">
+                      <input type="checkbox" checked={on} disabled={!canWrite} aria-label={`Area ${a.name} set from ${boardName(doc, k.key)}`} onChange={() => apply(setAreaKeypads(doc, ctx, a.key, next))} />
+                      {boardName(doc, k.key)}
+                    </label>
+                  );
+                })}
+              </span>
             ) : null}
           </li>
         ))}

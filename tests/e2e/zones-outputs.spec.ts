@@ -80,6 +80,11 @@ test("a designer programs zones and areas, puts sounders and a strobe on outputs
   await areas.getByLabel("New area name").fill("Warehouse");
   await areas.getByRole("button", { name: "Add area" }).click();
   await expect(areas.getByRole("list", { name: "Areas of this layout" })).toContainText("Warehouse (0 zones)");
+  // set and unset from the copy's first keypad
+  const fromKeypad = areas.getByLabel("Area Warehouse set from Keypad 1");
+  await fromKeypad.check();
+  await expect(page.getByTestId("editor-message")).toHaveText("Area Warehouse set from Keypad 1");
+  await expect(fromKeypad).toBeChecked();
 
   // zone programming, reached from the detector's input: the lobby becomes an entry/exit zone in the warehouse
   const lobby = page.getByRole("listitem", { name: /Entrance lobby motion/ });
@@ -157,4 +162,5 @@ test("a designer programs zones and areas, puts sounders and a strobe on outputs
   await expect(findings.locator('[data-code="output-overloaded"]')).toBeVisible();
   await expect(page.getByRole("listitem", { name: /Entrance lobby motion/ }).locator("summary", { hasText: "programming of Entrance lobby motion" })).toContainText("entry/exit, Warehouse");
   await expect(page.getByTestId("areas-grade").getByLabel("Security grade (EN 50131-1)")).toHaveValue("3");
+  await expect(page.getByTestId("areas-grade").getByLabel("Area Warehouse set from Keypad 1")).toBeChecked();
 });
