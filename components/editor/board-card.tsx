@@ -6,12 +6,15 @@ import type { ReactNode } from "react";
 import { useEditor } from "@/components/editor/editor-context";
 import { FindingMarker } from "@/components/editor/finding-marker";
 import { InputSlot } from "@/components/editor/input-slot";
+import { OutputGrid } from "@/components/editor/output-slot";
 import { boardSortId } from "@/components/editor/editor-model";
 import { boardEntry, boardInputs } from "@/lib/layout/catalog-index";
 import { inputBlockOf, removeBoard, reorderBoards, setBusAddress, setPoweredBy } from "@/lib/layout/operations";
 import { boardName } from "@/lib/layout/names";
 import { PANEL_KEY, type LayoutBoard } from "@/lib/layout/schema";
 import { plural } from "@/lib/vocabulary/plural";
+
+const KIND_WORDS: Record<LayoutBoard["kind"], string> = { expansion: "Expansion board", keypad: "Keypad", supply: "Power supply", outputs: "Output module", receiver: "Wireless receiver" };
 
 function InputGrid({ boardKey }: { boardKey: string }) {
   const { doc, ix } = useEditor();
@@ -80,6 +83,7 @@ export function PanelCard() {
       }
     >
       <InputGrid boardKey={PANEL_KEY} />
+      <OutputGrid boardKey={PANEL_KEY} />
     </Frame>
   );
 }
@@ -95,7 +99,7 @@ export function BoardCard({ board, index }: { board: LayoutBoard; index: number 
   const ownSupply = entry?.kind === "expansion" && !!entry.entry.ownSupply;
   const supplyFigures = result.supplies.find((s) => s.supplyKey === board.key);
   const n = doc.boards.length;
-  const kindWord = board.kind === "supply" ? "Power supply" : board.kind === "keypad" ? "Keypad" : "Expansion board";
+  const kindWord = KIND_WORDS[board.kind];
   return (
     <Frame
       domId={`board-${board.key}`}
@@ -178,6 +182,7 @@ export function BoardCard({ board, index }: { board: LayoutBoard; index: number 
       }
     >
       {block ? <InputGrid boardKey={board.key} /> : null}
+      <OutputGrid boardKey={board.key} />
     </Frame>
   );
 }

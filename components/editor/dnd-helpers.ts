@@ -26,11 +26,14 @@ export const editorCollisions: CollisionDetection = (args) => {
 /** The drop targets in reading order, updated after each render, read when an arrow key is pressed. */
 export class DropTargetOrder {
   private ids: string[] = [];
-  set(ids: string[]) {
+  private outputIds: string[] = [];
+  set(ids: string[], outputIds: string[] = []) {
     this.ids = ids;
+    this.outputIds = outputIds;
   }
-  get(): string[] {
-    return this.ids;
+  /** A sounder or strobe moves between outputs; a detector between inputs. */
+  get(type?: string): string[] {
+    return type === "output-device" ? this.outputIds : this.ids;
   }
 }
 
@@ -49,7 +52,7 @@ export function editorKeyboardCoordinates(order: DropTargetOrder): KeyboardCoord
     event.preventDefault();
     const cr = context.collisionRect;
     if (!cr) return undefined;
-    const ids = order.get().filter((id) => context.droppableRects.has(id));
+    const ids = order.get(typeOf(context.active?.data)).filter((id) => context.droppableRects.has(id));
     // before the first move there may be no "over" yet: the target under the chip's centre is where it starts
     const cx = cr.left + cr.width / 2;
     const cy = cr.top + cr.height / 2;

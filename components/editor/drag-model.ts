@@ -2,6 +2,7 @@ import type { CatalogIndex } from "@/lib/layout/catalog-index";
 import { inputBlockOf } from "@/lib/layout/operations";
 import { boardName, inputName } from "@/lib/layout/names";
 import { PANEL_KEY, type LayoutDocument } from "@/lib/layout/schema";
+import { outputDragOriginId, outputDragPlace } from "@/components/editor/output-drag-model";
 import { boardSortId, inputDropId, UNPLACED_DROP_ID, type DragItem } from "@/components/editor/editor-model";
 
 // Pure helpers of the editor's drag and drop that read the document: the keyboard order of drop targets,
@@ -20,12 +21,14 @@ export function dropTargetIds(doc: LayoutDocument, ix: CatalogIndex): string[] {
 /** The drop target the item sits on before it moves. */
 export function dragOriginId(doc: LayoutDocument, item: DragItem): string {
   if (item.type === "board") return boardSortId(item.boardKey);
+  if (item.type === "output-device") return outputDragOriginId(doc, item);
   const at = doc.inputs.find((i) => i.detectorIds.includes(item.detectorId));
   return at ? inputDropId(at.boardKey, at.input) : UNPLACED_DROP_ID;
 }
 
 /** The dragged item and where it is: "Keypad 1, position 2 of 3", "Shop door, on Control panel, input 1". */
-export function dragPlace(doc: LayoutDocument, item: DragItem, labelOf: (detectorId: string) => string): string {
+export function dragPlace(doc: LayoutDocument, ix: CatalogIndex, item: DragItem, labelOf: (detectorId: string) => string): string {
+  if (item.type === "output-device") return outputDragPlace(doc, ix, item);
   if (item.type === "board") return `${boardName(doc, item.boardKey)}, position ${doc.boards.findIndex((b) => b.key === item.boardKey) + 1} of ${doc.boards.length}`;
   const at = doc.inputs.find((i) => i.detectorIds.includes(item.detectorId));
   return `${labelOf(item.detectorId)}${at ? `, on ${inputName(doc, at)}` : ", unplaced"}`;

@@ -8,12 +8,13 @@ import { boardName, inputName } from "@/lib/layout/names";
 import type { LayoutDocument, LayoutInput } from "@/lib/layout/schema";
 import type { SolveResult } from "@/lib/solver";
 import { PLACEMENT_WORDS, SCHEME_WORDS } from "@/lib/vocabulary/words";
+import { outputDropEdit, outputOverSentence, parseOutputDragId, parseOutputDropId, type OutputDragItem, type OutputDropTarget } from "@/components/editor/output-drag-model";
 import { plural } from "@/lib/vocabulary/plural";
 
 // Pure helpers of the editor: drag items and drop targets, zone numbers, finding anchors, resistor text.
 
-export type DragItem = { type: "detector"; detectorId: string } | { type: "board"; boardKey: string };
-export type DropTarget = { type: "input"; boardKey: string; input: number } | { type: "unplaced" } | { type: "board"; boardKey: string };
+export type DragItem = { type: "detector"; detectorId: string } | { type: "board"; boardKey: string } | OutputDragItem;
+export type DropTarget = { type: "input"; boardKey: string; input: number } | { type: "unplaced" } | { type: "board"; boardKey: string } | OutputDropTarget;
 
 export const detectorDragId = (id: string) => `det:${id}`;
 export const inputDropId = (boardKey: string, input: number) => `in:${boardKey}:${input}`;
@@ -24,6 +25,8 @@ export function parseDropId(id: string | number | null | undefined): DropTarget 
   if (id == null) return null;
   const s = String(id);
   if (s === UNPLACED_DROP_ID) return { type: "unplaced" };
+  const out = parseOutputDropId(s);
+  if (out) return out;
   let m = /^in:([A-Za-z0-9_-]+):(\d+)$/.exec(s);
   if (m) return { type: "input", boardKey: m[1], input: Number(m[2]) };
   m = /^board:([A-Za-z0-9_-]+)$/.exec(s);
@@ -35,7 +38,7 @@ export function parseDragId(id: string | number): DragItem | null {
   const s = String(id);
   if (s.startsWith("det:")) return { type: "detector", detectorId: s.slice(4) };
   if (s.startsWith("board:")) return { type: "board", boardKey: s.slice(6) };
-  return null;
+  return parseOutputDragId(s);
 }
 
 /**
@@ -45,6 +48,7 @@ export function parseDragId(id: string | number): DragItem | null {
  */
 export function dropEdit(doc: LayoutDocument, ctx: LayoutContext, item: DragItem, target: DropTarget | null): LayoutEdit | null {
   if (!target) return null;
+  if (item.type === "output-device") return target.type === "output" || target.type === "output-pool" ? outputDropEdit(doc, ctx, item, target) : null;
   if (item.type === "board") {
     if (target.type !== "board") return null;
     const from = doc.boards.findIndex((b) => b.key === item.boardKey);
@@ -63,6 +67,7 @@ export function dropEdit(doc: LayoutDocument, ctx: LayoutContext, item: DragItem
 /** A sentence for the screen reader while an item is over a target. */
 export function overSentence(doc: LayoutDocument, ctx: LayoutContext, item: DragItem, target: DropTarget | null): string {
   const label = (id: string) => ctx.schedule.find((d) => d.id === id)?.label ?? id;
+  if (item.type === "output-device") return outputOverSentence(doc, indexCatalog(ctx.catalog), item, target?.type === "output" || target?.type === "output-pool" ? target : null);
   if (item.type === "board") {
     const name = boardName(doc, item.boardKey);
     if (target?.type !== "board") return `${name} is not over a board position`;

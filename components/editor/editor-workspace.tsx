@@ -11,10 +11,13 @@ import { FiguresPanel } from "@/components/editor/figures-panel";
 import { FindingsPanel } from "@/components/editor/findings-panel";
 import { SettingsPanel } from "@/components/editor/settings-panel";
 import { UnplacedList } from "@/components/editor/unplaced-list";
+import { AreasGradePanel } from "@/components/editor/areas-grade-panel";
+import { OutputDeviceFace } from "@/components/editor/output-device-chip";
+import { OutputDeviceList } from "@/components/editor/output-device-list";
 import type { EditorDnd } from "@/components/editor/use-editor-dnd";
 
 const DRAG_INSTRUCTIONS =
-  "Press Space to pick up. Arrow keys move between inputs, or between board positions for a board. Space drops, Escape cancels. Or press Enter to select a detector and use an input's Place here button.";
+  "Press Space to pick up. Arrow keys move between inputs, between outputs for a sounder or strobe, or between board positions for a board. Space drops, Escape cancels. Or press Enter to select a detector and use an input's Place here button.";
 
 /** The three columns under drag and drop: unplaced detectors, the panel and its boards, findings and settings. */
 export function EditorWorkspace({ dnd }: { dnd: EditorDnd }) {
@@ -32,6 +35,7 @@ export function EditorWorkspace({ dnd }: { dnd: EditorDnd }) {
       <div className="grid grid-cols-1 gap-4 lg:grid-cols-[15rem_minmax(0,1fr)_20rem] 2xl:grid-cols-[17rem_minmax(0,1fr)_24rem]">
         <aside className="lg:sticky lg:top-4 lg:flex lg:max-h-[calc(100vh-2rem)] lg:flex-col lg:self-start">
           <UnplacedList />
+          <OutputDeviceList />
         </aside>
         <div className="flex min-w-0 flex-col gap-3" data-testid="boards">
           <PanelCard />
@@ -45,6 +49,7 @@ export function EditorWorkspace({ dnd }: { dnd: EditorDnd }) {
         <div className="flex min-w-0 flex-col gap-3 lg:sticky lg:top-4 lg:max-h-[calc(100vh-2rem)] lg:self-start lg:overflow-y-auto">
           <FindingsPanel />
           <FiguresPanel />
+          <AreasGradePanel />
           <SettingsPanel />
         </div>
       </div>
@@ -52,6 +57,10 @@ export function EditorWorkspace({ dnd }: { dnd: EditorDnd }) {
         {dnd.activeDrag?.type === "detector" ? (
           <div className="w-56 rounded-md border border-signal bg-white px-2 py-1 text-xs shadow-lg">
             <ChipFace detectorId={dnd.activeDrag.detectorId} />
+          </div>
+        ) : dnd.activeDrag?.type === "output-device" ? (
+          <div className="w-56 rounded-md border border-signal bg-white px-2 py-1 text-xs shadow-lg">
+            <OutputDeviceFace deviceId={dnd.activeDrag.deviceId} />
           </div>
         ) : null}
       </DragOverlay>

@@ -4,6 +4,7 @@ import { useDroppable } from "@dnd-kit/core";
 import type { InputType, WiringScheme } from "@/lib/catalog/schema";
 import { useEditor } from "@/components/editor/editor-context";
 import { DetectorChip } from "@/components/editor/detector-chip";
+import { ZoneProgramDetails } from "@/components/editor/zone-program-form";
 import { FindingMarker } from "@/components/editor/finding-marker";
 import { dropEdit, inputDropId, placementLabels, resistorLines, resistorText, schemeLabels } from "@/components/editor/editor-model";
 import { classAAllowed, setInputWiring, type WiringPatch } from "@/lib/layout/operations";
@@ -154,6 +155,7 @@ export function InputSlot({ boardKey, n, type }: { boardKey: string; n: number; 
           {entry ? "Share this input" : "Place here"}
         </button>
       ) : null}
+      {entry?.detectorIds.map((d) => <ZoneProgramDetails key={d} detectorId={d} />)}
       {entry && canWrite ? <WiringControls entry={entry} type={type} where={where} /> : null}
     </li>
   );

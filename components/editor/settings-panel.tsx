@@ -20,6 +20,7 @@ export function SettingsPanel() {
         ...ctx.catalog.expansionBoards.filter((b) => b.families.includes(family)).map((b) => ({ kind: "expansion" as const, id: b.id, name: b.name, detail: plural(b.inputs.count, "input"), onBus: b.takesBusAddress })),
         ...ctx.catalog.keypads.filter((b) => b.families.includes(family)).map((b) => ({ kind: "keypad" as const, id: b.id, name: b.name, detail: b.inputs ? `keypad, ${plural(b.inputs.count, "input")}` : "keypad", onBus: b.takesBusAddress })),
         ...ctx.catalog.powerSupplies.filter((b) => b.families.includes(family)).map((b) => ({ kind: "supply" as const, id: b.id, name: b.name, detail: `${b.outputMa} mA supply`, onBus: b.takesBusAddress })),
+        ...(ctx.catalog.outputModules ?? []).filter((b) => b.families.includes(family)).map((b) => ({ kind: "outputs" as const, id: b.id, name: b.name, detail: plural(b.outputs.reduce((n, o) => n + o.count, 0), "output"), onBus: b.takesBusAddress })),
       ]
     : [];
   const [choice, setChoice] = useState(choices[0] ? `${choices[0].kind}:${choices[0].id}` : "");

@@ -7,6 +7,7 @@ import type { LayoutContext, LayoutEdit } from "@/lib/layout/operations";
 import type { LayoutDocument } from "@/lib/layout/schema";
 import { DropTargetOrder, editorKeyboardCoordinates } from "@/components/editor/dnd-helpers";
 import { dragOriginId, dragPlace, dropTargetIds } from "@/components/editor/drag-model";
+import { outputDropTargetIds } from "@/components/editor/output-drag-model";
 import { dropEdit, overSentence, parseDragId, parseDropId, type DragItem } from "@/components/editor/editor-model";
 
 // Drag and drop of the editor: sensors (pointer and keyboard), the screen reader's sentences, and the drop.
@@ -26,21 +27,23 @@ export function useEditorDnd(opts: {
   // Keyboard drags jump between drop targets in reading order: the unplaced list, then every input of every board.
   const [targets] = useState(() => new DropTargetOrder());
   const orderIds = useMemo(() => dropTargetIds(doc, ix), [doc, ix]);
-  useLayoutEffect(() => targets.set(orderIds), [targets, orderIds]);
+  const outputOrderIds = useMemo(() => outputDropTargetIds(doc, ix), [doc, ix]);
+  useLayoutEffect(() => targets.set(orderIds, outputOrderIds), [targets, orderIds, outputOrderIds]);
   const coordinateGetter = useMemo(() => editorKeyboardCoordinates(targets), [targets]);
   const sensors = useSensors(
     useSensor(PointerSensor, { activationConstraint: { distance: 6 } }),
     useSensor(KeyboardSensor, { coordinateGetter, keyboardCodes: { start: ["Space"], cancel: ["Escape"], end: ["Space", "Enter"] } }),
   );
 
-  const where = (item: DragItem) => dragPlace(docRef.current, item, labelOf);
+  const where = (item: DragItem) => dragPlace(docRef.current, ix, item, labelOf);
+  const between = (item: DragItem) => (item.type === "board" ? "board positions" : item.type === "output-device" ? "outputs" : "inputs");
   // where the dragged item started: being "over" it before any move is not news (it would drown "Picked up")
   const dragOrigin = useRef<{ id: string; left: boolean }>({ id: "", left: false });
   const announcements: Announcements = {
     onDragStart: ({ active }) => {
       const item = parseDragId(active.id);
       if (item) dragOrigin.current = { id: dragOriginId(docRef.current, item), left: false };
-      return item ? `Picked up ${where(item)}. Arrow keys move between ${item.type === "board" ? "board positions" : "inputs"}, Space drops, Escape cancels.` : undefined;
+      return item ? `Picked up ${where(item)}. Arrow keys move between ${between(item)}, Space drops, Escape cancels.` : undefined;
     },
     onDragOver: ({ active, over }) => {
       const item = parseDragId(active.id);

@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { layoutDocumentSchema, type LayoutDocument } from "@/lib/layout/schema";
-import { addArea, addOutputDevice, outputOf, placeOutputDevice, removeArea, removeOutputDevice, setGrade, setZoneProgram } from "@/lib/layout/zone-output-operations";
+import { addArea, addOutputDevice, outputOf, placeOutputDevice, removeArea, removeOutputDevice, setAreaKeypads, setGrade, setZoneProgram } from "@/lib/layout/zone-output-operations";
 import { zonedCatalog } from "@/lib/solver/testing/fixture-catalog";
 import { board, det, emptyLayout } from "@/lib/solver/testing/fixture-schedule";
 
@@ -71,5 +71,24 @@ describe("zone programming, areas and the grade", () => {
     expect([intruder.grade, intruder.power.standbyProfileId]).toEqual([3, "intruder-grade-3-60h"]);
     const fire = setGrade(emptyLayout("fx-panel-small", { power: { standbyProfileId: "nfpa72-fire", safetyFactor: 1.25 } }), ctx, 3).layout;
     expect(fire.power.standbyProfileId).toBe("nfpa72-fire");
+  });
+});
+
+describe("keypads of an area", () => {
+  const withKeypads = () => {
+    const doc = emptyLayout("fx-panel-small", { boards: [board("k1", "keypad", "fx-keypad", 1), board("k2", "keypad", "fx-keypad", 2), board("m1", "outputs", "fx-relays-4", 3)] });
+    return addArea(doc, ctx, "Offices").layout;
+  };
+
+  it("sets an area from keypads of the layout, in board order, and refuses anything else", () => {
+    const doc = withKeypads();
+    const e = setAreaKeypads(doc, ctx, "area-1", ["k2", "k1"]);
+    expect(e).toMatchObject({ ok: true, message: "Area Offices set from Keypad 1 and Keypad 2" });
+    expect(e.layout.areas![0].keypadKeys).toEqual(["k1", "k2"]);
+    expect(setAreaKeypads(e.layout, ctx, "area-1", [])).toMatchObject({ ok: true, message: "Area Offices set from no keypad" });
+    // an output module is not a keypad, and an area must exist
+    expect(setAreaKeypads(doc, ctx, "area-1", ["m1"])).toMatchObject({ ok: false, layout: doc });
+    expect(setAreaKeypads(doc, ctx, "area-9", ["k1"])).toMatchObject({ ok: false, layout: doc });
+    expect(layoutDocumentSchema.safeParse(e.layout).success).toBe(true);
   });
 });

@@ -111,3 +111,17 @@ export function setGrade(doc: LayoutDocument, _ctx: LayoutContext, grade: Securi
   const profile = standbyProfile(power.standbyProfileId);
   return done({ ...doc, grade, power }, `Security grade ${grade}${fire ? "" : `; battery sized for ${profile?.label ?? "the grade"}`}`);
 }
+
+/** Choose the keypads an area is set and unset from: each must be a keypad of this layout. */
+export function setAreaKeypads(doc: LayoutDocument, _ctx: LayoutContext, key: string, keypadKeys: string[]): LayoutEdit {
+  const parts = documentParts(doc);
+  const area = parts.areas.find((a) => a.key === key);
+  if (!area) return refuse(doc, "No such area in this layout");
+  const keypads = new Set(doc.boards.filter((b) => b.kind === "keypad").map((b) => b.key));
+  const stray = keypadKeys.find((k) => !keypads.has(k));
+  if (stray !== undefined) return refuse(doc, "An area is set from a keypad of this layout");
+  const chosen = doc.boards.filter((b) => keypadKeys.includes(b.key)).map((b) => b.key);
+  const areas = parts.areas.map((a) => (a.key === key ? { ...a, keypadKeys: chosen } : a));
+  const names = chosen.map((k) => boardName(doc, k));
+  return done({ ...doc, areas }, names.length ? `Area ${area.name} set from ${names.join(" and ")}` : `Area ${area.name} set from no keypad`);
+}

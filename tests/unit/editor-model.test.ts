@@ -154,9 +154,9 @@ describe("drag model", () => {
   });
 
   it("names the dragged item and where it is", () => {
-    expect(dragPlace(doc, detector("a"), labelOf)).toBe("Front door, on Control panel, input 2");
-    expect(dragPlace(doc, detector("b"), labelOf)).toBe("Hall motion, unplaced");
-    expect(dragPlace(doc, { type: "board", boardKey: "b2" }, labelOf)).toBe("Keypad 1, position 2 of 2");
+    expect(dragPlace(doc, indexCatalog(fixtureCatalog), detector("a"), labelOf)).toBe("Front door, on Control panel, input 2");
+    expect(dragPlace(doc, indexCatalog(fixtureCatalog), detector("b"), labelOf)).toBe("Hall motion, unplaced");
+    expect(dragPlace(doc, indexCatalog(fixtureCatalog), { type: "board", boardKey: "b2" }, labelOf)).toBe("Keypad 1, position 2 of 2");
   });
 
   it("words the removed-detector notice and the names of rescue copies", () => {
