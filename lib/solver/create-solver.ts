@@ -126,7 +126,7 @@ export function createSolverWith(analyze: AnalyzeLoop, schedule: Schedule, catal
     // Errors first, then warnings, then notes; rule order kept within a severity.
     const bySeverity: Finding[][] = [[], [], []];
     for (const f of out) bySeverity[severityRank[f.severity]].push(f);
-    result.findings = bySeverity.flat();
+    result.findings = bySeverity[0].concat(bySeverity[1], bySeverity[2]);
     result.counts = { error: bySeverity[0].length, warning: bySeverity[1].length, note: bySeverity[2].length };
     // A patch adds its few entries to the memos' live generation, so a later full solve still finds every input.
     const patched = patchesSinceFull > 0;

@@ -38,6 +38,29 @@ function wirelessSources(wireless: WirelessPlaced[]): ZoneSource[] {
   return wireless.map((w) => ({ detectorId: w.sched.id, label: w.sched.label, lifeSafety: isLifeSafety(w.cat), holdUp: w.cat.category === "panic", boardKey: w.board.key, input: null, where: w.board.name, wireless: true }));
 }
 
+/** The same zone under another number; written out field by field, as a spread is slow over hundreds of zones. */
+function renumbered(z: ZoneFigures, number: number): ZoneFigures {
+  return {
+    number,
+    detectorId: z.detectorId,
+    label: z.label,
+    keypadLabel: z.keypadLabel,
+    labelCut: z.labelCut,
+    type: z.type,
+    areaKey: z.areaKey,
+    areaName: z.areaName,
+    partSet: z.partSet,
+    entryS: z.entryS,
+    exitS: z.exitS,
+    entryRoute: z.entryRoute,
+    chime: z.chime,
+    where: z.where,
+    boardKey: z.boardKey,
+    input: z.input,
+    wireless: z.wireless,
+  };
+}
+
 /** A zone not yet programmed: fire for a life-safety device, hold-up for a hold-up device, else instant, so layouts made before zone programming stay valid. */
 function defaultZoneType(src: ZoneSource): ZoneType {
   return src.lifeSafety ? "fire" : src.holdUp ? "hold-up" : "instant";
@@ -156,7 +179,7 @@ export function checkZones(r: Resolved, wireless: WirelessPlaced[], grade: Grade
   };
   const take = (e: ZoneEntry) => {
     const number = zones.length + 1;
-    if (e.fig.number !== number) e.fig = { ...e.fig, number };
+    if (e.fig.number !== number) e.fig = renumbered(e.fig, number);
     zones.push(e.fig);
     for (const f of e.findings) out.push(f);
     if (e.cutUnprogrammed !== null) cutUnprogrammed.push(e.cutUnprogrammed);
@@ -178,8 +201,8 @@ export function checkZones(r: Resolved, wireless: WirelessPlaced[], grade: Grade
       why: "Zones not yet programmed take the detector's label; give each a keypad label short enough to read whole.",
       target: { kind: "layout" },
     });
-  const zoned = new Set(zones.map((z) => z.detectorId));
-  const stray = parts.zones.filter((z) => !zoned.has(z.detectorId)).length;
+  const zoned = parts.zones.length ? new Set(zones.map((z) => z.detectorId)) : null;
+  const stray = zoned ? parts.zones.filter((z) => !zoned.has(z.detectorId)).length : 0;
   if (stray)
     out.push({ code: "zone-not-placed", severity: "note", message: `${plural(stray, "zone")} ${pluralWord(stray, "is", "are")} programmed for ${pluralWord(stray, "a detector", "detectors")} on no input or receiver`, why: "Their programming is kept and used once the detectors are placed.", target: { kind: "layout" } });
   const areas: AreaFigures[] = parts.areas.map((a) => ({ key: a.key, name: a.name, zones: zones.filter((z) => z.areaKey === a.key).length, keypadKeys: a.keypadKeys ?? [] }));
