@@ -43,7 +43,15 @@ async function slowestEventSince(page: Page, since: number): Promise<number> {
 async function oneRun(page: Page, url: string) {
   const t0 = Date.now();
   await page.goto(url);
-  await page.getByTestId("unplaced").getByRole("button").first().waitFor();
+  await page
+    .getByTestId("unplaced")
+    .getByRole("button")
+    .first()
+    .waitFor({ timeout: 60_000 })
+    .catch(async (e) => {
+      await page.screenshot({ path: "/tmp/editor-bench-failed.png" });
+      throw new Error(`the editor did not show an unplaced detector at ${page.url()} (screenshot /tmp/editor-bench-failed.png): ${e}`);
+    });
   await page.waitForTimeout(2000);
   const loaded = await read(page);
   // when the main thread goes quiet: the end of the last long task after navigation (none: the chip was there)
@@ -129,9 +137,12 @@ export async function run(): Promise<void> {
     under("editor 1,000 detectors: keyboard arrow to paint", m("arrow"), 100, "ms", how);
     under("editor 1,000 detectors: keyboard drop to paint", m("drop"), 100, "ms", how);
     under("editor 1,000 detectors: longest task while dragging", m("longestDragTask"), 50, "ms", how);
-    const slowShare = 100 * (1 - m("smoothShare"));
+    const slowShare = Math.round(100 * (1 - m("smoothShare")));
     record({ name: "editor 1,000 detectors: frames over 16.7 ms while dragging", value: slowShare, unit: "count", target: "< 5 (per cent)", met: Number.isFinite(slowShare) ? slowShare < 5 : null, how: `per cent of frames; ${how}` });
     under("editor 1,000 detectors: main thread quiet after navigation", m("quietMs"), 1500, "ms", `end of the last long task; ${how}`);
+  } catch (e) {
+    console.log(`editor bench failed; the server's last words:\n${server.log().slice(-3000)}`);
+    throw e;
   } finally {
     await browser.close();
     server.stop();
