@@ -43,6 +43,12 @@ export const TARGET_ROWS = [
   "50 clients, 30 s: lost or doubled saves",
   "layout read during 4 sheet PDFs + 2 suggestions, p95",
   "500-detector terminal sheet PDF, uncached",
+  "editor 1,000 detectors: keyboard pick-up to paint",
+  "editor 1,000 detectors: keyboard arrow to paint",
+  "editor 1,000 detectors: keyboard drop to paint",
+  "editor 1,000 detectors: longest task while dragging",
+  "editor 1,000 detectors: frames over 16.7 ms while dragging",
+  "editor 1,000 detectors: main thread quiet after navigation",
 ] as const;
 
 function show(v: number | null, unit: Figure["unit"]): string {

@@ -1,7 +1,11 @@
 "use client";
 
 import { useDraggable } from "@dnd-kit/core";
-import type { HTMLAttributes, KeyboardEvent } from "react";
+import { memo, type HTMLAttributes, type KeyboardEvent } from "react";
+import type { Finding } from "@/lib/findings";
+import type { DetectorVoltage } from "@/lib/solver";
+import { useEditorStable } from "@/components/editor/editor-stable-context";
+import { samePropsWithLists } from "@/components/editor/memo-compare";
 import { useEditor } from "@/components/editor/editor-context";
 import { detectorDragId } from "@/components/editor/editor-model";
 import { FindingMarker } from "@/components/editor/finding-marker";
@@ -14,11 +18,14 @@ import { lengthCell } from "@/lib/format/length-input";
 /** What a chip shows; also drawn in the drag overlay. On a chip the label is the control (`labelProps`), so its
  * name is what it shows; the zone, the fire badge and the figures sit beside it. */
 export function ChipFace({ detectorId, labelProps }: { detectorId: string; labelProps?: HTMLAttributes<HTMLSpanElement> }) {
-  const { detectorsById, ix, zones, result } = useEditor();
+  const { zones, voltsOf } = useEditor();
+  return <ChipFaceView detectorId={detectorId} zone={zones.get(detectorId)} v={voltsOf.get(detectorId)} labelProps={labelProps} />;
+}
+
+function ChipFaceView({ detectorId, zone, v, labelProps }: { detectorId: string; zone: number | undefined; v: DetectorVoltage | undefined; labelProps?: HTMLAttributes<HTMLSpanElement> }) {
+  const { detectorsById, ix } = useEditorStable();
   const d = detectorsById.get(detectorId);
   const c = d ? ix.detectors.get(d.catalogId) : undefined;
-  const zone = zones.get(detectorId);
-  const v = result.detectors.find((x) => x.detectorId === detectorId);
   const { units } = useFormat().settings;
   return (
     <span className="flex min-w-0 flex-col text-left">
@@ -49,10 +56,38 @@ export function ChipFace({ detectorId, labelProps }: { detectorId: string; label
 
 /** A detector: dragged with the mouse or the keyboard (Space), or selected (click, Enter) for an input's "place here". */
 export function DetectorChip({ detectorId, onInput, sharedAs }: { detectorId: string; onInput: boolean; sharedAs?: "A" | "B" }) {
-  const { canWrite, selected, select, doc, ctx, apply, findingsAt, highlighted, detectorsById } = useEditor();
+  const { selected, zones, voltsOf, findingsAt, highlighted } = useEditor();
+  const domId = `detector-${detectorId}`;
+  return (
+    <DetectorChipView
+      detectorId={detectorId}
+      onInput={onInput}
+      sharedAs={sharedAs}
+      zone={zones.get(detectorId)}
+      v={voltsOf.get(detectorId)}
+      findings={findingsAt.get(domId)}
+      isSelected={selected === detectorId}
+      isHighlighted={highlighted === domId}
+    />
+  );
+}
+
+interface ChipViewProps {
+  detectorId: string;
+  onInput: boolean;
+  sharedAs?: "A" | "B";
+  zone: number | undefined;
+  v: DetectorVoltage | undefined;
+  findings: Finding[] | undefined;
+  isSelected: boolean;
+  isHighlighted: boolean;
+}
+
+/** The chip itself, re-rendered only when its own props change (not on every edit elsewhere in the layout). */
+const DetectorChipView = memo(function DetectorChipView({ detectorId, onInput, sharedAs, zone, v, findings, isSelected, isHighlighted }: ChipViewProps) {
+  const { canWrite, select, ctx, applyTo, detectorsById } = useEditorStable();
   const { attributes, listeners, setNodeRef, isDragging } = useDraggable({ id: detectorDragId(detectorId), data: { type: "detector" }, disabled: !canWrite });
   const domId = `detector-${detectorId}`;
-  const isSelected = selected === detectorId;
   const label = detectorsById.get(detectorId)?.label ?? detectorId;
   const onKeyDown = (e: KeyboardEvent<HTMLDivElement>) => {
     if (isDragging) return; // the keyboard sensor has the keys while it is picked up
@@ -68,22 +103,22 @@ export function DetectorChip({ detectorId, onInput, sharedAs }: { detectorId: st
     <div
       id={domId}
       data-testid={domId}
-      className={`group flex items-center gap-1 rounded-md border bg-white px-2 py-1 text-xs shadow-sm ${isSelected ? "border-signal ring-2 ring-signal" : "border-line"} ${isDragging ? "opacity-40" : ""} ${highlighted === domId ? "ring-4 ring-warn" : ""}`}
+      className={`group flex items-center gap-1 rounded-md border bg-white px-2 py-1 text-xs shadow-sm ${isSelected ? "border-signal ring-2 ring-signal" : "border-line"} ${isDragging ? "opacity-40" : ""} ${isHighlighted ? "ring-4 ring-warn" : ""}`}
     >
       <div ref={setNodeRef} {...listeners} onKeyDown={onKeyDown} onClick={() => canWrite && select(isSelected ? null : detectorId)} className={`min-w-0 flex-1 ${canWrite ? "cursor-grab touch-none" : "cursor-default"}`}>
-        <ChipFace detectorId={detectorId} labelProps={{ ...attributes, role: "button", tabIndex: 0, "aria-pressed": canWrite ? isSelected : undefined }} />
+        <ChipFaceView detectorId={detectorId} zone={zone} v={v} labelProps={{ ...attributes, role: "button", tabIndex: 0, "aria-pressed": canWrite ? isSelected : undefined }} />
       </div>
       {sharedAs ? (
         <span className="shrink-0 rounded border border-line px-1 text-[10px] font-semibold text-slate-600" title={`Detector ${sharedAs} of the shared input: the ${sharedAs} resistor goes across its contact`}>
           {sharedAs}
         </span>
       ) : null}
-      <FindingMarker domId={domId} findings={findingsAt.get(domId)} />
+      <FindingMarker domId={domId} findings={findings} />
       {onInput && canWrite ? (
-        <button type="button" className="rounded px-1 text-slate-400 hover:bg-slate-100 hover:text-ink" aria-label={`Take ${label} off its input`} title="Back to unplaced" onClick={() => apply(unassign(doc, ctx, detectorId))}>
+        <button type="button" className="rounded px-1 text-slate-400 hover:bg-slate-100 hover:text-ink" aria-label={`Take ${label} off its input`} title="Back to unplaced" onClick={() => applyTo((doc) => unassign(doc, ctx, detectorId))}>
           ×
         </button>
       ) : null}
     </div>
   );
-}
+}, samePropsWithLists<ChipViewProps>(["findings"]));

@@ -4,9 +4,9 @@ import { createContext, useContext } from "react";
 import type { Finding } from "@/lib/findings";
 import type { CatalogIndex } from "@/lib/layout/catalog-index";
 import type { LayoutContext, LayoutEdit } from "@/lib/layout/operations";
-import type { LayoutDocument } from "@/lib/layout/schema";
+import type { LayoutDocument, LayoutInput } from "@/lib/layout/schema";
 import type { ScheduleDetector } from "@/lib/schedule/schema";
-import type { SolveResult } from "@/lib/solver";
+import type { DetectorVoltage, SolveResult } from "@/lib/solver";
 
 // What every part of the editor reads: the document, its solve, and the one way to change it.
 
@@ -18,6 +18,9 @@ export interface EditorState {
   zones: Map<string, number>;
   findingsAt: Map<string, Finding[]>;
   detectorsById: Map<string, ScheduleDetector>;
+  /** The used input at a slot (`inputAtKey`), and each powered detector's voltage: lookups instead of searches. */
+  inputAt: Map<string, LayoutInput>;
+  voltsOf: Map<string, DetectorVoltage>;
   canWrite: boolean;
   /** The detector picked for the non-drag way of placing it ("place here"). */
   selected: string | null;

@@ -1,6 +1,11 @@
 "use client";
 
 import { useDroppable } from "@dnd-kit/core";
+import { memo } from "react";
+import type { Finding } from "@/lib/findings";
+import { useEditorStable } from "@/components/editor/editor-stable-context";
+import { samePropsWithLists } from "@/components/editor/memo-compare";
+import { inputAtKey } from "@/components/editor/use-editor-lookups";
 import type { InputType, WiringScheme } from "@/lib/catalog/schema";
 import { useEditor } from "@/components/editor/editor-context";
 import { DetectorChip } from "@/components/editor/detector-chip";
@@ -43,9 +48,9 @@ function OhmsField({ label, value, expected, onCommit }: { label: string; value:
 }
 
 function WiringControls({ entry, type, where }: { entry: LayoutInput; type: InputType | undefined; where: string }) {
-  const { doc, ctx, apply } = useEditor();
+  const { ctx, applyTo } = useEditorStable();
   const at = { boardKey: entry.boardKey, input: entry.input };
-  const set = (patch: WiringPatch) => apply(setInputWiring(doc, ctx, at, patch));
+  const set = (patch: WiringPatch) => applyTo((doc) => setInputWiring(doc, ctx, at, patch));
   const schemes: WiringScheme[] = type?.schemes ?? [entry.scheme];
   return (
     <details className="mt-1 text-[11px]">
@@ -102,15 +107,47 @@ function WiringControls({ entry, type, where }: { entry: LayoutInput; type: Inpu
 
 /** One terminal pair: its number, zones, wiring and detectors; a drop target, with a "place here" button for the selected detector. */
 export function InputSlot({ boardKey, n, type }: { boardKey: string; n: number; type: InputType | undefined }) {
-  const { doc, ctx, canWrite, selected, select, apply, zones, findingsAt, highlighted, detectorsById } = useEditor();
-  const { setNodeRef, isOver } = useDroppable({ id: inputDropId(boardKey, n), data: { accepts: ["detector"] }, disabled: !canWrite });
-  const entry = doc.inputs.find((i) => i.boardKey === boardKey && i.input === n && i.detectorIds.length > 0);
+  const { doc, ctx, canWrite, selected, zones, findingsAt, highlighted, detectorsById, inputAt } = useEditor();
+  const entry = inputAt.get(inputAtKey(boardKey, n));
   const domId = `input-${boardKey}-${n}`;
-  const where = inputName(doc, { boardKey, input: n });
   const zoneList = entry?.detectorIds.map((d) => zones.get(d)).filter((z): z is number => z !== undefined) ?? [];
   // "place here" on a free input; "share" only where sharing would be accepted (the drag path says why not)
   const canPlace = !!(canWrite && selected && !entry?.detectorIds.includes(selected) && (!entry || dropEdit(doc, ctx, { type: "detector", detectorId: selected }, { type: "input", boardKey, input: n })?.ok));
-  const findings = findingsAt.get(domId);
+  return (
+    <InputSlotView
+      boardKey={boardKey}
+      n={n}
+      type={type}
+      entry={entry}
+      where={inputName(doc, { boardKey, input: n })}
+      zoneText={zoneList.join(", ")}
+      findings={findingsAt.get(domId)}
+      placing={canPlace ? (detectorsById.get(selected!)?.label ?? "the selected detector") : null}
+      selected={canPlace ? selected : null}
+      isHighlighted={highlighted === domId}
+    />
+  );
+}
+
+interface SlotViewProps {
+  boardKey: string;
+  n: number;
+  type: InputType | undefined;
+  entry: LayoutInput | undefined;
+  where: string;
+  zoneText: string;
+  findings: Finding[] | undefined;
+  /** The label of the selected detector when it may be placed here, else null. */
+  placing: string | null;
+  selected: string | null;
+  isHighlighted: boolean;
+}
+
+/** The slot itself, re-rendered only when its own props change: a move elsewhere leaves it alone. */
+const InputSlotView = memo(function InputSlotView({ boardKey, n, type, entry, where, zoneText, findings, placing, selected, isHighlighted }: SlotViewProps) {
+  const { ctx, canWrite, select, applyTo, detectorsById } = useEditorStable();
+  const { setNodeRef, isOver } = useDroppable({ id: inputDropId(boardKey, n), data: { accepts: ["detector"] }, disabled: !canWrite });
+  const domId = `input-${boardKey}-${n}`;
   const worst = findings?.some((f) => f.severity === "error") ? "border-fault" : findings?.some((f) => f.severity === "warning") ? "border-warn" : entry ? "border-line" : "border-dashed border-line";
   return (
     <li
@@ -118,11 +155,11 @@ export function InputSlot({ boardKey, n, type }: { boardKey: string; n: number; 
       id={domId}
       data-testid={domId}
       aria-label={`${where}${entry ? `: ${entry.detectorIds.map((d) => detectorsById.get(d)?.label ?? d).join(" and ")}` : ", free"}`}
-      className={`flex min-h-24 flex-col rounded-md border-2 p-1.5 text-xs ${worst} ${isOver ? "bg-signal-soft" : entry ? "bg-white" : "bg-slate-50"} ${highlighted === domId ? "ring-4 ring-warn" : ""}`}
+      className={`flex min-h-24 flex-col rounded-md border-2 p-1.5 text-xs ${worst} ${isOver ? "bg-signal-soft" : entry ? "bg-white" : "bg-slate-50"} ${isHighlighted ? "ring-4 ring-warn" : ""}`}
     >
       <div className="mb-1 flex items-center gap-1">
         <span className="font-mono font-semibold">IN {n}</span>
-        {zoneList.length ? <span className="text-slate-500">zone {zoneList.join(", ")}</span> : <span className="text-slate-400">free</span>}
+        {zoneText ? <span className="text-slate-500">zone {zoneText}</span> : <span className="text-slate-400">free</span>}
         <span className="ml-auto">
           <FindingMarker domId={domId} findings={findings} />
         </span>
@@ -141,16 +178,18 @@ export function InputSlot({ boardKey, n, type }: { boardKey: string; n: number; 
           <DetectorChip key={d} detectorId={d} onInput sharedAs={entry.scheme === "shared" ? (i === 0 ? "A" : "B") : undefined} />
         ))}
       </div>
-      {canPlace ? (
+      {placing !== null && selected ? (
         <button
           type="button"
           className="mt-auto rounded border border-signal px-1 py-0.5 text-[11px] font-medium text-signal hover:bg-signal-soft"
-          aria-label={`Place ${detectorsById.get(selected!)?.label ?? "the selected detector"} on ${where}${entry ? " (shared input)" : ""}`}
-          onClick={() => {
-            const edit = dropEdit(doc, ctx, { type: "detector", detectorId: selected! }, { type: "input", boardKey, input: n });
-            apply(edit);
-            if (edit?.ok) select(null);
-          }}
+          aria-label={`Place ${placing} on ${where}${entry ? " (shared input)" : ""}`}
+          onClick={() =>
+            applyTo((doc) => {
+              const edit = dropEdit(doc, ctx, { type: "detector", detectorId: selected }, { type: "input", boardKey, input: n });
+              if (edit?.ok) select(null);
+              return edit;
+            })
+          }
         >
           {entry ? "Share this input" : "Place here"}
         </button>
@@ -159,4 +198,4 @@ export function InputSlot({ boardKey, n, type }: { boardKey: string; n: number; 
       {entry && canWrite ? <WiringControls entry={entry} type={type} where={where} /> : null}
     </li>
   );
-}
+}, samePropsWithLists<SlotViewProps>(["findings"]));

@@ -9,6 +9,9 @@ import type { LayoutMeta } from "@/lib/server/layouts";
 import { ConflictDialog } from "@/components/editor/conflict-dialog";
 import { removedNotice } from "@/components/editor/drag-model";
 import { EditorContext, type EditorState } from "@/components/editor/editor-context";
+import { EditorStableContext, type EditorStable } from "@/components/editor/editor-stable-context";
+import { useEditorLookups } from "@/components/editor/use-editor-lookups";
+import type { LayoutEdit } from "@/lib/layout/operations";
 import { EditorHeader } from "@/components/editor/editor-header";
 import { hasLifeSafety, withoutMissingDetectors } from "@/components/editor/editor-model";
 import { EditorNotices } from "@/components/editor/editor-notices";
@@ -53,9 +56,13 @@ export function LayoutEditor(props: LayoutEditorProps) {
   const fire = useMemo(() => hasLifeSafety(ctx), [ctx]);
   const busy = conflict.busy || history.busy;
 
-  const state: EditorState = { doc, ctx, ix, result, zones, findingsAt, detectorsById, canWrite, selected, select, apply, highlighted, show };
+  const { inputAt, voltsOf } = useEditorLookups(doc, result);
+  const applyTo = useCallback((make: (d: LayoutDocument) => LayoutEdit | null) => apply(make(docRef.current)), [apply, docRef]);
+  const stable: EditorStable = useMemo(() => ({ ctx, ix, detectorsById, canWrite, select, applyTo }), [ctx, ix, detectorsById, canWrite, select, applyTo]);
+  const state: EditorState = { doc, ctx, ix, result, zones, findingsAt, detectorsById, inputAt, voltsOf, canWrite, selected, select, apply, highlighted, show };
 
   return (
+    <EditorStableContext.Provider value={stable}>
     <EditorContext.Provider value={state}>
       {/* wider than the page frame: the editor wants the whole screen */}
       <div className="mx-[calc((100%-min(100vw-2rem,110rem))/2)]">
@@ -66,5 +73,6 @@ export function LayoutEditor(props: LayoutEditorProps) {
         {conflict.message && canWrite ? <ConflictDialog message={conflict.message} busy={busy} error={conflict.error} onReloadLatest={conflict.reloadLatest} onWorkOnCopy={conflict.workOnCopy} /> : null}
       </div>
     </EditorContext.Provider>
+    </EditorStableContext.Provider>
   );
 }

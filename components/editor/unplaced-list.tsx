@@ -1,7 +1,8 @@
 "use client";
 
 import { useDroppable } from "@dnd-kit/core";
-import { useMemo } from "react";
+import { useMemo, useRef } from "react";
+import { VirtualUnplaced, VIRTUAL_FROM } from "@/components/editor/virtual-unplaced";
 import { useEditor } from "@/components/editor/editor-context";
 import { DetectorChip } from "@/components/editor/detector-chip";
 import { UNPLACED_DROP_ID } from "@/components/editor/editor-model";
@@ -15,11 +16,14 @@ export function UnplacedList() {
     const m = new Map<string, string[]>();
     for (const id of unplacedDetectorIds(doc, ctx.schedule)) {
       const area = detectorsById.get(id)?.area || "No area";
-      m.set(area, [...(m.get(area) ?? []), id]);
+      const list = m.get(area);
+      if (list) list.push(id);
+      else m.set(area, [id]);
     }
     return [...m.entries()];
   }, [doc, ctx.schedule, detectorsById]);
   const count = groups.reduce((n, [, ids]) => n + ids.length, 0);
+  const scrollRef = useRef<HTMLDivElement | null>(null);
   const selectedLabel = selected ? detectorsById.get(selected)?.label : null;
   return (
     <section aria-labelledby="unplaced-heading" className="flex min-h-0 flex-col">
@@ -43,12 +47,16 @@ export function UnplacedList() {
         </p>
       ) : null}
       <div
-        ref={setNodeRef}
+        ref={(el) => {
+          setNodeRef(el);
+          scrollRef.current = el;
+        }}
         data-testid="unplaced"
         className={`min-h-24 flex-1 overflow-y-auto rounded-lg border-2 border-dashed p-2 ${isOver ? "border-signal bg-signal-soft" : "border-line bg-white/60"}`}
       >
         {count === 0 ? <p className="p-2 text-xs text-slate-500">Every detector is on an input.</p> : null}
-        {groups.map(([area, ids]) => (
+        {count >= VIRTUAL_FROM ? <VirtualUnplaced groups={groups} scrollRef={scrollRef} /> : null}
+        {count >= VIRTUAL_FROM ? null : groups.map(([area, ids]) => (
           <div key={area} className="mb-3" role="group" aria-label={area}>
             <h3 className="mb-1 text-[11px] font-semibold uppercase tracking-wide text-slate-500">
               {area} ({ids.length})

@@ -21,8 +21,15 @@ export class GenerationMemo<V> {
     return v;
   }
 
-  /** Called after each solve. */
-  endGeneration(): void {
+  /** Called after each solve; after a patch, what it used joins the live generation instead of starting one. */
+  endGeneration(patch = false): void {
+    if (patch) {
+      for (const [k, v] of this.next) this.live.set(k, v);
+      this.next = new Map();
+      this.hits = 0;
+      this.misses = 0;
+      return;
+    }
     this.older = this.live;
     this.live = this.next;
     this.next = new Map();

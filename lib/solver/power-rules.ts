@@ -7,7 +7,7 @@ import { fmt, fmtUp } from "@/lib/solver/format";
 import { attachBreakdown } from "@/lib/solver/supply-breakdown";
 import type { Detector } from "@/lib/catalog/schema";
 import type { InputOutcome } from "@/lib/solver/loop-rules";
-import type { PlacedDetector, Resolved, ResolvedBoard } from "@/lib/solver/resolve";
+import type { PlacedDetector, Resolved, ResolvedBoard, ResolvedInput } from "@/lib/solver/resolve";
 import { CHECK_EDITION, resolveStandby } from "@/lib/solver/standby-profiles";
 import type { DetectorVoltage, OutputDeviceVoltage, SolveResult, SupplyFigures } from "@/lib/solver/types";
 import { outputDeviceVoltage, type OutputLoad } from "@/lib/solver/output-rules";
@@ -89,6 +89,17 @@ function voltageAt(d: PlacedDetector, p: NonNullable<Detector["power"]>, feed: S
   return { fig, finding, panelMinVolts, catId: d.cat.id };
 }
 
+/**
+ * Supplies and detector voltages from an earlier solve. `touched` (a patched solve: boards, power and outputs as
+ * before) names the boards whose inputs changed; a supply feeding none of them keeps its figures and findings,
+ * and an input kept from that solve keeps its detectors' voltages. Null: everything is worked out again.
+ */
+export interface PowerMemo {
+  touched: Set<string> | null;
+  supplies: Map<string, { fig: SupplyFigures; findings: Finding[] }>;
+  inputs: Map<ResolvedInput, { feed: SupplyFigures; figs: DetectorVoltage[]; findings: Finding[] }>;
+}
+
 export function checkPower(
   r: Resolved,
   outcomes: InputOutcome[],
@@ -96,6 +107,7 @@ export function checkPower(
   voltageCache: Map<string, VoltageEntry>,
   out: Finding[],
   loads: OutputLoad[] = [],
+  memo: PowerMemo = { touched: null, supplies: new Map(), inputs: new Map() },
 ): Pick<SolveResult, "supplies" | "detectors" | "battery" | "outputDevices"> {
   const { panel } = r;
   // Current drawn by each board's detectors: per-input sums come cached with the input's outcome.
@@ -186,11 +198,28 @@ export function checkPower(
   panelAux.name = panelSupplyName(panelPurposes);
 
   // Standby battery.
+  const outer = out;
   const { profile, standbyH, alarmMin } = resolveStandby(power);
   if (!profile)
     out.push({ code: "standby-profile-unknown", severity: "error", message: "The standby profile chosen is not known; 24 h standby and 5 min in alarm are used", why: "Battery sizes depend on the standby profile.", target: { kind: "layout" } });
   const sf = power.safetyFactor;
-  for (const s of supplies) {
+  // With a patch, a supply none of whose boards changed is the one from before, findings and all.
+  const { touched } = memo;
+  const touchedSupplies = new Set<string>();
+  if (touched) for (const key of touched) touchedSupplies.add((feedOf.get(key) ?? panelAux).supplyKey);
+  const supplyMemo = new Map<string, { fig: SupplyFigures; findings: Finding[] }>();
+  for (let i = 0; i < supplies.length; i++) {
+    const kept = touched && !touchedSupplies.has(supplies[i].supplyKey) ? memo.supplies.get(supplies[i].supplyKey) : undefined;
+    if (kept) {
+      supplies[i] = kept.fig;
+      bySupply.set(kept.fig.supplyKey, kept.fig);
+      supplyMemo.set(kept.fig.supplyKey, kept);
+      for (const f of kept.findings) outer.push(f);
+      continue;
+    }
+    const s = supplies[i];
+    const out: Finding[] = [];
+    supplyMemo.set(s.supplyKey, { fig: s, findings: out });
     const target = { kind: "supply" as const, supplyKey: s.supplyKey };
     if (s.loadRestMa > s.ratingMa || s.loadAlarmMa > s.ratingMa)
       out.push({
@@ -222,7 +251,9 @@ export function checkPower(
         why: `Sized for ${profile?.label ?? "24 h and 5 min"}${profile ? ` (${profile.source}). ${CHECK_EDITION}` : "."} ${s.batteryPick ? `Standard sizes are ${STANDARD_BATTERY_AH.join(", ")} Ah.` : "Split the load onto another supply, or choose one whose charger takes a larger battery."}`,
         target,
       });
+      for (const f of out) outer.push(f);
   }
+  memo.supplies = supplyMemo;
   const fire = profile?.lifeSafety || outcomes.some((o) => o.lifeSafety);
   if (fire)
     out.push({
@@ -233,24 +264,33 @@ export function checkPower(
       target: { kind: "layout" },
     });
 
-  attachBreakdown(r, supplies, feedOf, loads);
+  attachBreakdown(r, supplies, feedOf, loads, touched ? touchedSupplies : undefined);
   const outputDevices: OutputDeviceVoltage[] = loads.map((l) => outputDeviceVoltage(l, l.boardKey === PANEL_KEY ? panelAux : (feedOf.get(l.boardKey) ?? panelAux), out));
 
   // Voltage at each powered detector after the drop on its cable.
   const detectors: DetectorVoltage[] = [];
+  const inputMemo: PowerMemo["inputs"] = new Map();
   for (const ri of r.inputs) {
     const feed = feedOf.get(ri.board.key) ?? panelAux;
-    for (const d of ri.detectors) {
-      const p = d.cat.power;
-      if (!p) continue;
-      let c = voltageCache.get(d.sched.id);
-      if (!c || c.fig.supplyKey !== feed.supplyKey || c.fig.supplyVolts !== feed.volts || c.fig.endSupplyVolts !== feed.endVolts || c.panelMinVolts !== panel.minDeviceVolts || c.catId !== d.cat.id) {
-        c = voltageAt(d, p, feed, panel.minDeviceVolts);
-        voltageCache.set(d.sched.id, c);
+    let v = touched ? memo.inputs.get(ri) : undefined;
+    if (!v || v.feed.supplyKey !== feed.supplyKey) {
+      v = { feed, figs: [], findings: [] };
+      for (const d of ri.detectors) {
+        const p = d.cat.power;
+        if (!p) continue;
+        let c = voltageCache.get(d.sched.id);
+        if (!c || c.fig.supplyKey !== feed.supplyKey || c.fig.supplyVolts !== feed.volts || c.fig.endSupplyVolts !== feed.endVolts || c.panelMinVolts !== panel.minDeviceVolts || c.catId !== d.cat.id) {
+          c = voltageAt(d, p, feed, panel.minDeviceVolts);
+          voltageCache.set(d.sched.id, c);
+        }
+        v.figs.push(c.fig);
+        if (c.finding) v.findings.push(c.finding);
       }
-      detectors.push(c.fig);
-      if (c.finding) out.push(c.finding);
     }
+    inputMemo.set(ri, v);
+    for (const f of v.figs) detectors.push(f);
+    for (const f of v.findings) out.push(f);
   }
+  memo.inputs = inputMemo;
   return { supplies, detectors, outputDevices, battery: { profileId: power.standbyProfileId, source: profile?.source ?? null, standbyH, alarmMin, safetyFactor: sf } };
 }

@@ -86,7 +86,7 @@ describe("solver properties", () => {
     expect(moved.ok).toBe(true);
     solver.solve(moved.layout);
     // d0 left panel input 1 and landed on board 1 input 8: one new loop, the other nine come from the cache
-    expect(solver.stats()).toEqual({ inputsReused: 9, inputsRecomputed: 1, loopHits: 0, loopMisses: 1 });
+    expect(solver.stats()).toEqual({ inputsReused: 9, inputsRecomputed: 1, loopHits: 0, loopMisses: 1, patched: true });
   });
 
   it("counts inputs used as inputs holding detectors, and zones as detectors placed", () => {

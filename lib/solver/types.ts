@@ -236,6 +236,6 @@ export interface Solver {
   solve(layout: LayoutDocument): SolveResult;
   /** The full loop analysis of an input from the last solve. */
   analysisFor(ref: InputRef): LoopAnalysis | null;
-  /** Cache use in the last solve, for tests and benchmarks: inputs whose outcome was reused or recomputed, loop analyses found or run. */
-  stats(): { inputsReused: number; inputsRecomputed: number; loopHits: number; loopMisses: number };
+  /** Cache use in the last solve, for tests and benchmarks: inputs whose outcome was reused or recomputed, loop analyses found or run, and whether it patched the solve before (else it solved in full). */
+  stats(): { inputsReused: number; inputsRecomputed: number; loopHits: number; loopMisses: number; patched: boolean };
 }

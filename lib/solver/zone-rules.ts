@@ -7,7 +7,7 @@ import { plural, pluralWord } from "@/lib/vocabulary/plural";
 import { listNames } from "@/lib/solver/format";
 import { ZONE_TYPE_WORDS } from "@/lib/vocabulary/words";
 import { GRADE_SOURCES } from "@/lib/solver/grade-rules";
-import type { Resolved } from "@/lib/solver/resolve";
+import type { Resolved, ResolvedInput } from "@/lib/solver/resolve";
 import type { AreaFigures, GradeFigures, ZoneFigures } from "@/lib/solver/types";
 import type { WirelessPlaced } from "@/lib/solver/wireless-rules";
 
@@ -28,15 +28,37 @@ interface ZoneSource {
   wireless: boolean;
 }
 
-/** Zones in the order the panel numbers them: wired in board and input order, then wireless by receiver. */
-function zoneSources(r: Resolved, wireless: WirelessPlaced[]): ZoneSource[] {
-  const out: ZoneSource[] = [];
-  for (const ri of r.inputs)
-    for (const d of ri.detectors)
-      out.push({ detectorId: d.sched.id, label: d.sched.label, lifeSafety: isLifeSafety(d.cat), holdUp: d.cat.category === "panic", boardKey: ri.board.key, input: ri.input.input, where: `${ri.board.name}, input ${ri.input.input}`, wireless: false });
-  for (const w of wireless)
-    out.push({ detectorId: w.sched.id, label: w.sched.label, lifeSafety: isLifeSafety(w.cat), holdUp: w.cat.category === "panic", boardKey: w.board.key, input: null, where: w.board.name, wireless: true });
-  return out;
+/** The zones of one input, in detector order: the panel numbers wired zones in board and input order. */
+function zoneSources(ri: ResolvedInput): ZoneSource[] {
+  return ri.detectors.map((d) => ({ detectorId: d.sched.id, label: d.sched.label, lifeSafety: isLifeSafety(d.cat), holdUp: d.cat.category === "panic", boardKey: ri.board.key, input: ri.input.input, where: `${ri.board.name}, input ${ri.input.input}`, wireless: false }));
+}
+
+/** Wireless zones come after every wired one, by receiver. */
+function wirelessSources(wireless: WirelessPlaced[]): ZoneSource[] {
+  return wireless.map((w) => ({ detectorId: w.sched.id, label: w.sched.label, lifeSafety: isLifeSafety(w.cat), holdUp: w.cat.category === "panic", boardKey: w.board.key, input: null, where: w.board.name, wireless: true }));
+}
+
+/** The same zone under another number; written out field by field, as a spread is slow over hundreds of zones. */
+function renumbered(z: ZoneFigures, number: number): ZoneFigures {
+  return {
+    number,
+    detectorId: z.detectorId,
+    label: z.label,
+    keypadLabel: z.keypadLabel,
+    labelCut: z.labelCut,
+    type: z.type,
+    areaKey: z.areaKey,
+    areaName: z.areaName,
+    partSet: z.partSet,
+    entryS: z.entryS,
+    exitS: z.exitS,
+    entryRoute: z.entryRoute,
+    chime: z.chime,
+    where: z.where,
+    boardKey: z.boardKey,
+    input: z.input,
+    wireless: z.wireless,
+  };
 }
 
 /** A zone not yet programmed: fire for a life-safety device, hold-up for a hold-up device, else instant, so layouts made before zone programming stay valid. */
@@ -51,7 +73,23 @@ export function keypadLabel(label: string, length: number | undefined): { text: 
   return { text: chars.slice(0, length).join(""), cut: true };
 }
 
-export function checkZones(r: Resolved, wireless: WirelessPlaced[], grade: GradeFigures | null, out: Finding[]): { zones: ZoneFigures[]; areas: AreaFigures[] } {
+/** One zone worked out: its figures (numbered as when it was made), its findings, its label when cut and not yet programmed. */
+interface ZoneEntry {
+  fig: ZoneFigures;
+  findings: Finding[];
+  cutUnprogrammed: string | null;
+}
+
+/**
+ * Zones of each wired input from an earlier solve. `reuse` says the programming, areas, grade and panel are those
+ * of that solve (a patched solve), so an input kept from it keeps its zones and only their numbers are redone.
+ */
+export interface ZoneMemo {
+  entries: Map<ResolvedInput, ZoneEntry[]>;
+  reuse: boolean;
+}
+
+export function checkZones(r: Resolved, wireless: WirelessPlaced[], grade: GradeFigures | null, out: Finding[], memo: ZoneMemo = { entries: new Map(), reuse: false }): { zones: ZoneFigures[]; areas: AreaFigures[] } {
   const { panel } = r;
   const parts = documentParts(r.layout);
   const programs = new Map<string, ZoneProgram>(parts.zones.map((z) => [z.detectorId, z]));
@@ -74,8 +112,8 @@ export function checkZones(r: Resolved, wireless: WirelessPlaced[], grade: Grade
 
   const zones: ZoneFigures[] = [];
   const cutUnprogrammed: string[] = [];
-  const sources = zoneSources(r, wireless);
-  for (const src of sources) {
+  const zoneOf = (src: ZoneSource, number: number): ZoneEntry => {
+    const out: Finding[] = [];
     const p = programs.get(src.detectorId);
     const type: ZoneType = p?.type ?? defaultZoneType(src);
     const target = { kind: "detector" as const, detectorId: src.detectorId };
@@ -110,8 +148,7 @@ export function checkZones(r: Resolved, wireless: WirelessPlaced[], grade: Grade
     }
     const label = p?.keypadLabel ?? src.label;
     const shown = keypadLabel(label, panel.zoneLabelLength);
-    if (shown.cut && !p) cutUnprogrammed.push(label);
-    else if (shown.cut)
+    if (shown.cut && p)
       out.push({
         code: "keypad-label-cut",
         severity: "warning",
@@ -119,8 +156,8 @@ export function checkZones(r: Resolved, wireless: WirelessPlaced[], grade: Grade
         why: "The keypad's display is cut off after its label length; give the zone a shorter keypad label that still says where it is.",
         target,
       });
-    zones.push({
-      number: zones.length + 1,
+    const fig: ZoneFigures = {
+      number,
       detectorId: src.detectorId,
       label,
       keypadLabel: shown.text,
@@ -137,8 +174,25 @@ export function checkZones(r: Resolved, wireless: WirelessPlaced[], grade: Grade
       boardKey: src.boardKey,
       input: src.input,
       wireless: src.wireless,
-    });
+    };
+    return { fig, findings: out, cutUnprogrammed: shown.cut && !p ? label : null };
+  };
+  const take = (e: ZoneEntry) => {
+    const number = zones.length + 1;
+    if (e.fig.number !== number) e.fig = renumbered(e.fig, number);
+    zones.push(e.fig);
+    for (const f of e.findings) out.push(f);
+    if (e.cutUnprogrammed !== null) cutUnprogrammed.push(e.cutUnprogrammed);
+  };
+  const entries = new Map<ResolvedInput, ZoneEntry[]>();
+  for (const ri of r.inputs) {
+    let list = memo.reuse ? memo.entries.get(ri) : undefined;
+    if (!list) list = zoneSources(ri).map((src) => zoneOf(src, 0));
+    entries.set(ri, list);
+    for (const e of list) take(e);
   }
+  memo.entries = entries;
+  for (const src of wirelessSources(wireless)) take(zoneOf(src, 0));
   if (cutUnprogrammed.length)
     out.push({
       code: "keypad-labels-cut",
@@ -147,8 +201,8 @@ export function checkZones(r: Resolved, wireless: WirelessPlaced[], grade: Grade
       why: "Zones not yet programmed take the detector's label; give each a keypad label short enough to read whole.",
       target: { kind: "layout" },
     });
-  const zoned = new Set(sources.map((s) => s.detectorId));
-  const stray = parts.zones.filter((z) => !zoned.has(z.detectorId)).length;
+  const zoned = parts.zones.length ? new Set(zones.map((z) => z.detectorId)) : null;
+  const stray = zoned ? parts.zones.filter((z) => !zoned.has(z.detectorId)).length : 0;
   if (stray)
     out.push({ code: "zone-not-placed", severity: "note", message: `${plural(stray, "zone")} ${pluralWord(stray, "is", "are")} programmed for ${pluralWord(stray, "a detector", "detectors")} on no input or receiver`, why: "Their programming is kept and used once the detectors are placed.", target: { kind: "layout" } });
   const areas: AreaFigures[] = parts.areas.map((a) => ({ key: a.key, name: a.name, zones: zones.filter((z) => z.areaKey === a.key).length, keypadKeys: a.keypadKeys ?? [] }));
