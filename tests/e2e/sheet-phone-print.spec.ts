@@ -115,6 +115,8 @@ async function checkPrint(page: Page, t: Target, paperSize: "A4" | "LETTER") {
   const { sheet } = await ok<SheetJson>(await page.request.get(`/api/layouts/${t.layoutId}/sheet`), "sheet");
   const heading = (b: SheetJson["sheet"]["boards"][number]) => `${b.name} — ${b.deviceName}`;
   await page.goto(`/sites/${t.siteId}/layouts/${t.layoutId}/sheet`);
+  // the page streams in behind its loading skeleton: wait for the sheet itself before touching its toolbar
+  await expect(page.getByTestId("terminal-sheet")).toBeVisible({ timeout: 30_000 });
   // the organisation's default paper first (the demo organisation's is A4), then the other from the toolbar
   if (paperSize !== "A4") await page.getByTestId("sheet-toolbar").locator("input[name=paper]").nth(1).check({ force: true });
   await expect(page.getByTestId("terminal-sheet")).toHaveAttribute("data-paper", paperSize);
