@@ -2,10 +2,9 @@ import { record } from "@/bench/figures";
 import { shippedCatalog } from "@/lib/catalog/shipped";
 import { saveLayoutSchema } from "@/lib/layout/layout-request-schema";
 import { summarizeSolve } from "@/lib/layout/layout-summary";
-import type { Schedule } from "@/lib/schedule/schema";
 import { solveLayout } from "@/lib/solver";
 import { solveLayoutKept } from "@/lib/server/solver-cache";
-import { largeLayoutDocument } from "@/tests/api-registry/large-layout";
+import { largeLayoutDocument, largeSchedule } from "@/tests/api-registry/large-layout";
 
 // Where one 500-detector save spends its CPU before the database sees it: the body's JSON parse, the
 // request schema, the server's solve and summary, and the JSON the revision row stores. Same layout as the
@@ -14,7 +13,6 @@ import { largeLayoutDocument } from "@/tests/api-registry/large-layout";
 
 const DETECTORS = 500;
 const RUNS = 30;
-const detectorTypes = ["contact-door-surface", "motion-wall", "contact-window-surface", "motion-ceiling"];
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b);
@@ -29,16 +27,7 @@ function timeIt<T>(fn: () => T): { ms: number; value: T } {
 
 export async function run(): Promise<void> {
   const { catalog } = shippedCatalog();
-  const schedule: Schedule = Array.from({ length: DETECTORS }, (_, i) => ({
-    id: `d${i + 1}`,
-    label: `Detector ${i + 1}`,
-    catalogId: detectorTypes[i % detectorTypes.length],
-    area: `Floor ${1 + Math.floor(i / 100)}`,
-    room: `Room ${1 + (i % 20)}`,
-    cableM: 10 + (i % 40),
-    gauge: { awg: 22 },
-    supervision: "single-eol",
-  }));
+  const schedule = largeSchedule(DETECTORS);
   const body = JSON.stringify({ version: 1, document: largeLayoutDocument(schedule.map((d) => d.id)) });
   const steps: Record<string, number[]> = { "JSON.parse of the body": [], "request schema (zod)": [], "solve (solveLayout)": [], "summary of the solve": [], "JSON.stringify of document and summary": [] };
   for (let i = 0; i < RUNS + 3; i++) {

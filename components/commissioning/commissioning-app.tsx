@@ -1,6 +1,6 @@
 "use client";
 
-import { Caution } from "@/components/ui/caution";
+import { LifeSafetyCaution } from "@/components/ui/life-safety-caution";
 import { useCallback } from "react";
 import type { UsualValue } from "@/lib/commissioning/diagnose";
 import { useCommissioning } from "@/lib/client/use-commissioning";
@@ -53,9 +53,9 @@ export function CommissioningApp({ siteId, layoutId, initial, sheet, usualValues
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-4 text-base" data-testid="commissioning">
       {sheet.caution ? (
-        <Caution testId="life-safety-caution" summary={<><strong className="text-warn">Life safety:</strong> an aid, not an approval; the local fire code and the authority having jurisdiction decide.</>}>
+        <LifeSafetyCaution>
           {sheet.caution}
-        </Caution>
+        </LifeSafetyCaution>
       ) : null}
 
       <ProgressSummary revision={revision} progress={progress} queue={queue} />

@@ -1,6 +1,6 @@
 "use client";
 
-import { Caution } from "@/components/ui/caution";
+import { LifeSafetyCaution } from "@/components/ui/life-safety-caution";
 import type { ComparePage } from "@/lib/server/compare";
 import { Card } from "@/components/ui/card";
 import { ChooseForm } from "@/components/compare/choose-form";
@@ -43,10 +43,10 @@ export function CompareView({ site, layouts, selected, comparison, error, choice
           </div>
 
           {comparison.comparison.lifeSafety ? (
-            <Caution testId="life-safety-caution" summary={<><strong className="text-warn">Life safety:</strong> an aid, not an approval; the local fire code and the authority having jurisdiction decide.</>}>
+            <LifeSafetyCaution>
               These layouts carry smoke, heat or other life-safety devices. Their design and standby battery sizing must follow the local fire code and the authority having
               jurisdiction, and be installed and certified by licensed people. Loopwright&apos;s figures are an aid, not an approval.
-            </Caution>
+            </LifeSafetyCaution>
           ) : null}
 
           <ChooseForm siteId={siteId} columns={cols} comparedIds={comparison.layouts.map((l) => l.id)} canChoose={canChoose} choices={choices} />

@@ -1,6 +1,6 @@
 "use client";
 
-import { Caution } from "@/components/ui/caution";
+import { LifeSafetyCaution } from "@/components/ui/life-safety-caution";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -186,10 +186,10 @@ export function ReviewPanel({ initial, summary, boards, canComment, lifeSafety }
           </Card>
         ) : null}
         {lifeSafety ? (
-          <Caution testId="life-safety-caution" summary={<><strong className="text-warn">Life safety:</strong> an aid, not an approval; the local fire code and the authority having jurisdiction decide.</>}>
+          <LifeSafetyCaution>
             This layout has smoke, heat or other life-safety devices. Their design must follow the local fire code and the authority having jurisdiction, and be installed and
             certified by licensed people. Approval here is a design review step: Loopwright&apos;s figures are an aid, not an approval.
-          </Caution>
+          </LifeSafetyCaution>
         ) : null}
       </div>
 

@@ -11,7 +11,7 @@ import { SheetBoardPrint, densePrint } from "@/components/sheet/sheet-board-prin
 import { SheetPrintStyle } from "@/components/sheet/sheet-print-style";
 import { SheetToolbar } from "@/components/sheet/sheet-toolbar";
 import { plural } from "@/lib/vocabulary/plural";
-import { Caution } from "@/components/ui/caution";
+import { LifeSafetyCaution } from "@/components/ui/life-safety-caution";
 
 export interface TerminalSheetViewProps {
   view: SheetView;
@@ -52,9 +52,9 @@ export function TerminalSheetView({ view, installer, canSend, sendRefusal, defau
         )}
         {sheet.caution ? (
           <>
-            <Caution testId="life-safety-caution" className="mt-2 print:hidden" summary={<><strong className="text-warn">Life safety:</strong> an aid, not an approval; the local fire code and the authority having jurisdiction decide.</>}>
+            <LifeSafetyCaution className="mt-2 print:hidden">
               {sheet.caution}
-            </Caution>
+            </LifeSafetyCaution>
             {/* on paper the caution is printed in full: a closed line cannot be opened there */}
             <p className="mt-2 hidden rounded-md border border-warn px-3 py-2 print:block" data-testid="printed-caution">
               <strong className="text-warn">Caution.</strong> {sheet.caution}

@@ -2,7 +2,7 @@ import Link from "next/link";
 import type { ZoneListView as View } from "@/lib/server/sheets";
 import { zoneListLengthNote } from "@/lib/sheet/zone-list-words";
 import { plural } from "@/lib/vocabulary/plural";
-import { Caution } from "@/components/ui/caution";
+import { LifeSafetyCaution } from "@/components/ui/life-safety-caution";
 import { ZoneListTable } from "@/components/zone-list/zone-list-table";
 
 /** The zone list for programming on screen, with its PDF and CSV downloads. */
@@ -40,9 +40,9 @@ export function ZoneListView({ view }: { view: View }) {
           </p>
         )}
         {view.caution ? (
-          <Caution className="mt-2" summary={<><strong className="text-warn">Life safety:</strong> an aid, not an approval; the local fire code and the authority having jurisdiction decide.</>}>
+          <LifeSafetyCaution className="mt-2">
             {view.caution}
-          </Caution>
+          </LifeSafetyCaution>
         ) : null}
         <p className="mt-2 text-xs text-slate-700" data-testid="zone-label-note">
           {zoneListLengthNote(list, "struck through")}

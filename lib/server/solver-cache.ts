@@ -34,7 +34,7 @@ export function solveLayoutKept(layoutId: number, doc: LayoutDocument, schedule:
   return entry.solver.solve(doc);
 }
 
-/** How many layouts have a kept solver, and what the last solve of one reused (for tests and the bench). */
+/** How many layouts have a kept solver, and what the last solve of one reused (for tests). */
 export function keptSolvers(): { count: number; statsOf: (layoutId: number) => ReturnType<Solver["stats"]> | null } {
   return { count: solvers.size, statsOf: (layoutId) => solvers.get(layoutId)?.solver.stats() ?? null };
 }

@@ -84,8 +84,8 @@ export interface SupplyFigures {
   powers: string[];
 }
 
-export interface DetectorVoltage {
-  detectorId: string;
+/** The voltage left at a powered device after the drop on its cable: a detector, a sounder or a strobe. */
+export interface CableDropFigures {
   supplyKey: string;
   supplyVolts: number;
   currentMa: number;
@@ -96,12 +96,17 @@ export interface DetectorVoltage {
   minVolts: number;
   /** At the supply's charging voltage. */
   ok: boolean;
+  /** Worst case: on battery at the end of its standby discharge. */
+  okOnBattery: boolean;
+}
+
+export interface DetectorVoltage extends CableDropFigures {
+  detectorId: string;
   /** Worst case: the supply's battery at the end of its standby discharge, less the same drop. */
   endSupplyVolts: number;
   endVolts: number;
   /** The device's own minimum (the panel's minimum device voltage is a figure for mains). */
   endMinVolts: number;
-  okOnBattery: boolean;
 }
 
 export interface LoopSummary {
@@ -200,20 +205,11 @@ export interface OutputFigures {
 }
 
 /** The voltage left at a sounder or strobe after the drop on its cable, as for a powered detector. */
-export interface OutputDeviceVoltage {
+export interface OutputDeviceVoltage extends CableDropFigures {
   deviceId: string;
   boardKey: string;
   output: number;
-  supplyKey: string;
-  supplyVolts: number;
-  currentMa: number;
-  cableOhms: number;
-  dropV: number;
-  volts: number;
-  minVolts: number;
-  ok: boolean;
   endVolts: number;
-  okOnBattery: boolean;
 }
 
 export interface ReceiverFigures {

@@ -1,4 +1,5 @@
 import type { LayoutDocument } from "@/lib/layout/schema";
+import type { Schedule } from "@/lib/schedule/schema";
 
 // A layout of any size from the shipped catalog's large family: the panel's 32 on-board inputs, then 8-input
 // expansion boards, one detector per input. For the query-count test and the load bench (a 500-detector
@@ -10,6 +11,11 @@ const detectorTypes = ["contact-door-surface", "motion-wall", "contact-window-su
 export function scheduleCsvOf(n: number): string {
   const rows = Array.from({ length: n }, (_, i) => `Detector ${i + 1},${detectorTypes[i % detectorTypes.length]},Floor ${1 + Math.floor(i / 100)},Room ${1 + (i % 20)},${10 + (i % 40)},22 AWG,single-eol`);
   return ["label,type,area,room,cable_m,gauge,supervision", ...rows].join("\n");
+}
+
+/** The same `n` detectors as a schedule (ids d1…dn), for a bench that solves without a server. */
+export function largeSchedule(n: number): Schedule {
+  return Array.from({ length: n }, (_, i) => ({ id: `d${i + 1}`, label: `Detector ${i + 1}`, catalogId: detectorTypes[i % detectorTypes.length], area: `Floor ${1 + Math.floor(i / 100)}`, room: `Room ${1 + (i % 20)}`, cableM: 10 + (i % 40), gauge: { awg: 22 }, supervision: "single-eol" }));
 }
 
 /** One detector per input: panel-large-32's own 32, then as many board-large-8 as the rest needs. */

@@ -13,7 +13,7 @@ import { CatalogBrowser } from "@/components/catalog/catalog-browser";
 import { CatalogUploadForm } from "@/components/catalog/catalog-upload";
 import { UploadVersions } from "@/components/catalog/upload-versions";
 import { makeFormat } from "@/lib/format/format";
-import { LifeSafetyCaution } from "@/components/catalog/life-safety-caution";
+import { LifeSafetyCaution } from "@/components/ui/life-safety-caution";
 import { isLifeSafetyEntry } from "@/lib/catalog/life-safety";
 import { tableStateFrom, type CatalogRow } from "@/components/catalog/catalog-table-model";
 

@@ -11,7 +11,7 @@ import { Refusal } from "@/components/ui/refusal";
 import { Card } from "@/components/ui/card";
 import { makeFormat } from "@/lib/format/format";
 import { FiguresTable, InputTypeBands, RelatedList, relatedEntries } from "@/components/catalog/entry-detail";
-import { LifeSafetyCaution, MainsCaution } from "@/components/catalog/life-safety-caution";
+import { LifeSafetyCaution, MainsCaution } from "@/components/ui/life-safety-caution";
 import { OriginBadge } from "@/components/catalog/origin-badge";
 import { isLifeSafetyEntry } from "@/lib/catalog/life-safety";
 import { orNotFound } from "@/lib/server/page-load";
