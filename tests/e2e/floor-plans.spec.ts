@@ -44,3 +44,13 @@ test("a floor plan shows its detectors by shape and text, its scale bar and its 
   const axe = await new AxeBuilder({ page }).analyze();
   expect(axe.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => v.id)).toEqual([]);
 });
+
+test("a site with no floors says a plan belongs to a floor and where to add them", async ({ page }) => {
+  const made = await page.request.post("/api/sites", { data: { name: `No floors ${Date.now()}` } });
+  expect(made.ok(), await made.text()).toBe(true);
+  const { id } = (await made.json()) as { id: number };
+  await page.goto(`/sites/${id}/plans`);
+  await expect(page.getByTestId("no-floors")).toContainText("This site has no floors yet");
+  await page.getByRole("link", { name: "Add the site's floors" }).click();
+  await expect(page).toHaveURL(new RegExp(`/sites/${id}/edit$`));
+});

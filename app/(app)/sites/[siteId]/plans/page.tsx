@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { notFound } from "next/navigation";
 import { pageActor } from "@/lib/server/session";
 import { getSite } from "@/lib/server/sites";
@@ -6,6 +7,7 @@ import { catalogFor, loadSchedule } from "@/lib/server/schedules";
 import { listPlans } from "@/lib/server/plans";
 import { loadLayoutForEditor } from "@/lib/server/layouts";
 import { idParam } from "@/lib/server/route";
+import { can } from "@/lib/auth/permissions";
 import { orNotFound } from "@/lib/server/page-load";
 import { isLifeSafety } from "@/lib/catalog/life-safety";
 import { solveLayout } from "@/lib/solver";
@@ -42,11 +44,32 @@ export default async function PlansPage({ params, searchParams }: { params: Prom
   const fireIds = new Set(catalog.detectors.filter(isLifeSafety).map((d) => d.id));
   return (
     <>
-      <PageHeader title={`Floor plans — ${site.name}`} subtitle="Each floor's drawing with the detectors placed on it: a square with its zone number, a triangle when it has errors or warnings, a hollow circle when it is on no input yet." />
+      <PageHeader
+        title={`Floor plans — ${site.name}`}
+        subtitle={
+          <>
+            Each floor&apos;s drawing with the detectors placed on it: a square with its zone number, a triangle when it has errors or warnings, a hollow circle when it is on no
+            input yet.{" "}
+            <Link href={`/sites/${site.id}`} className="text-signal underline underline-offset-2">
+              Back to the site
+            </Link>
+          </>
+        }
+      />
       {schedule.some((d) => fireIds.has(d.catalogId)) ? (
         <div className="mb-4">
           <FireCaution />
         </div>
+      ) : null}
+      {site.floors.length === 0 ? (
+        <p className="text-sm" data-testid="no-floors">
+          This site has no floors yet: a plan belongs to a floor.{" "}
+          {can(actor.role, "site:write") ? (
+            <Link href={`/sites/${site.id}/edit`} className="text-signal underline underline-offset-2">
+              Add the site&apos;s floors
+            </Link>
+          ) : null}
+        </p>
       ) : null}
       {site.floors.map((f) => {
         const plan = plans.find((p) => p.floorId === f.id);
